@@ -1,0 +1,46 @@
+// The two kinds of failure hunch reports to users. Neither ever reaches the user as a stack trace:
+// the CLI catches both and prints their message with the source position.
+
+/** A place in a user's file: 1-based line and column. */
+export interface SourcePos {
+  file: string;
+  line: number;
+  column: number;
+}
+
+/**
+ * Bad input: a file, expression or option that is invalid. Found before anything runs
+ * (exit code 2, nothing recorded).
+ */
+export class InputError extends Error {
+  constructor(
+    message: string,
+    public readonly pos?: SourcePos,
+    /** The offending text, shown under the message. */
+    public readonly snippet?: string,
+    /** The nearest valid name, when one exists. */
+    public readonly suggestion?: string,
+  ) {
+    super(message);
+    this.name = 'InputError';
+  }
+}
+
+/**
+ * A failure while evaluating one case (division by zero, a type error at run time, a bad argument).
+ * The runner attaches the bindings of the case; such a case is never counted as a pass.
+ */
+export class EvalError extends Error {
+  constructor(
+    message: string,
+    public pos?: SourcePos,
+  ) {
+    super(message);
+    this.name = 'EvalError';
+  }
+}
+
+/** Thrown by library code for a bad argument value; becomes an EvalError with a position. */
+export function fail(message: string): never {
+  throw new EvalError(message);
+}

@@ -1,0 +1,57 @@
+// permutations(n): all of S_n in lexicographic order (LIBRARY.md §1).
+
+import { fail } from '../../base/errors.js';
+import { isInt } from '../../numbers/integer.js';
+import { defineFamily } from '../registry.js';
+import type { Value } from '../../values/value.js';
+import { Permutation, inversions, lexCompare, nextPermutation } from './permutation.js';
+
+export interface SizeParam {
+  n: number;
+}
+
+/** Reads a size argument: a nonnegative integer small enough to enumerate or sample. */
+export function sizeArg(v: Value, what = 'n', max = 1_000_000): number {
+  if (!isInt(v) || typeof v === 'bigint' || v < 0) fail(`${what} must be a nonnegative integer, got ${String(v)}`);
+  if (v > max) fail(`${what} = ${v} is larger than this family supports (${max})`);
+  return v;
+}
+
+export function factorialBig(n: number): bigint {
+  let r = 1n;
+  for (let i = 2; i <= n; i++) r *= BigInt(i);
+  return r;
+}
+
+/** Simplicity order of permutations: inversions, then lexicographic (LIBRARY.md §1). */
+export function comparePermutations(u: Permutation, v: Permutation): number {
+  return u.n - v.n || inversions(u.a) - inversions(v.a) || lexCompare(u.a, v.a);
+}
+
+export const permutations = defineFamily<SizeParam, Permutation>({
+  name: 'permutations',
+  params: [{ name: 'n', type: 'integer' }],
+  objectKind: 'permutation',
+  signature: 'permutations(n: integer)',
+  description: 'every permutation of 1..n in one-line notation, in lexicographic order',
+  example: 'count(w in permutations(4))',
+  source: 'n! (OEIS A000142); Mahonian numbers by inversions (OEIS A008302)',
+  prepare(args) {
+    return { n: sizeArg(args[0]) };
+  },
+  count({ n }) {
+    return factorialBig(n);
+  },
+  enumerate({ n }, visit) {
+    const w = Permutation.identity(n);
+    w.transient = true;
+    do {
+      if (visit(w)) return true;
+    } while (nextPermutation(w.a));
+    return false;
+  },
+  isMember({ n }, obj) {
+    return obj instanceof Permutation && obj.n === n;
+  },
+  compare: comparePermutations,
+});
