@@ -5,6 +5,9 @@ import { isInt } from '../../numbers/integer.js';
 import { defineFamily } from '../registry.js';
 import type { Value } from '../../values/value.js';
 import { Permutation, inversions, lexCompare, nextPermutation } from './permutation.js';
+import { FamilyArbitrary, fisherYates } from '../common/arbitrary.js';
+import type { Family, Shrunk } from '../family.js';
+import { deleteEntry } from './standardise.js';
 
 export interface SizeParam {
   n: number;
@@ -28,7 +31,7 @@ export function comparePermutations(u: Permutation, v: Permutation): number {
   return u.n - v.n || inversions(u.a) - inversions(v.a) || lexCompare(u.a, v.a);
 }
 
-export const permutations = defineFamily<SizeParam, Permutation>({
+export const permutations: Family<SizeParam, Permutation> = defineFamily<SizeParam, Permutation>({
   name: 'permutations',
   params: [{ name: 'n', type: 'integer' }],
   objectKind: 'permutation',
@@ -54,4 +57,37 @@ export const permutations = defineFamily<SizeParam, Permutation>({
     return obj instanceof Permutation && obj.n === n;
   },
   compare: comparePermutations,
+  arbitrary(p) {
+    return new FamilyArbitrary(permutations, p, (rng) => new Permutation(fisherYates(rng, p.n)));
+  },
+  shrink(p, w) {
+    return shrinkPermutation(p.n, w);
+  },
 });
+
+/**
+ * Shrink steps of permutations(n) (LIBRARY.md §1): delete an entry and standardise (to S_{n-1}),
+ * then swap an adjacent descent (one inversion fewer). Distinct results only.
+ */
+export function* shrinkPermutation(n: number, w: Permutation): Generator<Shrunk<SizeParam, Permutation>> {
+  const a = w.a;
+  if (n > 0) {
+    const seen = new Set<string>();
+    const smaller = { n: n - 1 };
+    for (let i = 0; i < n; i++) {
+      const b = deleteEntry(a, i);
+      const k = b.join(',');
+      if (seen.has(k)) continue;
+      seen.add(k);
+      yield { params: smaller, size: n - 1, obj: new Permutation(b) };
+    }
+  }
+  for (let i = 0; i + 1 < n; i++) {
+    if (a[i] > a[i + 1]) {
+      const b = a.slice();
+      b[i] = a[i + 1];
+      b[i + 1] = a[i];
+      yield { params: { n }, obj: new Permutation(b) };
+    }
+  }
+}

@@ -1,0 +1,113 @@
+// Symmetry for free: the coarsest partition of the states that is equitable in both directions,
+// i.e. for blocks B, B' the sums  sum_{t in B'} P(s, t)  (s in B)  and  sum_{s in B'} P(s, t)
+// (t in B) do not depend on the chosen s or t. Then the chain is lumpable (Kemeny and Snell,
+// Finite Markov Chains, 1960, Theorem 6.3.2), and if rho is the stationary measure of the lumped
+// chain, pi(s) = rho(B)/|B| is stationary for the original one:
+//   sum_s pi(s) P(s,t) = sum_B' rho(B')/|B'| c(B,B') = (1/|B|) sum_B' rho(B') r(B',B) = rho(B)/|B|,
+// using |B| c(B,B') = |B'| r(B',B) (both count the weight between B' and B). Chains on
+// combinatorial objects usually commute with a symmetry group (rotations and reflections of a
+// circle), whose orbits refine this partition, so the linear system shrinks by about the group's
+// order.
+//
+// The partition is found by colour refinement, comparing the sums through their residues modulo
+// two primes (with pseudo-random weights per colour, so a whole profile is one number). Equal
+// profiles always get equal fingerprints, so every split is genuine; a false merge has chance
+// about 2^-40 and is caught by the exact verification of the final measure, after which the
+// caller solves without lumping.
+
+import { mulMod } from './modular.js';
+import { transitionResidues } from './residues.js';
+import { buildChain, type SparseChain } from './sparseChain.js';
+import { sadd } from '../../numbers/scalar.js';
+import type { Scalar } from '../../numbers/rational.js';
+
+const Q1 = 8388593; // primes below 2^23
+const Q2 = 8388587;
+
+export interface Partition {
+  /** block[s] = the block of state s, blocks numbered 0..count-1 by their smallest state. */
+  block: Int32Array;
+  count: number;
+}
+
+/** A deterministic pseudo-random residue for colour c (a multiplicative hash, no floats). */
+function colourWeight(c: number, salt: number, q: number): number {
+  let h = Math.imul(c + 1, 0x9e3779b1) ^ Math.imul(salt, 0x85ebca6b);
+  h = Math.imul(h ^ (h >>> 15), 0x2c1b3c6d);
+  h ^= h >>> 12;
+  return (h >>> 0) % (q - 1) + 1;
+}
+
+export function equitablePartition(c: SparseChain): Partition | null {
+  const n = c.size;
+  const r1 = transitionResidues(c, Q1), r2 = transitionResidues(c, Q2);
+  if (!r1 || !r2) return null;
+  // Incoming edges (transpose).
+  const inStart = new Int32Array(n + 1);
+  for (let k = 0; k < c.target.length; k++) inStart[c.target[k] + 1]++;
+  for (let t = 0; t < n; t++) inStart[t + 1] += inStart[t];
+  const inSource = new Int32Array(c.target.length), inEdge = new Int32Array(c.target.length);
+  const fillPos = inStart.slice(0, n);
+  for (let s = 0; s < n; s++) {
+    for (let k = c.rowStart[s]; k < c.rowStart[s + 1]; k++) {
+      const t = c.target[k];
+      inSource[fillPos[t]] = s;
+      inEdge[fillPos[t]++] = k;
+    }
+  }
+  let colour = new Int32Array(n);
+  let count = 1;
+  for (let round = 0; ; round++) {
+    const w1 = new Float64Array(count), w2 = new Float64Array(count), w3 = new Float64Array(count), w4 = new Float64Array(count);
+    for (let k = 0; k < count; k++) {
+      w1[k] = colourWeight(k, 4 * round + 1, Q1);
+      w2[k] = colourWeight(k, 4 * round + 2, Q2);
+      w3[k] = colourWeight(k, 4 * round + 3, Q1);
+      w4[k] = colourWeight(k, 4 * round + 4, Q2);
+    }
+    const ids = new Map<string, number>();
+    const next = new Int32Array(n);
+    for (let s = 0; s < n; s++) {
+      let o1 = 0, o2 = 0, i1 = 0, i2 = 0;
+      for (let k = c.rowStart[s]; k < c.rowStart[s + 1]; k++) {
+        const col = colour[c.target[k]];
+        o1 = (o1 + mulMod(r1[k], w1[col], Q1)) % Q1;
+        o2 = (o2 + mulMod(r2[k], w2[col], Q2)) % Q2;
+      }
+      for (let e = inStart[s]; e < inStart[s + 1]; e++) {
+        const col = colour[inSource[e]];
+        const k = inEdge[e];
+        i1 = (i1 + mulMod(r1[k], w3[col], Q1)) % Q1;
+        i2 = (i2 + mulMod(r2[k], w4[col], Q2)) % Q2;
+      }
+      const key = `${colour[s]} ${o1} ${o2} ${i1} ${i2}`;
+      let id = ids.get(key);
+      if (id === undefined) ids.set(key, (id = ids.size));
+      next[s] = id;
+    }
+    colour = next;
+    if (ids.size === count) break;
+    count = ids.size;
+  }
+  return { block: colour, count };
+}
+
+/**
+ * The lumped chain on the blocks: from block B, the weight to block B' is the sum of w(s, t)
+ * over t in B' for the first state s of B, out of the same total as s.
+ */
+export function lumpedChain(c: SparseChain, part: Partition): SparseChain {
+  const rep = new Int32Array(part.count).fill(-1);
+  for (let s = 0; s < c.size; s++) if (rep[part.block[s]] < 0) rep[part.block[s]] = s;
+  const chain = buildChain(part.count, (b) => {
+    const s = rep[b];
+    const sums = new Map<number, Scalar>();
+    for (let k = c.rowStart[s]; k < c.rowStart[s + 1]; k++) {
+      const t = part.block[c.target[k]];
+      const old = sums.get(t);
+      sums.set(t, old === undefined ? c.weight[k] : sadd(old, c.weight[k]));
+    }
+    return sums.entries();
+  });
+  return chain;
+}

@@ -1,0 +1,168 @@
+// Structural operations on polynomials beyond the ring operations: reading coefficients and
+// terms, degrees, simultaneous substitution, renaming variables, univariate coefficient lists.
+
+import { fail } from '../base/errors.js';
+import type { Scalar } from '../numbers/rational.js';
+import { sisZero } from '../numbers/scalar.js';
+import {
+  fromCollector, fromTerms, isPolynomial, makePolynomial, padd, pmul, polyText, ppow, type PolyLike,
+} from './polynomial.js';
+import { mulScalars, TermCollector } from './terms.js';
+import { varName } from './variables.js';
+
+/** The single variable id of p when p is exactly one indeterminate (coefficient 1, power 1). */
+export function asVariable(p: PolyLike): number | undefined {
+  if (!isPolynomial(p) || p.nv !== 1 || p.length !== 1 || p.coefs[0] !== 1 || p.exps[0] !== 1) return undefined;
+  return p.vars[0];
+}
+
+/** Exponents of the single term of a monomial (coefficient 1), by variable id. */
+export function asMonomial(m: PolyLike): Map<number, number> | undefined {
+  if (!isPolynomial(m)) return m === 1 ? new Map() : undefined;
+  if (m.length !== 1 || m.coefs[0] !== 1) return undefined;
+  const out = new Map<number, number>();
+  for (let v = 0; v < m.nv; v++) out.set(m.vars[v], m.exps[v]);
+  return out;
+}
+
+/** The coefficient of a monomial (exponents by variable id) in p: exact, a number. */
+export function coefficientOf(p: PolyLike, mono: Map<number, number>): Scalar {
+  if (!isPolynomial(p)) return mono.size === 0 ? p : 0;
+  for (const id of mono.keys()) if (!p.vars.includes(id)) return 0;
+  const nv = p.nv;
+  const want = Array.from(p.vars, (id) => mono.get(id) ?? 0);
+  for (let t = 0; t < p.length; t++) {
+    let ok = true;
+    for (let v = 0; v < nv; v++) if (p.exps[t * nv + v] !== want[v]) { ok = false; break; }
+    if (ok) return p.coefs[t];
+  }
+  return 0;
+}
+
+/** The terms of p in print order, each as coefficient times monomial (a constant as a number). */
+export function termsOf(p: PolyLike): PolyLike[] {
+  if (!isPolynomial(p)) return sisZero(p) ? [] : [p];
+  const out: PolyLike[] = [];
+  for (let t = 0; t < p.length; t++)
+    out.push(makePolynomial(p.vars, p.exps.slice(t * p.nv, (t + 1) * p.nv), [p.coefs[t]]));
+  return out;
+}
+
+/** The nonzero coefficients of p in print order (descending degree, then lexicographic). */
+export function coefficientsOf(p: PolyLike): Scalar[] {
+  if (!isPolynomial(p)) return sisZero(p) ? [] : [p];
+  return p.coefs.slice();
+}
+
+/** Total degree; fails for the zero polynomial. */
+export function totalDegree(p: PolyLike): number {
+  if (!isPolynomial(p)) {
+    if (sisZero(p)) fail('the zero polynomial has no degree');
+    return 0;
+  }
+  return p.termDegree(0); // terms are sorted by total degree, highest first
+}
+
+/** Degree in one variable; fails for the zero polynomial. */
+export function degreeIn(p: PolyLike, id: number): number {
+  if (!isPolynomial(p)) {
+    if (sisZero(p)) fail('the zero polynomial has no degree');
+    return 0;
+  }
+  const v = p.vars.indexOf(id);
+  if (v < 0) return 0;
+  let d = 0;
+  for (let t = 0; t < p.length; t++) d = Math.max(d, p.exps[t * p.nv + v]);
+  return d;
+}
+
+/**
+ * Substitute values for variables simultaneously: every variable id in `values` is replaced by
+ * its value (a number or a polynomial); the others stay.
+ */
+export function substitute(p: PolyLike, values: Map<number, PolyLike>): PolyLike {
+  if (!isPolynomial(p)) return p;
+  const nv = p.nv;
+  const target = Array.from(p.vars, (id) => values.get(id));
+  if (target.every((t) => t === undefined)) return p;
+  if (target.every((t) => t === undefined || !isPolynomial(t))) {
+    // All substituted values are numbers: the remaining monomials keep their exponent rows.
+    const c = new TermCollector(nv, p.maxExps(), p.length);
+    const row = new Int32Array(nv);
+    const powCache = target.map(() => new Map<number, Scalar>());
+    for (let t = 0; t < p.length; t++) {
+      let coef: Scalar = p.coefs[t];
+      for (let v = 0; v < nv; v++) {
+        const e = p.exps[t * nv + v];
+        const val = target[v] as Scalar | undefined;
+        if (val === undefined) row[v] = e;
+        else {
+          row[v] = 0;
+          if (e > 0) {
+            let pw = powCache[v].get(e);
+            if (pw === undefined) powCache[v].set(e, (pw = ppow(val, e) as Scalar));
+            coef = mulScalars(coef, pw);
+          }
+        }
+      }
+      c.add(row, 0, coef);
+    }
+    return fromCollector(p.vars, c);
+  }
+  let sum: PolyLike = 0;
+  const powers = target.map(() => new Map<number, PolyLike>());
+  for (let t = 0; t < p.length; t++) {
+    let term: PolyLike = p.coefs[t];
+    const keep = new Int32Array(nv);
+    for (let v = 0; v < nv; v++) {
+      const e = p.exps[t * nv + v];
+      const val = target[v];
+      if (val === undefined) keep[v] = e;
+      else if (e > 0) {
+        let pw = powers[v].get(e);
+        if (pw === undefined) powers[v].set(e, (pw = ppow(val, e)));
+        term = pmul(term, pw);
+      }
+    }
+    term = pmul(term, makePolynomial(p.vars, keep, [1]));
+    sum = padd(sum, term);
+  }
+  return sum;
+}
+
+/** Rename variables (a bijection on the ids it mentions, e.g. a swap), exactly. */
+export function renameVariables(p: PolyLike, rename: Map<number, number>): PolyLike {
+  if (!isPolynomial(p)) return p;
+  const newIds = Array.from(p.vars, (id) => rename.get(id) ?? id);
+  if (new Set(newIds).size !== newIds.length) fail('renaming variables must not merge two of them');
+  const nv = p.nv;
+  const terms: [Int32Array, Scalar][] = [];
+  for (let t = 0; t < p.length; t++) terms.push([p.exps.subarray(t * nv, (t + 1) * nv), p.coefs[t]]);
+  return fromTerms(newIds, terms);
+}
+
+/** Coefficients c_0, c_1, ..., c_d of a polynomial in the single variable `id` ([] for 0). */
+export function univariateCoefficients(p: PolyLike, id: number): Scalar[] {
+  if (!isPolynomial(p)) return sisZero(p) ? [] : [p];
+  const others = Array.from(p.vars).filter((v) => v !== id);
+  if (others.length > 0)
+    fail(`${polyText(p)} is not a polynomial in ${varName(id)} alone: it also contains ${others.map(varName).join(', ')}`);
+  const d = p.exps[0];
+  const out: Scalar[] = new Array(d + 1).fill(0);
+  for (let t = 0; t < p.length; t++) out[p.exps[t]] = p.coefs[t];
+  return out;
+}
+
+/** sum c_i v^i for a coefficient list (lowest degree first) and any value v, by Horner's rule. */
+export function evaluateCoefficients(c: readonly Scalar[], v: PolyLike): PolyLike {
+  const id = asVariable(v);
+  if (id !== undefined) {
+    // Directly as a univariate polynomial: no intermediate products.
+    const terms: [number[], Scalar][] = [];
+    for (let i = c.length - 1; i >= 0; i--) if (!sisZero(c[i])) terms.push([[i], c[i]]);
+    return fromTerms([id], terms);
+  }
+  let r: PolyLike = 0;
+  for (let i = c.length - 1; i >= 0; i--) r = padd(pmul(r, v), c[i]);
+  return r;
+}

@@ -1,0 +1,146 @@
+// Collecting terms of a polynomial under construction. Exponent vectors are packed into one
+// JS number whose numeric order is the monomial order (total degree first, then lexicographic
+// with the first variable most significant), so collecting is a Map on small numbers and sorting
+// is a numeric sort. When the exponents are too large to pack into 53 bits, a string key and a
+// comparator sort take over (same result, slower).
+
+import { iadd, imul } from '../numbers/integer.js';
+import { Rat, type Scalar } from '../numbers/rational.js';
+import { sadd, sisZero, smul } from '../numbers/scalar.js';
+
+function bitLength(n: number): number {
+  let b = 0;
+  while (n > 0) {
+    b++;
+    n = Math.floor(n / 2);
+  }
+  return b;
+}
+
+/** Graded lexicographic comparison of two exponent vectors: positive when (ea, ia) comes first. */
+export function compareMonomials(ea: Int32Array, ia: number, eb: Int32Array, ib: number, nv: number): number {
+  let da = 0, db = 0;
+  for (let v = 0; v < nv; v++) {
+    da += ea[ia + v];
+    db += eb[ib + v];
+  }
+  if (da !== db) return da - db;
+  for (let v = 0; v < nv; v++) {
+    const d = ea[ia + v] - eb[ib + v];
+    if (d !== 0) return d;
+  }
+  return 0;
+}
+
+/** Scalar addition with the small-integer case inline (the hot path of every operation). */
+export function addScalars(a: Scalar, b: Scalar): Scalar {
+  if (typeof a === 'number' && typeof b === 'number') {
+    const s = a + b;
+    if (Number.isSafeInteger(s)) return s === 0 ? 0 : s;
+    return iadd(a, b);
+  }
+  return sadd(a, b);
+}
+
+export function mulScalars(a: Scalar, b: Scalar): Scalar {
+  if (!(a instanceof Rat) && !(b instanceof Rat)) return imul(a, b);
+  return smul(a, b);
+}
+
+/**
+ * Terms over a fixed list of `nv` variables. `maxExp[v]` bounds the exponent of variable v in every
+ * term that will be added (used only to choose the packing).
+ */
+export class TermCollector {
+  readonly nv: number;
+  private readonly packed: boolean;
+  private readonly mult: number[] = [];
+  private readonly degMult: number = 0;
+  private readonly numIndex = new Map<number, number>();
+  private readonly strIndex = new Map<string, number>();
+  private readonly keys: number[] = [];
+  exps: Int32Array;
+  readonly coefs: Scalar[] = [];
+  count = 0;
+
+  constructor(nv: number, maxExp: ArrayLike<number>, capacity = 16) {
+    this.nv = nv;
+    let bits = 0, maxDeg = 0;
+    const widths: number[] = [];
+    for (let v = 0; v < nv; v++) {
+      const w = bitLength(maxExp[v]);
+      widths.push(w);
+      bits += w;
+      maxDeg += maxExp[v];
+    }
+    const degBits = bitLength(maxDeg);
+    this.packed = bits + degBits <= 52;
+    if (this.packed) {
+      // Last variable least significant; the total degree above all of them.
+      let m = 1;
+      for (let v = nv - 1; v >= 0; v--) {
+        this.mult[v] = m;
+        m *= 2 ** widths[v];
+      }
+      this.degMult = m;
+    }
+    this.exps = new Int32Array(Math.max(1, capacity) * Math.max(1, nv));
+  }
+
+  /** Add coef times the monomial whose exponents are src[off .. off+nv). */
+  add(src: ArrayLike<number>, off: number, coef: Scalar): void {
+    const nv = this.nv;
+    let idx: number | undefined;
+    let key = 0;
+    let skey = '';
+    if (this.packed) {
+      let deg = 0;
+      for (let v = 0; v < nv; v++) {
+        const e = src[off + v];
+        deg += e;
+        key += e * this.mult[v];
+      }
+      key += deg * this.degMult;
+      idx = this.numIndex.get(key);
+    } else {
+      for (let v = 0; v < nv; v++) skey += src[off + v] + ',';
+      idx = this.strIndex.get(skey);
+    }
+    if (idx !== undefined) {
+      this.coefs[idx] = addScalars(this.coefs[idx], coef);
+      return;
+    }
+    idx = this.count++;
+    if (this.packed) {
+      this.numIndex.set(key, idx);
+      this.keys.push(key);
+    } else this.strIndex.set(skey, idx);
+    this.coefs.push(coef);
+    if ((idx + 1) * nv > this.exps.length) {
+      const grown = new Int32Array(this.exps.length * 2 + nv);
+      grown.set(this.exps);
+      this.exps = grown;
+    }
+    const base = idx * nv;
+    for (let v = 0; v < nv; v++) this.exps[base + v] = src[off + v];
+  }
+
+  /** The nonzero terms in descending monomial order: [exps (flat), coefs]. */
+  sorted(): { exps: Int32Array; coefs: Scalar[] } {
+    const order: number[] = [];
+    for (let i = 0; i < this.count; i++) if (!sisZero(this.coefs[i])) order.push(i);
+    const nv = this.nv, ex = this.exps;
+    if (this.packed) {
+      const keys = this.keys;
+      order.sort((a, b) => keys[b] - keys[a]);
+    } else order.sort((a, b) => compareMonomials(ex, b * nv, ex, a * nv, nv));
+    const exps = new Int32Array(order.length * nv);
+    const coefs: Scalar[] = new Array(order.length);
+    for (let k = 0; k < order.length; k++) {
+      const i = order[k];
+      coefs[k] = this.coefs[i];
+      for (let v = 0; v < nv; v++) exps[k * nv + v] = ex[i * nv + v];
+    }
+    return { exps, coefs };
+  }
+}

@@ -1,0 +1,147 @@
+// hunch check [PATH...]: run the conjectures, print the report, record coverage and counterexamples.
+
+import { Worker } from 'node:worker_threads';
+import type { Command } from 'commander';
+import '../../families/index.js';
+import '../../library/index.js';
+import { prepareRun, type RunRequest } from '../../runner/session.js';
+import { agreesWithExpectation, type CheckedPiece, type ConjectureResult } from '../../runner/result.js';
+import type { WorkerMessage } from '../../runner/worker.js';
+import { formatResult, formatSummary } from '../../reports/human.js';
+import { resultDocument } from '../../reports/json.js';
+import { ProgressLine } from '../../reports/progress.js';
+import { EXIT } from '../errors.js';
+import { collect, parseCount, parseDuration, parseRangeOption } from '../options.js';
+import type { Terminal } from '../terminal.js';
+import type { AddCommand } from './index.js';
+import { checkRecorder, type CheckRecorder } from './check-records.js';
+
+interface CheckFlags {
+  sizes?: string[];
+  exhaustive: boolean;
+  sample?: string[];
+  count?: string;
+  seed?: string;
+  budget?: string;
+  workers?: string;
+  shard?: string;
+  json?: boolean;
+  ledger: string | boolean;
+  id?: string[];
+  junit?: string;
+  ascii?: boolean;
+  resume?: boolean;
+}
+
+export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
+  program
+    .command('check')
+    .description('check conjecture files: small sizes exhaustively, larger ones at random')
+    .argument('[paths...]', 'files or folders of conjectures (default: conjectures/)')
+    .option('--sizes <NAME=A..B>', "replace a range binding's exhaustive range (repeatable)", collect)
+    .option('--no-exhaustive', 'skip the exhaustive phase')
+    .option('--sample <NAME=A..B>', 'replace a sample range (repeatable)', collect)
+    .option('--count <K>', 'random cases per size (0 skips sampling)')
+    .option('--seed <S>', 'the random seed (default: fixed, so runs repeat)')
+    .option('--budget <TIME>', 'stop each conjecture after this long (30s, 5m, 2h)')
+    .option('--workers <K>', 'worker threads')
+    .option('--json', 'print the result document instead of the report')
+    .option('--ledger <PATH>', 'where coverage is recorded (default: hunch-ledger.jsonl in the project root)')
+    .option('--no-ledger', 'record nothing')
+    .option('--junit <FILE>', 'also write a JUnit XML report')
+    .option('--id <ID>', 'only the conjecture with this id (repeatable)', collect)
+    .option('--ascii', 'plain ASCII pictures')
+    .action(async (paths: string[], flags: CheckFlags) => setExit(await runCheck(paths, flags, t)));
+};
+
+function buildRequest(paths: string[], f: CheckFlags): RunRequest {
+  return {
+    paths: paths.length ? paths : ['conjectures'],
+    ids: f.id ?? null,
+    sizes: (f.sizes ?? []).map((s) => parseRangeOption(s, '--sizes')),
+    sampleRanges: (f.sample ?? []).map((s) => parseRangeOption(s, '--sample')),
+    exhaustive: f.exhaustive,
+    count: f.count === undefined ? null : parseCount(f.count, '--count'),
+    seed: f.seed ?? null,
+    budgetMs: f.budget === undefined ? null : parseDuration(f.budget),
+    regression: {},
+  };
+}
+
+export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal): Promise<number> {
+  const req = buildRequest(paths, flags);
+  if (flags.workers !== undefined) parseCount(flags.workers, '--workers');
+  // Everything is loaded and validated here first: a bad file exits 2 before anything is recorded.
+  const compiled = prepareRun(req);
+  const recorder: CheckRecorder = checkRecorder(flags.ledger, compiled);
+  req.regression = recorder.regressionCases(compiled);
+
+  const started = performance.now();
+  const style = { color: t.color, unicode: t.unicode };
+  const progress = new ProgressLine(t.err, t.errIsTTY && !flags.json);
+  const results: ConjectureResult[] = [];
+  const flag = new Int32Array(new SharedArrayBuffer(4));
+  let interrupts = 0;
+
+  const worker = new Worker(new URL('../../runner/worker.js', import.meta.url), { workerData: { request: req, flag } });
+  const onSigint = () => {
+    interrupts++;
+    Atomics.store(flag, 0, 1);
+    if (interrupts === 1) {
+      progress.clear();
+      t.err('\nStopping after the current case; finished work is kept (Ctrl-C again to stop at once).\n');
+    } else void worker.terminate();
+  };
+  process.on('SIGINT', onSigint);
+  process.on('SIGTERM', onSigint);
+
+  let crash: string | null = null;
+  await new Promise<void>((resolve) => {
+    worker.on('message', (m: WorkerMessage) => {
+      switch (m.type) {
+        case 'progress':
+          progress.update(m.done, m.total, m.label);
+          break;
+        case 'piece':
+          recorder.piece(m.id, m.piece as CheckedPiece);
+          break;
+        case 'result': {
+          const r = m.result as ConjectureResult;
+          results.push(r);
+          const replay = recorder.result(r);
+          progress.clear();
+          if (!flags.json) t.out(formatResult(r, style, replay));
+          break;
+        }
+        case 'crash':
+          crash = m.message + (process.env.HUNCH_DEBUG && m.stack ? `\n${m.stack}` : '');
+          break;
+        case 'done':
+          break;
+      }
+    });
+    worker.on('error', (e) => {
+      crash = e.message;
+    });
+    worker.on('exit', () => resolve());
+  });
+  process.off('SIGINT', onSigint);
+  process.off('SIGTERM', onSigint);
+  progress.clear();
+
+  if (crash) {
+    t.err(`${t.color.red('internal error:')} ${crash}\nThis is a bug in hunch; finished work was recorded.\n`);
+    return EXIT.invalid;
+  }
+  const interrupted = interrupts > 0;
+  if (flags.junit) recorder.junit(flags.junit, results);
+  if (flags.json) t.out(JSON.stringify(resultDocument(results), null, 2) + '\n');
+  else {
+    t.out(formatSummary(results, performance.now() - started, style));
+    if (interrupted) t.out(t.color.yellow(`Interrupted: ${compiled.length - results.length} conjecture(s) not started; what was finished is recorded.\n`));
+  }
+  if (interrupted) return EXIT.interrupted;
+  return results.every((r) => agreesWithExpectation(r) || (r.outcome === 'incomplete' && r.expect !== 'fails'))
+    ? EXIT.ok
+    : EXIT.contradicted;
+}

@@ -1,0 +1,11 @@
+// Every command of CLI.md; each module adds itself to the program.
+
+import type { Command } from 'commander';
+import type { Terminal } from '../terminal.js';
+import { addCheckCommand } from './check.js';
+import { addListCommand } from './list.js';
+
+/** Adds a command; the action reports its exit code through setExit. */
+export type AddCommand = (program: Command, t: Terminal, setExit: (code: number) => void) => void;
+
+export const commands: AddCommand[] = [addCheckCommand, addListCommand];

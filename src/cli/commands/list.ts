@@ -1,0 +1,74 @@
+// hunch list [families|functions|TOPIC]: the registry, with signatures, descriptions, examples and sources.
+
+import { InputError } from '../../base/errors.js';
+import { nearest } from '../../base/suggest.js';
+import '../../families/index.js';
+import { allFamilies } from '../../families/registry.js';
+import '../../library/index.js';
+import { allFunctions, signatureOf } from '../../library/registry.js';
+import { EXIT } from '../errors.js';
+import type { AddCommand } from './index.js';
+
+export const addListCommand: AddCommand = (program, t, setExit) => {
+  program
+    .command('list')
+    .description('list the built-in families and functions with their signatures and sources')
+    .argument('[what]', 'families, functions, a topic (permutations, polynomials, ...) or a name')
+    .option('--json', 'as JSON')
+    .action((what: string | undefined, flags: { json?: boolean }) => {
+      const fams = allFamilies();
+      const fns = allFunctions();
+      const topics = [...new Set(fns.map((f) => f.topic))].sort();
+      let showF = true, showFn = true;
+      let fnFilter = (_: (typeof fns)[number]) => true;
+      let famFilter = (_: (typeof fams)[number]) => true;
+      if (what === 'families') showFn = false;
+      else if (what === 'functions') showF = false;
+      else if (what) {
+        if (topics.includes(what)) {
+          showF = false;
+          fnFilter = (f) => f.topic === what;
+        } else if (fns.some((f) => f.name === what) || fams.some((f) => f.name === what)) {
+          fnFilter = (f) => f.name === what;
+          famFilter = (f) => f.name === what;
+        } else {
+          const s = nearest(what, ['families', 'functions', ...topics, ...fns.map((f) => f.name), ...fams.map((f) => f.name)]);
+          throw new InputError(`nothing is listed under "${what}"${s ? `; did you mean ${s}?` : ''} (topics: ${topics.join(', ')})`, undefined, what, s);
+        }
+      }
+      const selF = showF ? fams.filter(famFilter) : [];
+      const selFn = showFn ? fns.filter(fnFilter) : [];
+      if (flags.json) {
+        t.out(
+          JSON.stringify(
+            {
+              families: selF.map((f) => ({ name: f.name, signature: f.signature, description: f.description, example: f.example, source: f.source, sampler: Boolean(f.arbitrary) })),
+              functions: selFn.map((f) => ({ name: f.name, topic: f.topic, signature: signatureOf(f), description: f.description, example: f.example, value: f.exampleValue, source: f.source })),
+            },
+            null,
+            2,
+          ) + '\n',
+        );
+        setExit(EXIT.ok);
+        return;
+      }
+      const c = t.color;
+      if (selF.length) {
+        t.out(c.bold('Families') + '\n');
+        for (const f of selF) {
+          t.out(`  ${c.cyan(f.signature)}${f.arbitrary ? '' : c.dim('  (no random sampler yet)')}\n    ${f.description}\n    example: ${f.example}\n    source: ${c.dim(f.source)}\n`);
+        }
+      }
+      if (selFn.length) {
+        let topic = '';
+        for (const f of [...selFn].sort((a, b) => a.topic.localeCompare(b.topic) || a.name.localeCompare(b.name))) {
+          if (f.topic !== topic) {
+            topic = f.topic;
+            t.out(`\n${c.bold(`Functions: ${topic}`)}\n`);
+          }
+          t.out(`  ${c.cyan(signatureOf(f))}\n    ${f.description}\n    example: ${f.example}  ${c.dim('=')} ${f.exampleValue}\n    source: ${c.dim(f.source)}\n`);
+        }
+      }
+      setExit(EXIT.ok);
+    });
+};

@@ -1,0 +1,40 @@
+// How a user sees a problem: one clear message with file:line:column, the offending text and the
+// nearest valid name — never a stack trace.
+
+import { EvalError, InputError } from '../base/errors.js';
+import type { ErrorInfo } from '../runner/result.js';
+import type { Terminal } from './terminal.js';
+
+/** Exit codes of CLI.md. */
+export const EXIT = { ok: 0, contradicted: 1, invalid: 2, interrupted: 3 } as const;
+
+export function formatLocated(
+  t: Terminal,
+  message: string,
+  pos: { file: string | null; line: number | null; column: number | null } | undefined,
+  snippet?: string,
+): string {
+  const where = pos?.file ? `${pos.file}${pos.line ? `:${pos.line}` : ''}${pos.column ? `:${pos.column}` : ''}: ` : '';
+  let s = `${t.color.bold(where)}${t.color.red('error:')} ${message}\n`;
+  if (snippet && !message.includes(snippet)) s += `    ${snippet}\n`;
+  return s;
+}
+
+export function formatError(t: Terminal, e: unknown): string {
+  if (e instanceof InputError) return formatLocated(t, e.message, e.pos ? e.pos : undefined, e.snippet);
+  if (e instanceof EvalError) return formatLocated(t, e.message, e.pos);
+  const msg = e instanceof Error ? e.message : String(e);
+  const debug = process.env.HUNCH_DEBUG && e instanceof Error ? `\n${e.stack}` : '';
+  return `${t.color.red('internal error:')} ${msg}\nThis is a bug in hunch, not in your file; please report it with the command you ran (HUNCH_DEBUG=1 shows details).${debug}\n`;
+}
+
+export function formatErrorInfo(t: Terminal, e: ErrorInfo): string {
+  return formatLocated(t, e.message, e, e.snippet);
+}
+
+/** Thrown by commands to end with an exit code after printing what they had to say. */
+export class ExitRequest extends Error {
+  constructor(readonly code: number) {
+    super(`exit ${code}`);
+  }
+}

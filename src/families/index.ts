@@ -1,0 +1,19 @@
+// Registers every family: importing a family's module defines it. A new family is added here.
+import './permutations/permutations.js';
+import './permutations/avoiders.js';
+import './permutations/involutions.js';
+import './permutations/derangements.js';
+import './partitions/partitions.js';
+import './compositions/compositions.js';
+import './subsets/subsets.js';
+import './words/words.js';
+import './matchings/matchings.js';
+import './matchings/noncrossingMatchings.js';
+import './setPartitions/setPartitions.js';
+import './dyckPaths/dyckPaths.js';
+import './tableaux/standardTableaux.js';
+import './tableaux/semistandardTableaux.js';
+import './asms/asms.js';
+import './reducedWords/reducedWords.js';
+import './pipeDreams/pipeDreams.js';
+import './partialPermutations/partialPermutations.js';

@@ -1,0 +1,26 @@
+// Deleting entries of a one-line notation and standardising (relabelling the remaining values
+// 1..m in the same relative order): the size-reducing shrink steps of permutation families.
+
+/** w with the entry at 0-based position i deleted and the rest standardised. */
+export function deleteEntry(a: readonly number[], i: number): number[] {
+  const v = a[i];
+  const out = new Array<number>(a.length - 1);
+  for (let j = 0, k = 0; j < a.length; j++) {
+    if (j === i) continue;
+    const x = a[j];
+    out[k++] = x > v ? x - 1 : x;
+  }
+  return out;
+}
+
+/** w with the entries at the 0-based positions i < j deleted and the rest standardised. */
+export function deleteTwoEntries(a: readonly number[], i: number, j: number): number[] {
+  const u = Math.min(a[i], a[j]), v = Math.max(a[i], a[j]);
+  const out: number[] = [];
+  for (let k = 0; k < a.length; k++) {
+    if (k === i || k === j) continue;
+    const x = a[k];
+    out.push(x - (x > u ? 1 : 0) - (x > v ? 1 : 0));
+  }
+  return out;
+}

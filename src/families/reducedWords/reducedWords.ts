@@ -1,0 +1,104 @@
+// reducedWords(w): every reduced word of w, in lexicographic order (LIBRARY.md §1). The objects are
+// words (kind 'word'). Counted by recursion on left descents; for the longest element of S_n the
+// count is Stanley's binom(n,2)! / prod (2i-1)^(n-i) (OEIS A005118).
+
+import { defineFamily } from '../registry.js';
+import type { Shrunk } from '../family.js';
+import { lexCompare } from '../permutations/permutation.js';
+import { Word } from '../words/word.js';
+import { exactArbitrary, uniformBelow, type Rng } from '../partitions/exactArbitrary.js';
+import { inversions } from '../permutations/permutation.js';
+import { isReducedWordOf, leftDescents, leftMultiply, permutationArg, reducedWordCount } from './reducedWordCounts.js';
+
+export interface PermParam {
+  w: number[];
+  length: number;
+}
+
+export function compareReducedWords(a: Word, b: Word): number {
+  return a.letters.length - b.letters.length || lexCompare(a.letters, b.letters);
+}
+
+/** Exactly uniform: the first letter i is drawn with probability R(s_i w) / R(w). */
+export function randomReducedWord(w: readonly number[], rng: Rng): Word {
+  const letters: number[] = [];
+  let v = w.slice();
+  while (inversions(v) > 0) {
+    let z = uniformBelow(rng, reducedWordCount(v));
+    for (const i of leftDescents(v)) {
+      const u = leftMultiply(v, i);
+      z -= reducedWordCount(u);
+      if (z < 0n) {
+        letters.push(i);
+        v = u;
+        break;
+      }
+    }
+  }
+  return new Word(letters);
+}
+
+/** Lexicographically smaller reduced words of the same w: commutations b a -> a b, braids (a+1) a (a+1) -> a (a+1) a. */
+function* simplify(word: Word): Generator<Word> {
+  const s = word.letters;
+  for (let k = 0; k + 1 < s.length; k++) {
+    if (s[k] > s[k + 1] + 1) {
+      const t = s.slice();
+      t[k] = s[k + 1];
+      t[k + 1] = s[k];
+      yield new Word(t);
+    }
+  }
+  for (let k = 0; k + 2 < s.length; k++) {
+    if (s[k] === s[k + 2] && s[k + 1] === s[k] - 1) {
+      const t = s.slice();
+      t[k] = t[k + 2] = s[k + 1];
+      t[k + 1] = s[k];
+      yield new Word(t);
+    }
+  }
+}
+
+export const reducedWords = defineFamily<PermParam, Word>({
+  name: 'reducedWords',
+  params: [{ name: 'w', type: 'any' }],
+  objectKind: 'word',
+  signature: 'reducedWords(w: permutation)',
+  description: 'every reduced word a_1 ... a_l of w (w = s_{a_1} * ... * s_{a_l}, l = inv(w)), lexicographically',
+  example: 'count(r in reducedWords(perm([3, 2, 1])))',
+  source: 'OEIS A005118 for the longest element (Stanley, European J. Combin. 5 (1984))',
+  prepare(args) {
+    const w = permutationArg(args[0]).slice();
+    return { w, length: inversions(w) };
+  },
+  count({ w }) {
+    return reducedWordCount(w);
+  },
+  enumerate({ w, length }, visit) {
+    const word = new Word(new Array<number>(length).fill(0));
+    word.transient = true;
+    const go = (v: number[], k: number): boolean => {
+      if (k === length) return visit(word) === true;
+      for (const i of leftDescents(v)) {
+        word.letters[k] = i;
+        if (go(leftMultiply(v, i), k + 1)) return true;
+      }
+      return false;
+    };
+    return go(w.slice(), 0);
+  },
+  isMember({ w }, obj) {
+    return obj instanceof Word && isReducedWordOf(obj.letters, w);
+  },
+  compare: compareReducedWords,
+  arbitrary({ w }) {
+    return exactArbitrary(
+      (rng) => randomReducedWord(w, rng),
+      (v) => v instanceof Word && isReducedWordOf(v.letters, w),
+      simplify,
+    );
+  },
+  *shrink(p, obj): Generator<Shrunk<PermParam, Word>> {
+    for (const u of simplify(obj)) yield { params: p, obj: u };
+  },
+});

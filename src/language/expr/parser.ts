@@ -1,0 +1,441 @@
+// Recursive-descent parser for FORMAT.md §3. Precedence, lowest first:
+//   1  if C then A else B,  v -> E,  (a, b) -> E
+//   2  A implies B          (right-associative; its operands are `or` chains)
+//   3  A or B
+//   4  A and B
+//   5  not A
+//   6  == != < <= > >=     (no chaining)
+//   7  a..b                 (operands are sums; no chaining)
+//   8  + -
+//   9  * /  and unary -     (-q^2 is -(q^2))
+//  10  ^                    (right-associative; the exponent may carry signs: w^-1)
+//  11  calls f(a, b), comprehensions sum(i in S where C: E), indexing L[i], ( ), [ ]
+// Implies sits just below `or` so that `a or b implies c` reads (a or b) implies c.
+
+import { InputError } from '../../base/errors.js';
+import { parseInt10 } from '../../numbers/integer.js';
+import { type BinaryOp, type CompareOp, type Expr, type Generator, type Origin, type SourceText, isReducer, REDUCERS } from './ast.js';
+import { tokenize, type Token } from './lexer.js';
+import { inputError } from './origin.js';
+
+/** Deeper nesting than this is refused at once (it is never written by hand). */
+export const MAX_NESTING = 200;
+
+type NoSrc<E> = E extends unknown ? Omit<E, 'src'> : never;
+
+const COMPARE_OPS = new Set(['==', '!=', '<', '<=', '>', '>=']);
+
+class Parser {
+  private i = 0;
+  private depth = 0;
+
+  constructor(
+    private readonly src: SourceText,
+    private readonly toks: Token[],
+  ) {}
+
+  private get tok(): Token {
+    return this.toks[this.i];
+  }
+
+  private peek(k = 1): Token {
+    return this.toks[Math.min(this.i + k, this.toks.length - 1)];
+  }
+
+  private is(text: string): boolean {
+    const t = this.tok;
+    return (t.kind === 'op' || t.kind === 'keyword') && t.text === text;
+  }
+
+  private next(): Token {
+    const t = this.tok;
+    if (t.kind !== 'eof') this.i++;
+    return t;
+  }
+
+  private err(message: string, t: Token = this.tok, suggestion?: string): InputError {
+    return inputError(message, this.src, t.start, t.end, suggestion);
+  }
+
+  private describe(t: Token): string {
+    if (t.kind === 'eof') return 'the end of the expression';
+    if (t.kind === 'string') return `the string ${JSON.stringify(t.text)}`;
+    return `"${t.text}"`;
+  }
+
+  private expect(text: string, what: string, opener?: Token): Token {
+    if (this.is(text)) return this.next();
+    if (opener && this.tok.kind === 'eof') {
+      throw inputError(`${opener.text} is never closed: expected ${text} ${what}`, this.src, opener.start, opener.end, `add ${text}`);
+    }
+    throw this.err(`expected ${text} ${what}, found ${this.describe(this.tok)}`);
+  }
+
+  private node(e: NoSrc<Expr>): Expr {
+    (e as Expr).src = this.src;
+    return e as Expr;
+  }
+
+  private enter(): void {
+    if (++this.depth > MAX_NESTING) throw this.err(`the expression is nested more than ${MAX_NESTING} levels deep`);
+  }
+
+  parseAll(): Expr {
+    if (this.tok.kind === 'eof') throw this.err('the expression is empty');
+    const e = this.expr();
+    const t: Token = this.toks[this.i];
+    if (t.kind !== 'eof') {
+      if (t.text === ')' || t.text === ']') throw this.err(`this ${t.text} has no matching ${t.text === ')' ? '(' : '['}`);
+      throw this.err(`unexpected ${this.describe(t)} after a complete expression`, t,
+        t.kind === 'name' || t.kind === 'int' ? 'an operator such as * or a comma may be missing' : undefined);
+    }
+    return e;
+  }
+
+  // Level 1.
+  expr(): Expr {
+    this.enter();
+    try {
+      const t = this.tok;
+      if (t.kind === 'keyword' && t.text === 'if') {
+        this.next();
+        const cond = this.expr();
+        this.expect('then', 'after the condition of if', t);
+        const then = this.expr();
+        this.expect('else', 'after then ... (an if needs an else)', t);
+        const els = this.expr();
+        return this.node({ type: 'if', cond, then, else: els, start: t.start, end: els.end });
+      }
+      if (t.kind === 'name' && this.peek().text === '->' && this.peek().kind === 'op') {
+        this.next();
+        this.next();
+        const body = this.expr();
+        return this.node({ type: 'lambda', params: [t.text], body, start: t.start, end: body.end });
+      }
+      if (this.is('(') && this.lambdaParamsAhead()) {
+        this.next();
+        const params: string[] = [];
+        while (!this.is(')')) {
+          const p = this.next();
+          if (params.includes(p.text)) throw this.err(`the parameter ${p.text} appears twice`, p);
+          params.push(p.text);
+          if (this.is(',')) this.next();
+        }
+        this.next();
+        this.next(); // ->
+        const body = this.expr();
+        return this.node({ type: 'lambda', params, body, start: t.start, end: body.end });
+      }
+      return this.implication();
+    } finally {
+      this.depth--;
+    }
+  }
+
+  /** At '(' : is this `(a, b) -> ...`? */
+  private lambdaParamsAhead(): boolean {
+    let k = 1;
+    if (this.peek(k).text === ')' && this.peek(k).kind === 'op') return this.peek(k + 1).text === '->';
+    for (;;) {
+      if (this.peek(k).kind !== 'name') return false;
+      k++;
+      const t = this.peek(k);
+      if (t.kind === 'op' && t.text === ')') return this.peek(k + 1).kind === 'op' && this.peek(k + 1).text === '->';
+      if (!(t.kind === 'op' && t.text === ',')) return false;
+      k++;
+    }
+  }
+
+  // Level 2.
+  private implication(): Expr {
+    const left = this.disjunction();
+    if (this.is('implies')) {
+      this.next();
+      this.enter();
+      try {
+        const right = this.implication();
+        return this.node({ type: 'binary', op: 'implies', left, right, start: left.start, end: right.end });
+      } finally {
+        this.depth--;
+      }
+    }
+    return left;
+  }
+
+  private leftAssoc(ops: string[], operand: () => Expr): Expr {
+    let left = operand();
+    while (ops.includes(this.tok.text) && (this.tok.kind === 'op' || this.tok.kind === 'keyword')) {
+      const op = this.next().text as BinaryOp;
+      const right = operand();
+      left = this.node({ type: 'binary', op, left, right, start: left.start, end: right.end });
+    }
+    return left;
+  }
+
+  // Levels 3, 4.
+  private disjunction(): Expr {
+    return this.leftAssoc(['or'], () => this.conjunction());
+  }
+
+  private conjunction(): Expr {
+    return this.leftAssoc(['and'], () => this.negation());
+  }
+
+  // Level 5.
+  private negation(): Expr {
+    if (this.is('not')) {
+      const t = this.next();
+      this.enter();
+      try {
+        const operand = this.negation();
+        return this.node({ type: 'unary', op: 'not', operand, start: t.start, end: operand.end });
+      } finally {
+        this.depth--;
+      }
+    }
+    return this.comparison();
+  }
+
+  // Level 6.
+  private comparison(): Expr {
+    const left = this.range();
+    if (this.tok.kind === 'op' && COMPARE_OPS.has(this.tok.text)) {
+      const op = this.next().text as CompareOp;
+      const right = this.range();
+      if (this.tok.kind === 'op' && COMPARE_OPS.has(this.tok.text)) {
+        const op2 = this.tok.text;
+        const third = (() => {
+          this.next();
+          return this.range();
+        })();
+        const text = (e: Expr) => this.src.text.slice(e.start, e.end);
+        throw inputError(
+          'comparisons do not chain',
+          this.src, left.start, third.end,
+          `${text(left)} ${op} ${text(right)} and ${text(right)} ${op2} ${text(third)}`,
+        );
+      }
+      return this.node({ type: 'binary', op, left, right, start: left.start, end: right.end });
+    }
+    return left;
+  }
+
+  // Level 7.
+  private range(): Expr {
+    const lo = this.additive();
+    if (this.is('..')) {
+      this.next();
+      const hi = this.additive();
+      if (this.is('..')) throw this.err('a range a..b has two ends; .. cannot follow a range');
+      return this.node({ type: 'range', lo, hi, start: lo.start, end: hi.end });
+    }
+    return lo;
+  }
+
+  // Level 8.
+  private additive(): Expr {
+    return this.leftAssoc(['+', '-'], () => this.multiplicative());
+  }
+
+  // Level 9.
+  private multiplicative(): Expr {
+    return this.leftAssoc(['*', '/'], () => this.unary());
+  }
+
+  private unary(): Expr {
+    if (this.is('-')) {
+      const t = this.next();
+      this.enter();
+      try {
+        const operand = this.unary();
+        return this.node({ type: 'unary', op: '-', operand, start: t.start, end: operand.end });
+      } finally {
+        this.depth--;
+      }
+    }
+    return this.power();
+  }
+
+  // Level 10.
+  private power(): Expr {
+    const base = this.postfix();
+    if (this.is('^')) {
+      this.next();
+      const exponent = this.exponent();
+      return this.node({ type: 'binary', op: '^', left: base, right: exponent, start: base.start, end: exponent.end });
+    }
+    return base;
+  }
+
+  private exponent(): Expr {
+    this.enter();
+    try {
+      if (this.is('-')) {
+        const t = this.next();
+        const operand = this.exponent();
+        return this.node({ type: 'unary', op: '-', operand, start: t.start, end: operand.end });
+      }
+      return this.power();
+    } finally {
+      this.depth--;
+    }
+  }
+
+  // Level 11.
+  private postfix(): Expr {
+    let e = this.primary();
+    while (this.is('[')) {
+      const open = this.next();
+      this.enter();
+      const index = this.expr();
+      this.depth--;
+      const close = this.expect(']', 'to close the index', open);
+      e = this.node({ type: 'index', target: e, index, start: e.start, end: close.end });
+    }
+    return e;
+  }
+
+  private primary(): Expr {
+    const t = this.tok;
+    switch (t.kind) {
+      case 'int':
+        this.next();
+        return this.node({ type: 'int', value: parseInt10(t.text), start: t.start, end: t.end });
+      case 'string':
+        this.next();
+        return this.node({ type: 'string', value: t.text, start: t.start, end: t.end });
+      case 'name':
+        this.next();
+        if (this.is('(')) return this.call(t);
+        return this.node({ type: 'name', name: t.text, start: t.start, end: t.end });
+      case 'keyword':
+        if (t.text === 'true' || t.text === 'false') {
+          this.next();
+          return this.node({ type: 'bool', value: t.text === 'true', start: t.start, end: t.end });
+        }
+        if (t.text === 'if') return this.expr();
+        throw this.err(`expected a value, found the word ${t.text}`, t,
+          t.text === 'in' ? 'a generator "v in S" is written inside sum(...), count(...), all(...) and the like' : undefined);
+      case 'op':
+        if (t.text === '(') {
+          this.next();
+          this.enter();
+          const e = this.expr();
+          this.depth--;
+          this.expect(')', 'to close the parenthesis', t);
+          return e;
+        }
+        if (t.text === '[') {
+          this.next();
+          this.enter();
+          const items = this.commaList(']', t);
+          this.depth--;
+          const close = this.next();
+          return this.node({ type: 'list', items, start: t.start, end: close.end });
+        }
+        if (t.text === ')' || t.text === ']') throw this.err(`this ${t.text} has no matching ${t.text === ')' ? '(' : '['}`);
+        throw this.err(`expected a value, found ${this.describe(t)}`);
+      case 'eof':
+        throw this.err('the expression ends too early: a value is missing');
+    }
+  }
+
+  /** Items up to (not including) the closer, separated by commas. */
+  private commaList(closer: string, opener: Token): Expr[] {
+    const items: Expr[] = [];
+    if (this.is(closer)) return items;
+    for (;;) {
+      items.push(this.expr());
+      if (this.is(',')) {
+        this.next();
+        continue;
+      }
+      if (this.is(closer)) return items;
+      if (this.tok.kind === 'eof') {
+        throw inputError(`${opener.text} is never closed: expected ${closer}`, this.src, opener.start, opener.end, `add ${closer}`);
+      }
+      throw this.err(`expected , or ${closer}, found ${this.describe(this.tok)}`);
+    }
+  }
+
+  private generatorAhead(): boolean {
+    return this.tok.kind === 'name' && this.peek().kind === 'keyword' && this.peek().text === 'in';
+  }
+
+  private call(name: Token): Expr {
+    const open = this.next();
+    this.enter();
+    try {
+      if (this.generatorAhead()) return this.comprehension(name, open);
+      const args = this.commaList(')', open);
+      const close = this.next();
+      return this.node({ type: 'call', callee: name.text, args, start: name.start, end: close.end });
+    } finally {
+      this.depth--;
+    }
+  }
+
+  private comprehension(name: Token, open: Token): Expr {
+    if (!isReducer(name.text)) {
+      throw this.err(`${name.text}(v in ...) is not a comprehension`, name, `comprehensions are ${REDUCERS.join(', ')}`);
+    }
+    const generators: Generator[] = [];
+    let body: Expr | undefined;
+    for (;;) {
+      if (!this.generatorAhead()) throw this.err(`expected a generator "v in S", found ${this.describe(this.tok)}`);
+      const v = this.next();
+      this.next(); // in
+      const source = this.expr();
+      let where: Expr | undefined;
+      if (this.is('where')) {
+        this.next();
+        where = this.expr();
+      }
+      generators.push({ name: v.text, source, where, start: v.start, end: (where ?? source).end });
+      if (this.is(',')) {
+        this.next();
+        continue;
+      }
+      break;
+    }
+    if (this.is(':')) {
+      this.next();
+      body = this.expr();
+    }
+    if (!this.is(')')) {
+      if (this.tok.kind === 'eof') throw inputError(`( is never closed: expected )`, this.src, open.start, open.end, 'add )');
+      throw this.err(`expected where, a comma, : or ) in ${name.text}(...), found ${this.describe(this.tok)}`);
+    }
+    const close = this.next();
+    return this.node({ type: 'comprehension', reducer: name.text, generators, body, start: name.start, end: close.end });
+  }
+}
+
+/** Parse one expression. Throws InputError (with pos, snippet, suggestion) on bad syntax. */
+export function parseExpression(text: string, origin: Origin): Expr {
+  const src: SourceText = { text, origin };
+  return new Parser(src, tokenize(src)).parseAll();
+}
+
+const DEFINE_HEADER = /^\s*([A-Za-z_][A-Za-z0-9_]*)\s*(?:\(\s*([^)]*)\))?\s*$/;
+const IDENT = /^[A-Za-z_][A-Za-z0-9_]*$/;
+
+/** `peaks(w)`, `f(a, b)`, or a bare `c` (a constant): the key of a `define:` entry. */
+export function parseDefineHeader(header: string, origin: Origin): { name: string; params: string[] } {
+  const src: SourceText = { text: header, origin };
+  const m = DEFINE_HEADER.exec(header);
+  if (!m) throw inputError(`${JSON.stringify(header)} is not a definition header`, src, 0, header.length, 'write name(param, ...), e.g. peaks(w)');
+  const params = m[2] === undefined || m[2].trim() === '' ? [] : m[2].split(',').map((p) => p.trim());
+  for (const p of params) {
+    if (!IDENT.test(p)) {
+      const at = header.indexOf(p);
+      throw inputError(`${JSON.stringify(p)} is not a parameter name`, src, Math.max(0, at), Math.max(0, at) + p.length);
+    }
+  }
+  const seen = new Set<string>();
+  for (const p of params) {
+    if (seen.has(p)) throw inputError(`the parameter ${p} appears twice in ${header.trim()}`, src, header.indexOf(p), header.indexOf(p) + p.length);
+    seen.add(p);
+  }
+  return { name: m[1], params };
+}

@@ -1,0 +1,12 @@
+// Registers every built-in function: importing a topic module defines its functions.
+// A new topic file is added here (and its functions then appear in `hunch list`).
+import './constructors.js';
+import './permutations.js';
+import './numbers.js';
+import './partitions.js';
+import './polynomials.js';
+import './qanalogs.js';
+import './matrices.js';
+import './schubert.js';
+import './markov.js';
+import './moves.js';

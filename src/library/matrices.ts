@@ -1,0 +1,71 @@
+// Matrices (LIBRARY.md §2): construction, determinant, rank, transpose, characteristic
+// polynomial. Products and sums are the operators * + - (src/library/operators.ts).
+
+import { charpoly, determinant, Matrix, rank, transpose } from '../algebra/matrix.js';
+import type { PolyLike } from '../algebra/polynomial.js';
+import { defineFunction } from './registry.js';
+
+const topic = 'matrices';
+
+defineFunction({
+  name: 'matrix',
+  topic,
+  params: [{ name: 'rows', type: 'list' }],
+  returns: 'matrix',
+  description: 'the matrix with these rows (lists of equal length of exact numbers)',
+  example: 'matrix([[1, 2], [3, 4]])',
+  exampleValue: 'matrix([[1, 2], [3, 4]])',
+  source: 'definition',
+  impl: (rows) => Matrix.from(rows as unknown[][]),
+});
+
+defineFunction({
+  name: 'det',
+  topic,
+  params: [{ name: 'M', type: 'matrix' }],
+  returns: 'number',
+  description: 'the determinant of a square matrix, exactly (fraction-free Bareiss elimination)',
+  example: 'det(matrix([[2, 1, 0], [1, 2, 1], [0, 1, 2]]))',
+  exampleValue: '4',
+  source: 'E. H. Bareiss, Sylvester\'s identity and multistep integer-preserving Gaussian elimination, Math. Comp. 22 (1968); tested on Hilbert (OEIS A005249) and Vandermonde matrices',
+  impl: (m) => determinant(m as Matrix),
+});
+
+defineFunction({
+  name: 'rank',
+  topic,
+  params: [{ name: 'M', type: 'matrix' }],
+  returns: 'integer',
+  description: 'the rank over the rationals',
+  example: 'rank(matrix([[1, 2, 3], [2, 4, 6]]))',
+  exampleValue: '1',
+  source: 'definition (Gaussian elimination)',
+  impl: (m) => rank(m as Matrix),
+});
+
+defineFunction({
+  name: 'transpose',
+  topic,
+  params: [{ name: 'M', type: 'matrix' }],
+  returns: 'matrix',
+  description: 'the transposed matrix',
+  example: 'transpose(matrix([[1, 2, 3], [4, 5, 6]]))',
+  exampleValue: 'matrix([[1, 4], [2, 5], [3, 6]])',
+  source: 'definition',
+  impl: (m) => transpose(m as Matrix),
+});
+
+defineFunction({
+  name: 'charpoly',
+  topic,
+  params: [
+    { name: 'M', type: 'matrix' },
+    { name: 't', type: 'scalarOrPolynomial' },
+  ],
+  returns: 'scalarOrPolynomial',
+  description: 'the characteristic polynomial det(t*I - M) (monic); t may be an indeterminate or a value',
+  example: 'charpoly(matrix([[2, 1], [1, 2]]), t)',
+  exampleValue: 't^2 - 4*t + 3',
+  source: 'Faddeev–LeVerrier recurrence (D. K. Faddeev, V. N. Faddeeva, Computational Methods of Linear Algebra, §24); tested on companion matrices (Horn–Johnson, Matrix Analysis, Thm 3.3.14)',
+  impl: (m, t) => charpoly(m as Matrix, t as PolyLike),
+});

@@ -1,0 +1,7 @@
+// Functions on permutations (LIBRARY.md §2), one file per group under ./permutations/.
+// (rsk and rskShape live with the tableaux.)
+
+import './permutations/statistics.js';
+import './permutations/constructions.js';
+import './permutations/patterns.js';
+import './permutations/orders.js';

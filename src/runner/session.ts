@@ -1,0 +1,117 @@
+// A run of `hunch check`: load, compile and check the requested conjectures one after another.
+// The same code runs inside the worker thread the CLI starts and in-process for the library API.
+
+import { InputError } from '../base/errors.js';
+import { nearest } from '../base/suggest.js';
+import type { CompiledConjecture } from '../language/conjecture/compiled.js';
+import { compileConjecture } from '../language/conjecture/compile-conjecture.js';
+import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
+import { loadConjectures } from '../language/conjecture/project.js';
+import { checkConjecture, CheckOptions, sizesOf } from './check.js';
+import type { RunHooks } from './hooks.js';
+import { MAX_EXHAUSTIVE_CASES, plannedCases } from './plan.js';
+import type { CheckedPiece, ConjectureResult } from './result.js';
+import type { Value } from '../values/value.js';
+
+/** Everything a run needs, in a form that can cross to a worker thread (plain data). */
+export interface RunRequest {
+  paths: string[];
+  ids: string[] | null;
+  sizes: Array<[string, number, number]>;
+  sampleRanges: Array<[string, number, number]>;
+  exhaustive: boolean;
+  count: number | null;
+  seed: string | null;
+  budgetMs: number | null;
+  /** Encoded regression cases by conjecture id (from counterexample files). */
+  regression: Record<string, unknown[]>;
+}
+
+/** Load and compile; every problem is an InputError (exit 2) before anything runs. */
+export function prepareRun(req: RunRequest): CompiledConjecture[] {
+  let specs: ConjectureSpec[] = loadConjectures(req.paths);
+  if (req.ids) {
+    for (const id of req.ids) {
+      if (!specs.some((s) => s.id === id)) {
+        const s = nearest(id, specs.map((x) => x.id));
+        throw new InputError(`no conjecture has the id ${id}${s ? `; did you mean ${s}?` : ''}`, undefined, id, s);
+      }
+    }
+    specs = specs.filter((s) => req.ids!.includes(s.id));
+  }
+  const compiled = specs.map(compileConjecture);
+  for (const cc of compiled) refuseHugeSizes(cc, req);
+  return compiled;
+}
+
+function overrides(list: Array<[string, number, number]>): Map<string, [number, number]> {
+  return new Map(list.map(([k, a, b]) => [k, [a, b] as [number, number]]));
+}
+
+/** Refuse, before anything runs, an exhaustive size whose enumeration would take years. */
+function refuseHugeSizes(cc: CompiledConjecture, req: RunRequest): void {
+  if (!req.exhaustive || cc.sizeIndex < 0) return;
+  const b = cc.bindings[cc.sizeIndex];
+  const o = overrides(req.sizes).get(b.name);
+  let sizes: number[];
+  try {
+    sizes = o ? [o[1]] : sizesOf(cc).slice(-1);
+  } catch (e) {
+    throw new InputError(`the range of ${b.name} must be a range of integers that does not depend on other bindings`, b.pos, b.name);
+  }
+  for (const size of sizes) {
+    const planned = plannedCases(cc, new Map([[cc.sizeIndex, size]]));
+    if (planned !== null && planned > MAX_EXHAUSTIVE_CASES) {
+      throw new InputError(
+        `${cc.spec.id}: ${b.name} = ${size} has ${planned.toLocaleString('en-US')} cases; checking them all would take years. ` +
+          `Lower the exhaustive range (e.g. --sizes ${b.name}=1..${Math.max(1, size - 3)}) and check larger sizes with "sample:"`,
+        b.pos,
+        b.name,
+      );
+    }
+  }
+}
+
+export function checkOptionsFor(req: RunRequest, cc: CompiledConjecture, decode: (x: unknown) => Value): CheckOptions {
+  const reg = req.regression[cc.spec.id];
+  return {
+    sizes: overrides(req.sizes),
+    exhaustive: req.exhaustive,
+    sampleRanges: overrides(req.sampleRanges),
+    count: req.count ?? undefined,
+    seed: req.seed ?? undefined,
+    regression: reg ? reg.map(decode) : null,
+  };
+}
+
+export interface SessionEvents {
+  onStart?(cc: CompiledConjecture): void;
+  onPiece?(cc: CompiledConjecture, piece: CheckedPiece): void;
+  onResult(cc: CompiledConjecture, r: ConjectureResult): void;
+  onProgress?(done: number, total: number | null, label: string): void;
+  /** The interrupt flag (Ctrl-C in the main thread). */
+  interrupted(): boolean;
+}
+
+export function runSession(
+  compiled: CompiledConjecture[],
+  req: RunRequest,
+  ev: SessionEvents,
+  decode: (x: unknown) => Value,
+): ConjectureResult[] {
+  const results: ConjectureResult[] = [];
+  for (const cc of compiled) {
+    if (ev.interrupted()) break;
+    ev.onStart?.(cc);
+    const deadline = req.budgetMs === null ? Infinity : performance.now() + req.budgetMs;
+    const hooks: RunHooks = {
+      shouldStop: () => (ev.interrupted() ? 'interrupt' : performance.now() > deadline ? 'budget' : null),
+      onProgress: ev.onProgress,
+      onPiece: (p) => ev.onPiece?.(cc, p),
+    };
+    const r = checkConjecture(cc, checkOptionsFor(req, cc, decode), hooks);
+    results.push(r);
+    ev.onResult(cc, r);
+  }
+  return results;
+}

@@ -1,0 +1,46 @@
+// The worker thread of `hunch check`: the check runs here so that the main thread stays free to
+// notice Ctrl-C, draw progress and write records while cases are being evaluated.
+
+import { parentPort, workerData } from 'node:worker_threads';
+import '../library/index.js';
+import '../families/index.js';
+import { decodeValue } from '../values/decode.js';
+import { prepareRun, runSession, type RunRequest } from './session.js';
+
+export type WorkerMessage =
+  | { type: 'start'; id: string }
+  | { type: 'piece'; id: string; piece: unknown }
+  | { type: 'result'; result: unknown }
+  | { type: 'progress'; done: number; total: number | null; label: string }
+  | { type: 'done' }
+  | { type: 'crash'; message: string; stack?: string };
+
+const { request, flag } = workerData as { request: RunRequest; flag: Int32Array };
+const post = (m: WorkerMessage) => parentPort!.postMessage(m);
+
+try {
+  const compiled = prepareRun(request);
+  let lastProgress = 0;
+  runSession(
+    compiled,
+    request,
+    {
+      onStart: (cc) => post({ type: 'start', id: cc.spec.id }),
+      onPiece: (cc, piece) => post({ type: 'piece', id: cc.spec.id, piece }),
+      onResult: (_cc, result) => post({ type: 'result', result }),
+      onProgress: (done, total, label) => {
+        const now = performance.now();
+        if (now - lastProgress > 100) {
+          lastProgress = now;
+          post({ type: 'progress', done, total, label });
+        }
+      },
+      interrupted: () => Atomics.load(flag, 0) !== 0,
+    },
+    decodeValue,
+  );
+  post({ type: 'done' });
+} catch (e) {
+  const err = e as Error;
+  post({ type: 'crash', message: err?.message ?? String(e), stack: err?.stack });
+}
