@@ -15,8 +15,10 @@ export function dividedDifference(p: PolyLike, a: number, b: number): PolyLike {
   if (a === b) fail('a divided difference needs two different variables');
   if (!isPolynomial(p)) return 0;
   // Lay p out over its variables together with a and b.
-  const extra = Int32Array.from([a, b].sort((u, v) => rankOf(u) - rankOf(v)));
-  const vars = unionVars(p.vars, extra);
+  const vars =
+    p.vars.includes(a) && p.vars.includes(b)
+      ? p.vars
+      : unionVars(p.vars, Int32Array.from([a, b].sort((u, v) => rankOf(u) - rankOf(v))));
   const nv = vars.length;
   const exps = expandExps(p, vars);
   const pa = vars.indexOf(a), pb = vars.indexOf(b);

@@ -1,7 +1,7 @@
 // Collecting terms of a polynomial under construction. Exponent vectors are packed into one
 // JS number whose numeric order is the monomial order (total degree first, then lexicographic
-// with the first variable most significant), so collecting is a Map on small numbers and sorting
-// is a numeric sort. When the exponents are too large to pack into 53 bits, a string key and a
+// with the first variable most significant), so collecting is appending, and sorting and merging
+// equal monomials is one native numeric sort (key and term index packed into one double). When the exponents are too large to pack into 53 bits, a string key and a
 // comparator sort take over (same result, slower).
 
 import { iadd, imul } from '../numbers/integer.js';
@@ -56,7 +56,7 @@ export class TermCollector {
   private readonly packed: boolean;
   private readonly mult: number[] = [];
   private readonly degMult: number = 0;
-  private readonly numIndex = new Map<number, number>();
+  private readonly keyBits: number = 0;
   private readonly strIndex = new Map<string, number>();
   private readonly keys: number[] = [];
   exps: Int32Array;
@@ -74,7 +74,8 @@ export class TermCollector {
       maxDeg += maxExp[v];
     }
     const degBits = bitLength(maxDeg);
-    this.packed = bits + degBits <= 52;
+    this.keyBits = bits + degBits;
+    this.packed = this.keyBits <= 52;
     if (this.packed) {
       // Last variable least significant; the total degree above all of them.
       let m = 1;
@@ -90,31 +91,26 @@ export class TermCollector {
   /** Add coef times the monomial whose exponents are src[off .. off+nv). */
   add(src: ArrayLike<number>, off: number, coef: Scalar): void {
     const nv = this.nv;
-    let idx: number | undefined;
-    let key = 0;
-    let skey = '';
     if (this.packed) {
-      let deg = 0;
+      // Packed keys are merged only when sorting (no hashing per term).
+      let key = 0, deg = 0;
       for (let v = 0; v < nv; v++) {
         const e = src[off + v];
         deg += e;
         key += e * this.mult[v];
       }
-      key += deg * this.degMult;
-      idx = this.numIndex.get(key);
+      this.keys.push(key + deg * this.degMult);
     } else {
+      let skey = '';
       for (let v = 0; v < nv; v++) skey += src[off + v] + ',';
-      idx = this.strIndex.get(skey);
+      const known = this.strIndex.get(skey);
+      if (known !== undefined) {
+        this.coefs[known] = addScalars(this.coefs[known], coef);
+        return;
+      }
+      this.strIndex.set(skey, this.count);
     }
-    if (idx !== undefined) {
-      this.coefs[idx] = addScalars(this.coefs[idx], coef);
-      return;
-    }
-    idx = this.count++;
-    if (this.packed) {
-      this.numIndex.set(key, idx);
-      this.keys.push(key);
-    } else this.strIndex.set(skey, idx);
+    const idx = this.count++;
     this.coefs.push(coef);
     if ((idx + 1) * nv > this.exps.length) {
       const grown = new Int32Array(this.exps.length * 2 + nv);
@@ -127,13 +123,52 @@ export class TermCollector {
 
   /** The nonzero terms in descending monomial order: [exps (flat), coefs]. */
   sorted(): { exps: Int32Array; coefs: Scalar[] } {
+    if (!this.packed) return this.sortedByComparator();
+    const n = this.count, nv = this.nv, ex = this.exps, keys = this.keys;
+    const idxBits = bitLength(n);
+    let order: Int32Array, groupKeys: Float64Array;
+    if (this.keyBits + idxBits <= 52) {
+      // Key and index in one double: a native numeric sort orders by key, ties by index.
+      const shift = 2 ** idxBits;
+      const comp = new Float64Array(n);
+      for (let i = 0; i < n; i++) comp[i] = keys[i] * shift + i;
+      comp.sort();
+      order = new Int32Array(n);
+      groupKeys = new Float64Array(n);
+      for (let k = 0; k < n; k++) {
+        const c = comp[n - 1 - k];
+        const key = Math.floor(c / shift);
+        order[k] = c - key * shift;
+        groupKeys[k] = key;
+      }
+    } else {
+      const idx = Array.from({ length: n }, (_, i) => i).sort((a, b) => keys[b] - keys[a]);
+      order = Int32Array.from(idx);
+      groupKeys = Float64Array.from(idx, (i) => keys[i]);
+    }
+    // Merge runs of equal keys, dropping zero sums.
+    const outExps = new Int32Array(n * nv);
+    const coefs: Scalar[] = [];
+    for (let k = 0; k < n; ) {
+      const first = order[k];
+      let c = this.coefs[first];
+      let j = k + 1;
+      while (j < n && groupKeys[j] === groupKeys[k]) c = addScalars(c, this.coefs[order[j++]]);
+      if (!sisZero(c)) {
+        const base = coefs.length * nv;
+        for (let v = 0; v < nv; v++) outExps[base + v] = ex[first * nv + v];
+        coefs.push(c);
+      }
+      k = j;
+    }
+    return { exps: outExps.subarray(0, coefs.length * nv), coefs };
+  }
+
+  private sortedByComparator(): { exps: Int32Array; coefs: Scalar[] } {
+    const nv = this.nv, ex = this.exps;
     const order: number[] = [];
     for (let i = 0; i < this.count; i++) if (!sisZero(this.coefs[i])) order.push(i);
-    const nv = this.nv, ex = this.exps;
-    if (this.packed) {
-      const keys = this.keys;
-      order.sort((a, b) => keys[b] - keys[a]);
-    } else order.sort((a, b) => compareMonomials(ex, b * nv, ex, a * nv, nv));
+    order.sort((a, b) => compareMonomials(ex, b * nv, ex, a * nv, nv));
     const exps = new Int32Array(order.length * nv);
     const coefs: Scalar[] = new Array(order.length);
     for (let k = 0; k < order.length; k++) {

@@ -1,20 +1,22 @@
 // "Did you mean" suggestions: the nearest valid name by edit distance.
 
-/** Levenshtein distance with an early cut-off (integers only). */
+/** Edit distance where swapping two neighbouring letters counts as one edit (optimal string alignment). */
 export function editDistance(a: string, b: string): number {
   const m = a.length, n = b.length;
-  let prev = new Array<number>(n + 1);
-  let cur = new Array<number>(n + 1);
-  for (let j = 0; j <= n; j++) prev[j] = j;
+  const d: number[][] = Array.from({ length: m + 1 }, (_, i) => {
+    const row = new Array<number>(n + 1).fill(0);
+    row[0] = i;
+    return row;
+  });
+  for (let j = 0; j <= n; j++) d[0][j] = j;
   for (let i = 1; i <= m; i++) {
-    cur[0] = i;
     for (let j = 1; j <= n; j++) {
       const cost = a.charCodeAt(i - 1) === b.charCodeAt(j - 1) ? 0 : 1;
-      cur[j] = Math.min(prev[j] + 1, cur[j - 1] + 1, prev[j - 1] + cost);
+      d[i][j] = Math.min(d[i - 1][j] + 1, d[i][j - 1] + 1, d[i - 1][j - 1] + cost);
+      if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1]) d[i][j] = Math.min(d[i][j], d[i - 2][j - 2] + 1);
     }
-    [prev, cur] = [cur, prev];
   }
-  return prev[n];
+  return d[m][n];
 }
 
 /** The closest candidate, if it is close enough to be a plausible typo (case-insensitive). */

@@ -13,15 +13,17 @@ export function formatLocated(
   message: string,
   pos: { file: string | null; line: number | null; column: number | null } | undefined,
   snippet?: string,
+  suggestion?: string,
 ): string {
   const where = pos?.file ? `${pos.file}${pos.line ? `:${pos.line}` : ''}${pos.column ? `:${pos.column}` : ''}: ` : '';
   let s = `${t.color.bold(where)}${t.color.red('error:')} ${message}\n`;
-  if (snippet && !message.includes(snippet)) s += `    ${snippet}\n`;
+  if (snippet && !message.includes(snippet)) s += `    ${snippet.length > 120 ? snippet.slice(0, 117) + '...' : snippet}\n`;
+  if (suggestion && !message.includes(suggestion)) s += `    ${t.color.dim('hint:')} ${suggestion}\n`;
   return s;
 }
 
 export function formatError(t: Terminal, e: unknown): string {
-  if (e instanceof InputError) return formatLocated(t, e.message, e.pos ? e.pos : undefined, e.snippet);
+  if (e instanceof InputError) return formatLocated(t, e.message, e.pos ? e.pos : undefined, e.snippet, e.suggestion);
   if (e instanceof EvalError) return formatLocated(t, e.message, e.pos);
   const msg = e instanceof Error ? e.message : String(e);
   const debug = process.env.HUNCH_DEBUG && e instanceof Error ? `\n${e.stack}` : '';
@@ -29,7 +31,7 @@ export function formatError(t: Terminal, e: unknown): string {
 }
 
 export function formatErrorInfo(t: Terminal, e: ErrorInfo): string {
-  return formatLocated(t, e.message, e, e.snippet);
+  return formatLocated(t, e.message, e, e.snippet, e.suggestion);
 }
 
 /** Thrown by commands to end with an exit code after printing what they had to say. */

@@ -61,9 +61,8 @@ function counterexampleBlock(cx: Counterexample, r: ConjectureResult, s: ReportS
   let how: string;
   if (cx.phase === 'exhaustive') {
     const piece = r.checked.find((p) => p.phase === 'exhaustive' && sizeText(p.size) === sizeText(cx.size));
-    const of = piece ? ` of ${formatCount(piece.cases)}` : '';
-    how = `the simplest failing case at ${sizeText(cx.size)}` +
-      (cx.failuresAtSize !== null ? ` (${formatCount(cx.failuresAtSize)}${of} case${piece?.cases === 1 ? '' : 's'} fail${cx.failuresAtSize === 1 && piece?.cases !== 1 ? 's' : ''})` : '');
+    const failing = cx.failuresAtSize !== null ? `${formatCount(cx.failuresAtSize)}${piece ? ` of ${formatCount(piece.cases)}` : ''}` : null;
+    how = `the simplest failing case at ${sizeText(cx.size)}${failing ? ` (failing: ${failing} cases)` : ''}`;
   } else if (cx.phase === 'sample') {
     how = `found by random sampling at ${sizeText(cx.shrunkFrom ?? cx.size)} (seed ${cx.seed}), shrunk in ${cx.shrinkSteps} step${cx.shrinkSteps === 1 ? '' : 's'} to ${sizeText(cx.size)}`;
   } else how = 'the counterexample recorded by an earlier run still fails';

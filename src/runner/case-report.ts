@@ -8,7 +8,7 @@ import type { Value } from '../values/value.js';
 
 export function encodeBindings(cc: CompiledConjecture, frame: Frame): Record<string, unknown> {
   const out: Record<string, unknown> = {};
-  for (const b of cc.bindings) out[b.name] = encodeValue(frame[b.slot]);
+  for (const b of cc.bindings) if (frame[b.slot] !== undefined) out[b.name] = encodeValue(frame[b.slot]);
   return out;
 }
 

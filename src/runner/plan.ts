@@ -1,6 +1,7 @@
 // How many cases a size has, computed from the families' exact counts before anything runs: used
 // for progress, for coverage reports, and to refuse an enumeration that would take years.
 
+import { EvalError, InputError } from '../base/errors.js';
 import type { CompiledConjecture, Frame } from '../language/conjecture/compiled.js';
 import type { Value } from '../values/value.js';
 import { rangeBound } from './enumerate-cases.js';
@@ -14,7 +15,7 @@ const UNSET = Symbol('unset');
  * The exact number of assignments at a size (before `where`), or null when a family's
  * parameters depend on another family's object (then only enumeration can tell).
  */
-export function plannedCases(cc: CompiledConjecture, fixed: Map<number, Value>): bigint | null {
+export function plannedCases(cc: CompiledConjecture, fixed: Map<number, Value>, strict = false): bigint | null {
   const frame: Frame = new Array(cc.frameSize).fill(UNSET);
   const bs = cc.bindings;
   const level = (i: number): bigint | null => {
@@ -57,11 +58,21 @@ export function plannedCases(cc: CompiledConjecture, fixed: Map<number, Value>):
       }
       const args = src.args.map((f) => f(frame));
       if (args.some((a) => (a as unknown) === UNSET)) return null;
-      const n = src.family.count(src.family.prepare(args));
+      let p: unknown;
+      try {
+        p = src.family.prepare(args);
+      } catch (e) {
+        // The arguments are known, so the family itself refuses them: a mistake in the file.
+        if (strict && e instanceof EvalError)
+          throw new InputError(`${b.name}: ${e.message}`, b.pos, b.name);
+        throw e;
+      }
+      const n = src.family.count(p);
       frame[b.slot] = UNSET as unknown as Value;
       const rest = level(i + 1);
       return rest === null ? null : n * rest;
-    } catch {
+    } catch (e) {
+      if (e instanceof InputError) throw e;
       return null; // depends on an unset object, or invalid: enumeration will report it
     } finally {
       frame[b.slot] = UNSET as unknown as Value;

@@ -60,7 +60,7 @@ function refuseHugeSizes(cc: CompiledConjecture, req: RunRequest): void {
     throw new InputError(`the range of ${b.name} must be a range of integers that does not depend on other bindings`, b.pos, b.name);
   }
   for (const size of sizes) {
-    const planned = plannedCases(cc, new Map([[cc.sizeIndex, size]]));
+    const planned = plannedCases(cc, new Map([[cc.sizeIndex, size]]), true);
     if (planned !== null && planned > MAX_EXHAUSTIVE_CASES) {
       throw new InputError(
         `${cc.spec.id}: ${b.name} = ${size} has ${planned.toLocaleString('en-US')} cases; checking them all would take years. ` +

@@ -12,6 +12,8 @@ import type { Family } from '../../src/families/family.js';
 import { allFamilies, getFamily } from '../../src/families/registry.js';
 import { drawAvoiderByRejection, type AvoidersParam } from '../../src/families/permutations/avoiders.js';
 import type { Structured } from '../../src/values/structured.js';
+import { FamilyArbitrary } from '../../src/families/common/arbitrary.js';
+import { Permutation } from '../../src/families/permutations/permutation.js';
 
 import '../../src/families/permutations/permutations.js';
 import '../../src/families/permutations/avoiders.js';
@@ -45,6 +47,12 @@ const PARAMS: Record<string, Entry> = {
   partitions: { small: [[0], [8], [40]], uniform: [[8]] },
   setPartitions: { small: [[0], [6], [20]], uniform: [[5]] },
   dyckPaths: { small: [[0], [5], [15]], uniform: [[5]] },
+  standardTableaux: { small: [[[3, 2]], [[4, 3, 1]], [[6, 4, 4, 1]]], uniform: [[[3, 2, 1]]] },
+  semistandardTableaux: { small: [[[2, 1], 3], [[3, 2], 4]], uniform: [[[2, 1], 3], [[2, 2], 3]] },
+  asms: { small: [[1], [4], [8]], uniform: [[4]] },
+  reducedWords: { small: [[Permutation.from([3, 2, 1])], [Permutation.from([4, 3, 2, 1])]], uniform: [[Permutation.from([4, 3, 2, 1])]] },
+  pipeDreams: { small: [[Permutation.from([1, 4, 3, 2])], [Permutation.from([4, 3, 2, 1])], [Permutation.from([2, 5, 1, 4, 3])]], uniform: [[Permutation.from([1, 4, 3, 2])], [Permutation.from([1, 5, 4, 3, 2])]] },
+  partialPermutations: { small: [[0, 0], [2, 3], [6, 5]], uniform: [[2, 3], [3, 3]] },
 };
 
 const SEEDS = [1, 2, 3];
@@ -79,6 +87,12 @@ function checkShrinks(f: Family, p: unknown, size: number, obj: Structured, dept
     else expect(f.compare(s.obj, obj), `shrink ${s.obj.toText()} of ${obj.toText()} is simpler`).toBeLessThan(0);
     if (k++ < 2) checkShrinks(f, s.params, s.size ?? size, s.obj, depth - 1);
   }
+}
+
+function memberAtSmallerSize(f: Family, args: unknown[], v: Structured): boolean {
+  if (typeof args[0] !== 'number') return false;
+  for (let n = args[0] - 1; n >= 0; n--) if (f.isMember(f.prepare([n, ...args.slice(1)] as never), v)) return true;
+  return false;
 }
 
 /** Greedy shrinking (always take the first step) terminates. */
@@ -162,10 +176,18 @@ describe('generator contract', () => {
             expect(f.isMember(p, v.value)).toBe(true);
             expect(arb.canShrinkWithoutContext(v.value)).toBe(true);
             checkShrinks(f, p, sizeOf(args), v.value, 3);
-            // the arbitrary's shrink stream takes the family's own steps
-            const fromArb = [...arb.shrink(v.value, v.context)].map((s) => s.value.key());
-            const fromFamily = f.shrink ? [...f.shrink(p, v.value)].map((s) => s.obj.key()) : [];
-            expect(fromArb).toEqual(fromFamily);
+            if (arb instanceof FamilyArbitrary) {
+              // the arbitrary's shrink stream takes the family's own steps
+              const fromArb = [...arb.shrink(v.value, v.context)].map((s) => s.value.key());
+              const fromFamily = f.shrink ? [...f.shrink(p, v.value)].map((s) => s.obj.key()) : [];
+              expect(fromArb).toEqual(fromFamily);
+            } else {
+              // another arbitrary: each shrink is a simpler member at these parameters, or a member at a smaller size
+              for (const s of arb.shrink(v.value, v.context).take(50)) {
+                if (f.isMember(p, s.value)) expect(f.compare(s.value, v.value)).toBeLessThan(0);
+                else expect(memberAtSmallerSize(f, args, s.value), `${s.value.toText()} is a member at a smaller size`).toBe(true);
+              }
+            }
             greedyTerminates(f, p, v.value);
           }
           expect(arb.canShrinkWithoutContext(5)).toBe(false);

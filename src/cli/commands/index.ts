@@ -4,8 +4,9 @@ import type { Command } from 'commander';
 import type { Terminal } from '../terminal.js';
 import { addCheckCommand } from './check.js';
 import { addListCommand } from './list.js';
+import { addEvalCommand } from './eval.js';
 
 /** Adds a command; the action reports its exit code through setExit. */
 export type AddCommand = (program: Command, t: Terminal, setExit: (code: number) => void) => void;
 
-export const commands: AddCommand[] = [addCheckCommand, addListCommand];
+export const commands: AddCommand[] = [addCheckCommand, addEvalCommand, addListCommand];

@@ -7,7 +7,7 @@ import type { Family, Shrunk } from '../family.js';
 import { defineFamily } from '../registry.js';
 import { Permutation } from './permutation.js';
 import { comparePermutations, sizeArg, type SizeParam } from './permutations.js';
-import { deleteTwoEntries } from './standardise.js';
+import { deleteTwoEntries, removeFromCycle } from './standardise.js';
 
 /** D(0..n) with D(m) = (m-1)(D(m-1) + D(m-2)), D(0) = 1, D(1) = 0 (OEIS A000166). */
 export function derangementCounts(n: number): bigint[] {
@@ -110,15 +110,9 @@ function* shrinkDerangement(n: number, w: Permutation): Generator<Shrunk<SizePar
     if (j > i && a[j] === i + 1) yield { params: { n: n - 2 }, size: n - 2, obj: new Permutation(deleteTwoEntries(a, i, j)) };
   }
   for (let i = 0; i < n; i++) {
-    const x = i + 1, y = a[i];
-    if (a[y - 1] === x) continue; // a 2-cycle
-    // remove x from its cycle: its preimage now maps to y; then standardise
-    const b: number[] = [];
-    for (let k = 0; k < n; k++) {
-      if (k === i) continue;
-      let v = a[k] === x ? y : a[k];
-      b.push(v > x ? v - 1 : v);
-    }
+    const x = i + 1;
+    if (a[a[i] - 1] === x) continue; // a 2-cycle
+    const b = removeFromCycle(a, x);
     yield { params: { n: n - 1 }, size: n - 1, obj: new Permutation(b) };
   }
 }

@@ -7,7 +7,7 @@ import type { Value } from '../../values/value.js';
 import { Permutation, inversions, lexCompare, nextPermutation } from './permutation.js';
 import { FamilyArbitrary, fisherYates } from '../common/arbitrary.js';
 import type { Family, Shrunk } from '../family.js';
-import { deleteEntry } from './standardise.js';
+import { deleteEntry, removeFromCycle } from './standardise.js';
 
 export interface SizeParam {
   n: number;
@@ -67,7 +67,7 @@ export const permutations: Family<SizeParam, Permutation> = defineFamily<SizePar
 
 /**
  * Shrink steps of permutations(n) (LIBRARY.md §1): delete an entry and standardise (to S_{n-1}),
- * then swap an adjacent descent (one inversion fewer). Distinct results only.
+ * remove a point from its cycle and standardise (to S_{n-1}), then swap an adjacent descent (one inversion fewer). Distinct results only.
  */
 export function* shrinkPermutation(n: number, w: Permutation): Generator<Shrunk<SizeParam, Permutation>> {
   const a = w.a;
@@ -76,6 +76,16 @@ export function* shrinkPermutation(n: number, w: Permutation): Generator<Shrunk<
     const smaller = { n: n - 1 };
     for (let i = 0; i < n; i++) {
       const b = deleteEntry(a, i);
+      const k = b.join(',');
+      if (seen.has(k)) continue;
+      seen.add(k);
+      yield { params: smaller, size: n - 1, obj: new Permutation(b) };
+    }
+    // Also remove a point from its cycle (its preimage now maps to its image) and standardise:
+    // this keeps the cycle type but for one shorter cycle, which one-line deletions do not, so
+    // claims about cycles shrink well too.
+    for (let i = 0; i < n; i++) {
+      const b = removeFromCycle(a, i + 1);
       const k = b.join(',');
       if (seen.has(k)) continue;
       seen.add(k);

@@ -24,3 +24,18 @@ export function deleteTwoEntries(a: readonly number[], i: number, j: number): nu
   }
   return out;
 }
+
+/**
+ * w with the point x (1-based) taken out of its cycle — its preimage now maps to w(x) — and the
+ * rest standardised; a fixed point x simply disappears.
+ */
+export function removeFromCycle(a: readonly number[], x: number): number[] {
+  const y = a[x - 1];
+  const out: number[] = [];
+  for (let k = 0; k < a.length; k++) {
+    if (k === x - 1) continue;
+    const v = a[k] === x ? y : a[k];
+    out.push(v > x ? v - 1 : v);
+  }
+  return out;
+}

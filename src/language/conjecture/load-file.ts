@@ -76,10 +76,15 @@ export function loadConjectureFile(file: string, source: string): LoadedFile {
       fileDefines.push(...readDefines(y, mapEntries(y, node, 'the document')[0].value));
       defineDocuments.push(plain(doc));
     } else {
-      const first = mapEntries(y, node, 'the document')[0];
+      const entries = mapEntries(y, node, 'the document');
+      const near = entries.find((e) => nearest(e.key, ['conjecture', 'define']) !== undefined);
+      const s = near ? nearest(near.key, ['conjecture', 'define']) : undefined;
       throw new InputError(
-        'a document needs a "conjecture:" key (or only a "define:" key for shared definitions)',
-        y.nodePos(first?.keyNode ?? node),
+        'a document needs a "conjecture:" key (or only a "define:" key for shared definitions)' +
+          (near && s ? `; did you mean "${s}:" for "${near.key}:"?` : ''),
+        y.nodePos((near ?? entries[0])?.keyNode ?? node),
+        near?.key,
+        s,
       );
     }
   }

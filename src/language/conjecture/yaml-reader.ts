@@ -37,6 +37,7 @@ export class YamlFile {
       const err = d.errors[0];
       if (err) {
         const p = this.pos(err.pos[0]);
+        if (/call stack/i.test(err.message)) throw new InputError('the YAML is nested too deeply to read', p);
         const firstLine = err.message.split('\n')[0];
         const line = this.lineText(p.line);
         // The commonest slip: a comprehension's ": " inside a plain YAML value starts a mapping.

@@ -982,4 +982,4 @@ function typeList(t: TypeName | TypeName[]): string {
   return ts.map(describeType).join(' or ');
 }
 
-export { expand };
+

@@ -83,6 +83,7 @@ export function indexValue(t: Value, i: Value, pos: SourcePos | undefined): Valu
     return t.rowList()[i - 1];
   }
   if (isStructured(t) && typeof (t as Indexable).at === 'function') {
+    if (i < 1) throw new EvalError(`index ${i} is out of range: indices start at 1`, pos);
     let v: Value | undefined;
     try {
       v = (t as Indexable).at(i);

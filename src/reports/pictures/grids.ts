@@ -1,5 +1,6 @@
-// Matrices as aligned grids: sign matrices (alternating sign matrices, partial permutations) with
-// one glyph per entry and a legend; general matrices with their exact entries in brackets.
+// Matrices as aligned grids. Alternating sign matrices, and matrices whose entries are all 0, 1 or
+// -1 (permutation and partial permutation matrices among them), get one glyph per entry and a
+// legend; other matrices show their exact entries, columns right-aligned, in brackets.
 
 import type { Scalar } from '../../numbers/rational.js';
 import { valueToText } from '../../values/operations.js';
@@ -22,6 +23,10 @@ export function drawAsm(rows: readonly (readonly number[])[], g: Glyphs): string
 /** Relies on Matrix.rows, .cols and .entries (row-major exact scalars). */
 export function drawMatrix(rows: number, cols: number, entries: readonly Scalar[], g: Glyphs): string {
   if (rows === 0 || cols === 0) return `(the empty ${rows} by ${cols} matrix)`;
+  if (entries.every((e) => e === 0 || e === 1 || e === -1)) {
+    const grid = Array.from({ length: rows }, (_, i) => entries.slice(i * cols, (i + 1) * cols) as number[]);
+    return drawSignGrid(grid, g, entries.some((e) => e === -1));
+  }
   const text = entries.map((e) => valueToText(e));
   const colWidth = Array.from({ length: cols }, (_, j) => Math.max(...Array.from({ length: rows }, (_, i) => width(text[i * cols + j]))));
   const lines: string[] = [];

@@ -7,8 +7,8 @@ import { isStructured } from '../../values/structured.js';
 import type { Value } from '../../values/value.js';
 import { drawDyckPath } from './dyckPath.js';
 import { glyphsFor, type Glyphs } from './glyphs.js';
-import { drawAsm, drawMatrix, drawSignGrid } from './grids.js';
-import { sideBySide } from './layout.js';
+import { drawAsm, drawMatrix } from './grids.js';
+import { sideBySide, width } from './layout.js';
 import { drawMatching } from './matching.js';
 import { drawPermutation } from './permutation.js';
 import { drawPipeDream } from './pipeDream.js';
@@ -31,7 +31,16 @@ export function drawValue(v: Value, opts: PictureOptions): string | null {
 }
 
 /** The fields read from each kind's class (see src/families/ and src/algebra/matrix.ts). */
-type Fields = Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
+type Fields = Record<string, any>;
+
+/**
+ * Past this many points, steps or rows along one side a picture no longer fits a terminal and
+ * helps nobody; such values get null (their text form is printed anyway).
+ */
+export const MAX_SIDE = 40;
+
+/** Lists side by side while the row of pictures fits this width, stacked beyond it. */
+const MAX_ROW_WIDTH = 120;
 
 function draw(v: Value, g: Glyphs): string | null {
   if (Array.isArray(v)) {
@@ -42,10 +51,12 @@ function draw(v: Value, g: Glyphs): string | null {
       if (p === null) return null;
       pictures.push(p);
     }
-    return sideBySide(pictures);
+    const row = sideBySide(pictures);
+    return Math.max(...row.split('\n').map(width)) <= MAX_ROW_WIDTH ? row : pictures.join('\n\n');
   }
   if (!isStructured(v)) return null;
   const o = v as unknown as Fields;
+  if (tooBig(v.kind, o)) return null;
   switch (v.kind) {
     case 'permutation':
       return drawPermutation(o.a, g); // a: one-line notation
@@ -69,27 +80,39 @@ function draw(v: Value, g: Glyphs): string | null {
       return drawAsm(o.rows, g); // rows: number[][] of 0, 1, -1
     case 'pipeDream':
       return drawPipeDream(o.crosses, g, typeof o.n === 'number' ? o.n : 0); // crosses: [row, column][]
-    case 'partialPermutation':
-      return drawPartialPermutation(o, g);
     case 'matrix':
-      return drawMatrix(o.rows, o.cols, o.entries, g); // rows, cols: numbers; entries: row-major scalars
+      return drawMatrix(o.rows, o.cols, o.entries, g); // rows, cols: numbers; entries: row-major scalars (partialPermutations are matrices)
     default:
       return null;
   }
 }
 
-/** A k x n 0/1 matrix with at most one 1 per row and column; see the note on the fields. */
-function drawPartialPermutation(o: Fields, g: Glyphs): string | null {
-  const rows = partialPermutationRows(o);
-  if (rows === null) return null;
-  if (rows.length === 0 || rows[0].length === 0) return `(the empty ${rows.length} by ${rows[0]?.length ?? 0} partial permutation)`;
-  return drawSignGrid(rows, g, false);
-}
-
-/** Its rows, from `rows: number[][]` if present, else from its record encoding. */
-function partialPermutationRows(o: Fields): number[][] | null {
-  const isRows = (x: unknown): x is number[][] => Array.isArray(x) && x.every((r) => Array.isArray(r));
-  if (isRows(o.rows)) return o.rows;
-  const enc = typeof o.encode === 'function' ? (o.encode() as Fields | null)?.partialPermutation : undefined;
-  return isRows(enc) ? enc : null;
+/** Whether the picture of a value of this kind would be larger than MAX_SIDE along a side. */
+function tooBig(kind: string, o: Fields): boolean {
+  const big = (x: number) => x > MAX_SIDE;
+  switch (kind) {
+    case 'permutation':
+      return big(o.a.length);
+    case 'partition':
+    case 'composition':
+      return big(o.parts.length) || o.parts.some(big);
+    case 'tableau':
+    case 'asm':
+      return big(o.rows.length) || o.rows.some((r: unknown[]) => big(r.length));
+    case 'matching':
+    case 'setPartition':
+      return big((o.p ?? o.rgs).length);
+    case 'dyck':
+      return big(o.steps.length / 2);
+    case 'word':
+      return big(o.letters.length);
+    case 'subset':
+      return o.elems.some(big);
+    case 'pipeDream':
+      return o.crosses.some(([i, j]: [number, number]) => big(i + j));
+    case 'matrix':
+      return big(o.rows) || big(o.cols);
+    default:
+      return false;
+  }
 }

@@ -20,6 +20,6 @@ export function drawPermutation(a: readonly number[], g: Glyphs): string {
   let labels = ' '.repeat(d + 2);
   for (let i = 1; i <= n; i++) labels += cell(String(i));
   lines.push(labels);
-  lines.push('dot at position i (across), height w(i) (up)');
+  lines.push('dots at (i, w(i)): i across, w(i) up');
   return finish(lines);
 }

@@ -56,6 +56,6 @@ export function drawPipeDream(crosses: readonly (readonly [number, number])[], g
   }
   const lines = canvas.lines().slice(0, 2 * n); // the last line is always blank
   const w = pipeExits(crosses, n);
-  lines.push(`w = [${w.join(', ')}]: the pipe entering row i leaves at the top of column w(i)`);
+  lines.push(`w = [${w.join(', ')}]: the pipe from row i exits at column w(i)`);
   return finish(lines);
 }

@@ -20,3 +20,11 @@ describe('permutations', () => {
     expect(out.filter((s) => s.size === undefined).map((s) => s.obj.key())).toEqual(['1,3,4,2', '3,1,2,4']);
   });
 });
+
+describe('permutations: removing a point from its cycle', () => {
+  it('keeps the other cycles (worked example: (1 2)(3 4 5) without 4 is (1 2)(3 4))', () => {
+    // w = 2 1 4 5 3 has cycles (1 2)(3 4 5); removing 4 leaves 3 -> 5 -> 3, standardised to (3 4)
+    const out = [...permutations.shrink!(permutations.prepare([5]), Permutation.from([2, 1, 4, 5, 3]))].map((s) => s.obj.key());
+    expect(out).toContain('2,1,4,3');
+  });
+});

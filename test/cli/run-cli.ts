@@ -1,0 +1,29 @@
+// Running the built command line (dist/, made by `npm test`'s tsc step) as a user would.
+
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+
+export const ROOT = resolve(__dirname, '../..');
+export const BIN = join(ROOT, 'bin', 'hunch');
+
+export interface CliResult {
+  code: number | null;
+  stdout: string;
+  stderr: string;
+}
+
+export function runCli(args: string[], opts: { cwd?: string; env?: Record<string, string>; timeout?: number } = {}): CliResult {
+  const r = spawnSync(process.execPath, [BIN, ...args], {
+    cwd: opts.cwd ?? ROOT,
+    encoding: 'utf8',
+    env: { ...process.env, NO_COLOR: '1', ...opts.env },
+    timeout: opts.timeout ?? 60_000,
+  });
+  return { code: r.status, stdout: r.stdout, stderr: r.stderr };
+}
+
+export function tempDir(prefix = 'hunch-test-'): string {
+  return mkdtempSync(join(tmpdir(), prefix));
+}
