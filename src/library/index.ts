@@ -3,6 +3,8 @@
 import './constructors.js';
 import './permutations.js';
 import './numbers.js';
+import './lists.js';
+import './matchings.js';
 import './partitions.js';
 import './polynomials.js';
 import './qanalogs.js';

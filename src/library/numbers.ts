@@ -55,7 +55,9 @@ defineFunction({
   source: 'OEIS A007318 (Pascal\'s triangle); negative n: Graham, Knuth, Patashnik, Concrete Mathematics, eq. (5.14)',
   impl: (n, k) => {
     const r = C.binomial(n as Int, k as Int, FACTORIAL_MAX);
-    if (r === undefined) fail(`binomial(n, k) is limited to min(k, n - k) <= ${FACTORIAL_MAX}, got binomial(${n}, ${k})`);
+    if (r === undefined) {
+      fail(`binomial(n, k) is limited to k <= ${FACTORIAL_MAX} (or n - k <= ${FACTORIAL_MAX} when n >= 0), got binomial(${n}, ${k})`);
+    }
     return r;
   },
 });

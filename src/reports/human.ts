@@ -21,11 +21,18 @@ function indent(s: string, by: string): string {
     .join('\n');
 }
 
+/** Long values are cut in the report; the counterexample file keeps them whole. */
+const MAX_VALUE_TEXT = 300;
+
+function shorten(s: string): string {
+  return s.length <= MAX_VALUE_TEXT ? s : `${s.slice(0, MAX_VALUE_TEXT)}... (${s.length - MAX_VALUE_TEXT} more characters)`;
+}
+
 function encodedToText(x: unknown): string {
   try {
-    return valueToText(decodeValue(x));
+    return shorten(valueToText(decodeValue(x)));
   } catch {
-    return JSON.stringify(x);
+    return shorten(JSON.stringify(x));
   }
 }
 
@@ -68,7 +75,7 @@ function counterexampleBlock(cx: Counterexample, r: ConjectureResult, s: ReportS
   } else how = 'the counterexample recorded by an earlier run still fails';
   lines.push(`counterexample: ${how}`);
   for (const [name, enc] of Object.entries(cx.bindings)) {
-    const text = cx.text?.[name] ?? encodedToText(enc);
+    const text = cx.text?.[name] ? shorten(cx.text[name]) : encodedToText(enc);
     lines.push(`  ${c.cyan(name)} = ${text}`);
     try {
       const pic = drawValue(decodeValue(enc), { unicode: s.unicode });

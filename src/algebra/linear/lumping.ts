@@ -10,10 +10,10 @@
 // order.
 //
 // The partition is found by colour refinement, comparing the sums through their residues modulo
-// two primes (with pseudo-random weights per colour, so a whole profile is one number). Equal
-// profiles always get equal fingerprints, so every split is genuine; a false merge has chance
-// about 2^-40 and is caught by the exact verification of the final measure, after which the
-// caller solves without lumping.
+// two primes (with pseudo-random multipliers per colour, so a whole profile is one number below
+// 2^46; Schwartz–Zippel: two different profiles collide with chance about 2^-46). Equal profiles
+// always get equal fingerprints, so every split is genuine; a false merge is caught by the exact
+// verification of the final measure, after which the caller solves without lumping.
 
 import { mulMod } from './modular.js';
 import { transitionResidues } from './residues.js';
@@ -58,33 +58,39 @@ export function equitablePartition(c: SparseChain): Partition | null {
   let colour = new Int32Array(n);
   let count = 1;
   for (let round = 0; ; round++) {
-    const w1 = new Float64Array(count), w2 = new Float64Array(count), w3 = new Float64Array(count), w4 = new Float64Array(count);
+    // Per colour, pseudo-random residues for outgoing mass, incoming mass and the colour itself.
+    const w = new Float64Array(6 * count);
     for (let k = 0; k < count; k++) {
-      w1[k] = colourWeight(k, 4 * round + 1, Q1);
-      w2[k] = colourWeight(k, 4 * round + 2, Q2);
-      w3[k] = colourWeight(k, 4 * round + 3, Q1);
-      w4[k] = colourWeight(k, 4 * round + 4, Q2);
+      for (let e = 0; e < 3; e++) {
+        w[6 * k + 2 * e] = colourWeight(k, 6 * round + 2 * e, Q1);
+        w[6 * k + 2 * e + 1] = colourWeight(k, 6 * round + 2 * e + 1, Q2);
+      }
     }
-    const ids = new Map<string, number>();
+    // Fingerprint of s: own colour + outgoing and incoming mass per colour, each colour with its
+    // own random multiplier, modulo Q1 and Q2; the pair is one exact number below 2^46.
+    const ids = new Map<number, number>();
     const next = new Int32Array(n);
     for (let s = 0; s < n; s++) {
-      let o1 = 0, o2 = 0, i1 = 0, i2 = 0;
+      const cs = colour[s];
+      let h1 = w[6 * cs + 4], h2 = w[6 * cs + 5];
       for (let k = c.rowStart[s]; k < c.rowStart[s + 1]; k++) {
-        const col = colour[c.target[k]];
-        o1 = (o1 + mulMod(r1[k], w1[col], Q1)) % Q1;
-        o2 = (o2 + mulMod(r2[k], w2[col], Q2)) % Q2;
+        const col = 6 * colour[c.target[k]];
+        h1 += mulMod(r1[k], w[col], Q1);
+        h2 += mulMod(r2[k], w[col + 1], Q2);
       }
       for (let e = inStart[s]; e < inStart[s + 1]; e++) {
-        const col = colour[inSource[e]];
+        const col = 6 * colour[inSource[e]];
         const k = inEdge[e];
-        i1 = (i1 + mulMod(r1[k], w3[col], Q1)) % Q1;
-        i2 = (i2 + mulMod(r2[k], w4[col], Q2)) % Q2;
+        h1 += mulMod(r1[k], w[col + 2], Q1);
+        h2 += mulMod(r2[k], w[col + 3], Q2);
       }
-      const key = `${colour[s]} ${o1} ${o2} ${i1} ${i2}`;
+      const key = (h1 % Q1) * 8388608 + (h2 % Q2);
       let id = ids.get(key);
       if (id === undefined) ids.set(key, (id = ids.size));
       next[s] = id;
     }
+    // A merge of two colours would be a fingerprint collision; keep the old split then.
+    if (ids.size < count) return null;
     colour = next;
     if (ids.size === count) break;
     count = ids.size;

@@ -2,9 +2,11 @@
 //   1. the closed communicating classes (there must be exactly one; transient states get 0);
 //   2. the closed class lumped by its coarsest equitable partition (lumping.ts);
 //   3. the stationary vector modulo primes p_0, p_1, ... (modularKernel.ts), folded together by
-//      Chinese remaindering and turned into rationals by rational reconstruction; once a
-//      reconstruction is confirmed by one more prime, it is
-//   4. verified exactly against the original chain (verifyStationary.ts) and returned.
+//      Chinese remaindering and turned into rationals by rational reconstruction; as soon as a
+//      reconstruction exists it is
+//   4. verified exactly against the original chain (verifyStationary.ts) and returned; if it
+//      fails, more primes are added (a reconstruction that is stable across an extra prime and
+//      still fails means the system was wrong: see lumping.ts).
 // Nothing is returned that has not passed step 4.
 
 import { fail } from '../../base/errors.js';
@@ -87,13 +89,16 @@ function solveIrreducible(
     used++;
     stats.primes = used;
     if (candidate && agreesModP(candidate, r.x, p)) {
-      if (accept(candidate)) return candidate;
-      // Confirmed by an extra prime yet wrong: either a coincidence (chance about 1/p; more
-      // primes fix it) or a system that is not the chain's (a wrong lumping; give up on it).
+      // Stable across an extra prime, yet it failed the exact test when it was made: either a
+      // coincidence (chance about 1/p; more primes fix it) or a system that is not the chain's
+      // (a wrong lumping, which the caller then drops).
       if (++rejected >= 2) return null;
     }
     crt.add(r.x, p);
     candidate = reconstructVector(crt);
+    // The exact test costs less than one more prime and proves more than agreement with it, so
+    // every reconstruction is tested at once.
+    if (candidate && accept(candidate)) return candidate;
     if (used >= expected) expected = used + 1;
   }
   throw new Error(`the stationary measure did not stabilise within ${maxPrimes} primes`);

@@ -2,21 +2,17 @@
 // (The records layer does the work; this file only wires it to the command.)
 
 import type { CompiledConjecture } from '../../language/conjecture/compiled.js';
-import type { CheckedPiece, ConjectureResult } from '../../runner/result.js';
+import { createCheckRecorder, projectWithoutPlugins, type CheckRecorder } from '../../records/check-recorder.js';
+import { installConjectureHash } from '../../records/plugins.js';
 
-export interface CheckRecorder {
-  regressionCases(compiled: CompiledConjecture[]): Record<string, unknown[]>;
-  piece(id: string, piece: CheckedPiece): void;
-  /** Record a finished result; returns the path of its counterexample file, if one was written. */
-  result(r: ConjectureResult): string | null;
-  junit(path: string, results: ConjectureResult[]): void;
-}
+export type { CheckRecorder };
 
-export function checkRecorder(_ledger: string | boolean, _compiled: CompiledConjecture[]): CheckRecorder {
-  return {
-    regressionCases: () => ({}),
-    piece: () => {},
-    result: () => null,
-    junit: () => {},
-  };
+// The canonical conjecture hash, installed before anything is compiled in this thread.
+// TODO(lead): replace by `await openProject(paths[0])` in runCheck (and openProjectAt(root) in the
+// worker) so that hunch.yaml's plugins are loaded and their file hashes enter the hash.
+installConjectureHash();
+
+export function checkRecorder(ledger: string | boolean, compiled: CompiledConjecture[]): CheckRecorder {
+  const start = compiled[0]?.spec.file ?? process.cwd();
+  return createCheckRecorder(projectWithoutPlugins(start), compiled, { ledger });
 }

@@ -5,7 +5,8 @@
 import { defineFamily } from '../registry.js';
 import type { Shrunk } from '../family.js';
 import { factorialBig, sizeArg, type SizeParam } from '../permutations/permutations.js';
-import { exactArbitrary, type Rng } from '../partitions/exactArbitrary.js';
+import type * as fc from 'fast-check';
+import { FamilyArbitrary } from '../common/arbitrary.js';
 import { Asm } from './asm.js';
 import { asmToTriangle, at, bottomTriangle, entryRange, move, topTriangle, triangleToAsm } from './monotoneTriangles.js';
 
@@ -38,14 +39,14 @@ function emptyRows(n: number): number[][] {
  * triangles, so it suffices to couple the top and bottom triangles. Moves are drawn once per time
  * step and reused as the starting time goes back (doubling).
  */
-export function randomTriangle(n: number, rng: Rng): number[] {
+export function randomTriangle(n: number, rng: fc.Random): number[] {
   const sites: [number, number][] = [];
   for (let k = 1; k < n; k++) for (let i = 1; i <= k; i++) sites.push([k, i]);
   if (sites.length === 0) return bottomTriangle(n);
   const moves: number[] = []; // moves[s] is the move at time -(s+1): site * 2 + direction
   let T = 1;
   for (;;) {
-    while (moves.length < T) moves.push(rng.int(0, 2 * sites.length - 1));
+    while (moves.length < T) moves.push(rng.nextInt(0, 2 * sites.length - 1));
     const lo = bottomTriangle(n), hi = topTriangle(n);
     for (let s = T - 1; s >= 0; s--) {
       const m = moves[s];
@@ -136,16 +137,13 @@ export const asms = defineFamily<SizeParam, Asm>({
     return obj instanceof Asm && obj.n === n;
   },
   compare: compareAsms,
-  arbitrary({ n }) {
-    return exactArbitrary(
-      (rng) => {
+  arbitrary(p): fc.Arbitrary<Asm> {
+    const { n } = p;
+    return new FamilyArbitrary(asms, p, (rng) => {
         const rows = emptyRows(n);
         triangleToAsm(randomTriangle(n, rng), n, rows);
         return new Asm(rows);
-      },
-      (v) => v instanceof Asm && v.n === n,
-      simplify,
-    );
+      });
   },
   *shrink({ n }, obj): Generator<Shrunk<SizeParam, Asm>> {
     const seen = new Set<string>();

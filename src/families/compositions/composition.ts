@@ -29,6 +29,11 @@ export class Composition implements Structured {
     return new Composition(parts.slice());
   }
 
+  /** The parts in order: a composition is a source after `in` (sum(c), max(c)). */
+  elements(): readonly number[] {
+    return this.parts;
+  }
+
   equals(other: Structured): boolean {
     const b = (other as Composition).parts, a = this.parts;
     if (a.length !== b.length) return false;

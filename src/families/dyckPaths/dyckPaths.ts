@@ -4,7 +4,8 @@
 import { defineFamily } from '../registry.js';
 import type { Shrunk } from '../family.js';
 import { sizeArg, type SizeParam } from '../permutations/permutations.js';
-import { exactArbitrary, type Rng } from '../partitions/exactArbitrary.js';
+import type * as fc from 'fast-check';
+import { FamilyArbitrary } from '../common/arbitrary.js';
 import { DyckPath } from './dyckPath.js';
 
 export function catalanBig(n: number): bigint {
@@ -28,12 +29,12 @@ export function compareDyckPaths(a: DyckPath, b: DyckPath): number {
  * starting just after the first lowest point; dropping its final D gives a Dyck path, and each
  * path arises from exactly 2n+1 arrangements.
  */
-export function randomDyckPath(n: number, rng: Rng): DyckPath {
+export function randomDyckPath(n: number, rng: fc.Random): DyckPath {
   const m = 2 * n + 1;
   const s = new Array<number>(m);
   for (let i = 0; i < m; i++) s[i] = i < n ? 1 : -1;
   for (let i = m - 1; i > 0; i--) {
-    const j = rng.int(0, i);
+    const j = rng.nextInt(0, i);
     const t = s[i];
     s[i] = s[j];
     s[j] = t;
@@ -111,12 +112,9 @@ export const dyckPaths = defineFamily<SizeParam, DyckPath>({
     return obj instanceof DyckPath && obj.steps.length === 2 * n;
   },
   compare: compareDyckPaths,
-  arbitrary({ n }) {
-    return exactArbitrary(
-      (rng) => randomDyckPath(n, rng),
-      (v) => v instanceof DyckPath && v.steps.length === 2 * n,
-      (v) => lowerPeaks(v),
-    );
+  arbitrary(p): fc.Arbitrary<DyckPath> {
+    const { n } = p;
+    return new FamilyArbitrary(dyckPaths, p, (rng) => randomDyckPath(n, rng));
   },
   *shrink({ n }, obj): Generator<Shrunk<SizeParam, DyckPath>> {
     const seen = new Set<string>();

@@ -6,7 +6,8 @@
 import { defineFamily } from '../registry.js';
 import type { Shrunk } from '../family.js';
 import { sizeArg } from '../permutations/permutations.js';
-import { exactArbitrary, uniformBelow, type Rng } from '../partitions/exactArbitrary.js';
+import type * as fc from 'fast-check';
+import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 import { Matrix } from '../../algebra/matrix.js';
 import type { Structured } from '../../values/structured.js';
 
@@ -69,7 +70,7 @@ export function comparePartialPermutations(a: Matrix, b: Matrix): number {
 }
 
 /** Exactly uniform: row by row, empty with weight f(rows left, free columns), each free column with weight f(rows left, free - 1). */
-export function randomPartialPermutation(k: number, n: number, rng: Rng): Matrix {
+export function randomPartialPermutation(k: number, n: number, rng: fc.Random): Matrix {
   const free = Array.from({ length: n }, (_, j) => j + 1);
   const img: number[] = [];
   for (let i = 0; i < k; i++) {
@@ -126,15 +127,9 @@ export const partialPermutations = defineFamily<RectParam, Matrix>({
     return obj instanceof Matrix && obj.rows === k && obj.cols === n && rowImages(obj) !== undefined;
   },
   compare: comparePartialPermutations,
-  arbitrary({ k, n }) {
-    return exactArbitrary(
-      (rng) => randomPartialPermutation(k, n, rng),
-      (v) => v instanceof Matrix && v.rows === k && v.cols === n && rowImages(v) !== undefined,
-      (m) => {
-        const img = rowImages(m)!;
-        return img.flatMap((c, i) => (c ? [matrixOfImages(img.map((x, t) => (t === i ? 0 : x)), n)] : []));
-      },
-    );
+  arbitrary(p): fc.Arbitrary<Matrix> {
+    const { k, n } = p;
+    return new FamilyArbitrary(partialPermutations, p, (rng) => randomPartialPermutation(k, n, rng));
   },
   *shrink({ k, n }, obj): Generator<Shrunk<RectParam, Matrix>> {
     const img = rowImages(obj)!;

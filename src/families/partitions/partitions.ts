@@ -7,7 +7,8 @@ import { lexCompare } from '../permutations/permutation.js';
 import type { Shrunk } from '../family.js';
 import { Partition } from './partition.js';
 import { partitionCount } from './partitionCounts.js';
-import { exactArbitrary, uniformBelow, type Rng } from './exactArbitrary.js';
+import type * as fc from 'fast-check';
+import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 
 /** Simplicity: size, then fewer parts, then reverse lexicographic (the lexicographically larger is simpler). */
 export function comparePartitions(a: Partition, b: Partition): number {
@@ -40,7 +41,7 @@ export function nextPartition(parts: number[]): boolean {
  * ch. 10 "RANPAR"): since m p(m) = sum_{d >= 1, j >= 1, jd <= m} d p(m - jd), choose the pair (d, j)
  * with probability d p(m - jd) / (m p(m)), add j parts equal to d, and continue with m - jd.
  */
-export function randomPartition(n: number, rng: Rng): Partition {
+export function randomPartition(n: number, rng: fc.Random): Partition {
   const parts: number[] = [];
   let m = n;
   while (m > 0) {
@@ -107,12 +108,9 @@ export const partitions = defineFamily<SizeParam, Partition>({
     return obj instanceof Partition && obj.size === n;
   },
   compare: comparePartitions,
-  arbitrary({ n }) {
-    return exactArbitrary(
-      (rng) => randomPartition(n, rng),
-      (v) => v instanceof Partition && v.size === n,
-      (v) => [...simplifyPartition(v.parts)].map((q) => new Partition(q)),
-    );
+  arbitrary(p): fc.Arbitrary<Partition> {
+    const { n } = p;
+    return new FamilyArbitrary(partitions, p, (rng) => randomPartition(n, rng));
   },
   *shrink({ n }, obj): Generator<Shrunk<SizeParam, Partition>> {
     for (const q of removeCorners(obj.parts)) yield { params: { n: n - 1 }, size: n - 1, obj: new Partition(q) };

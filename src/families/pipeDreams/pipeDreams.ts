@@ -9,7 +9,8 @@
 import { defineFamily } from '../registry.js';
 import type { Shrunk } from '../family.js';
 import { inversions } from '../permutations/permutation.js';
-import { exactArbitrary, uniformBelow, type Rng } from '../partitions/exactArbitrary.js';
+import type * as fc from 'fast-check';
+import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 import { leftDescents, leftMultiply, permutationArg } from '../reducedWords/reducedWordCounts.js';
 import { PipeDream, tracePipes } from './pipeDream.js';
 
@@ -81,7 +82,7 @@ export function isPipeDreamOf(p: PipeDream, w: readonly number[]): boolean {
 }
 
 /** Exactly uniform: each next (a, i) is drawn with probability proportional to its continuations. */
-export function randomPipeDream(w: readonly number[], rng: Rng): PipeDream {
+export function randomPipeDream(w: readonly number[], rng: fc.Random): PipeDream {
   let v = w.slice(), lastA = Number.MAX_SAFE_INTEGER, lastI = 1;
   const stack: [number, number][] = [];
   while (inversions(v) > 0) {
@@ -157,12 +158,9 @@ export const pipeDreams = defineFamily<PipeParam, PipeDream>({
     return obj instanceof PipeDream && isPipeDreamOf(obj, w);
   },
   compare: comparePipeDreams,
-  arbitrary({ w }) {
-    return exactArbitrary(
-      (rng) => randomPipeDream(w, rng),
-      (v) => v instanceof PipeDream && isPipeDreamOf(v, w),
-      (v) => simplify(v, w),
-    );
+  arbitrary(p): fc.Arbitrary<PipeDream> {
+    const { w } = p;
+    return new FamilyArbitrary(pipeDreams, p, (rng) => randomPipeDream(w, rng));
   },
   *shrink(p, obj): Generator<Shrunk<PipeParam, PipeDream>> {
     for (const q of simplify(obj, p.w)) yield { params: p, obj: q };

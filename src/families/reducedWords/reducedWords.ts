@@ -6,7 +6,8 @@ import { defineFamily } from '../registry.js';
 import type { Shrunk } from '../family.js';
 import { lexCompare } from '../permutations/permutation.js';
 import { Word } from '../words/word.js';
-import { exactArbitrary, uniformBelow, type Rng } from '../partitions/exactArbitrary.js';
+import type * as fc from 'fast-check';
+import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 import { inversions } from '../permutations/permutation.js';
 import { isReducedWordOf, leftDescents, leftMultiply, permutationArg, reducedWordCount } from './reducedWordCounts.js';
 
@@ -20,7 +21,7 @@ export function compareReducedWords(a: Word, b: Word): number {
 }
 
 /** Exactly uniform: the first letter i is drawn with probability R(s_i w) / R(w). */
-export function randomReducedWord(w: readonly number[], rng: Rng): Word {
+export function randomReducedWord(w: readonly number[], rng: fc.Random): Word {
   const letters: number[] = [];
   let v = w.slice();
   while (inversions(v) > 0) {
@@ -91,12 +92,9 @@ export const reducedWords = defineFamily<PermParam, Word>({
     return obj instanceof Word && isReducedWordOf(obj.letters, w);
   },
   compare: compareReducedWords,
-  arbitrary({ w }) {
-    return exactArbitrary(
-      (rng) => randomReducedWord(w, rng),
-      (v) => v instanceof Word && isReducedWordOf(v.letters, w),
-      simplify,
-    );
+  arbitrary(p): fc.Arbitrary<Word> {
+    const { w } = p;
+    return new FamilyArbitrary(reducedWords, p, (rng) => randomReducedWord(w, rng));
   },
   *shrink(p, obj): Generator<Shrunk<PermParam, Word>> {
     for (const u of simplify(obj)) yield { params: p, obj: u };

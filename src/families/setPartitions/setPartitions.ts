@@ -5,7 +5,8 @@ import { defineFamily } from '../registry.js';
 import type { Shrunk } from '../family.js';
 import { sizeArg, type SizeParam } from '../permutations/permutations.js';
 import { lexCompare } from '../permutations/permutation.js';
-import { exactArbitrary, uniformBelow, type Rng } from '../partitions/exactArbitrary.js';
+import type * as fc from 'fast-check';
+import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 import { SetPartition } from './setPartition.js';
 
 // completions[r][m]: the number of ways to extend a restricted growth string whose largest entry
@@ -49,7 +50,7 @@ export function nextRgs(a: number[], prefixMax: number[]): boolean {
 }
 
 /** Exactly uniform: each next entry is drawn with probability proportional to its completions. */
-export function randomSetPartition(n: number, rng: Rng): SetPartition {
+export function randomSetPartition(n: number, rng: fc.Random): SetPartition {
   bellNumber(n);
   const rgs: number[] = [];
   let m = 0;
@@ -106,12 +107,9 @@ export const setPartitions = defineFamily<SizeParam, SetPartition>({
     return obj instanceof SetPartition && obj.n === n;
   },
   compare: compareSetPartitions,
-  arbitrary({ n }) {
-    return exactArbitrary(
-      (rng) => randomSetPartition(n, rng),
-      (v) => v instanceof SetPartition && v.n === n,
-      simplify,
-    );
+  arbitrary(p): fc.Arbitrary<SetPartition> {
+    const { n } = p;
+    return new FamilyArbitrary(setPartitions, p, (rng) => randomSetPartition(n, rng));
   },
   *shrink({ n }, obj): Generator<Shrunk<SizeParam, SetPartition>> {
     if (n > 0) {

@@ -46,6 +46,11 @@ export class Subset implements Structured {
     return new Subset(s);
   }
 
+  /** The elements in increasing order: a subset is a source after `in` (sum(S), all(i in S: ...)). */
+  elements(): readonly number[] {
+    return this.elems;
+  }
+
   equals(other: Structured): boolean {
     const b = (other as Subset).elems, a = this.elems;
     if (a.length !== b.length) return false;

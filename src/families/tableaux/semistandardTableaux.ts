@@ -5,7 +5,8 @@
 import { defineFamily } from '../registry.js';
 import type { Shrunk } from '../family.js';
 import { sizeArg } from '../permutations/permutations.js';
-import { exactArbitrary, uniformBelow, type Rng } from '../partitions/exactArbitrary.js';
+import type * as fc from 'fast-check';
+import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 import { conjugateParts } from '../partitions/partition.js';
 import { Tableau } from './tableau.js';
 import { hookContentCount, partitionArg, sizeOf } from './shapes.js';
@@ -55,7 +56,7 @@ function* horizontalStripsBelow(lam: readonly number[]): Generator<number[]> {
  * Exactly uniform: the cells holding m form a horizontal strip lambda/mu, and mu is chosen with
  * probability s_mu(1^(m-1)) / s_lambda(1^m) (both by the hook-content formula); then recurse.
  */
-export function randomSsyt(parts: readonly number[], m: number, rng: Rng): Tableau {
+export function randomSsyt(parts: readonly number[], m: number, rng: fc.Random): Tableau {
   const rows = parts.map((l) => new Array<number>(l).fill(0));
   let lam = parts.slice();
   for (let k = m; k >= 1 && lam.length > 0; k--) {
@@ -129,16 +130,13 @@ export const semistandardTableaux = defineFamily<SsytParam, Tableau>({
     return obj instanceof Tableau && isSemistandard(obj, parts, m);
   },
   compare: compareSemistandard,
-  arbitrary({ parts, m }) {
-    return exactArbitrary(
-      (rng) => randomSsyt(parts, m, rng),
-      (v) => v instanceof Tableau && isSemistandard(v, parts, m),
-      simplify,
-    );
+  arbitrary(p): fc.Arbitrary<Tableau> {
+    const { parts, m } = p;
+    return new FamilyArbitrary(semistandardTableaux, p, (rng) => randomSsyt(parts, m, rng));
   },
   *shrink({ parts, m, n }, obj): Generator<Shrunk<SsytParam, Tableau>> {
-    // Size-reducing: remove a corner cell holding the largest entry of its column's strip
-    // (any corner whose entry is the row's largest and has no entry below it).
+    // Size-reducing: remove a corner cell (the result is semistandard of the smaller shape, same m).
+    // Lowering m with the same object is not offered: it is not simpler as an object.
     for (let i = obj.rows.length - 1; i >= 0; i--) {
       const row = obj.rows[i];
       const j = row.length - 1;

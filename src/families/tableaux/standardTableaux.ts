@@ -3,7 +3,8 @@
 
 import { defineFamily } from '../registry.js';
 import type { Shrunk } from '../family.js';
-import { exactArbitrary, type Rng } from '../partitions/exactArbitrary.js';
+import type * as fc from 'fast-check';
+import { FamilyArbitrary } from '../common/arbitrary.js';
 import { Tableau } from './tableau.js';
 import { hookLengthCount, partitionArg, sizeOf } from './shapes.js';
 import { compareStandard } from './tableauOrder.js';
@@ -25,11 +26,11 @@ export function sameShape(t: Tableau, parts: readonly number[]): boolean {
  * other cell of its hook until reaching a corner, put the largest remaining entry there. Each
  * corner is reached with probability f^{lambda - corner} / f^lambda, so the tableau is uniform.
  */
-export function hookWalk(parts: readonly number[], rng: Rng): Tableau {
+export function hookWalk(parts: readonly number[], rng: fc.Random): Tableau {
   const lam = parts.slice();
   const rows = parts.map((l) => new Array<number>(l).fill(0));
   for (let m = sizeOf(parts); m >= 1; m--) {
-    let c = rng.int(0, m - 1), i = 0;
+    let c = rng.nextInt(0, m - 1), i = 0;
     while (c >= lam[i]) c -= lam[i++];
     let j = c;
     for (;;) {
@@ -37,7 +38,7 @@ export function hookWalk(parts: readonly number[], rng: Rng): Tableau {
       let leg = 0;
       while (i + leg + 1 < lam.length && lam[i + leg + 1] > j) leg++;
       if (arm + leg === 0) break;
-      const t = rng.int(0, arm + leg - 1);
+      const t = rng.nextInt(0, arm + leg - 1);
       if (t < arm) j += t + 1;
       else i += t - arm + 1;
     }
@@ -105,12 +106,9 @@ export const standardTableaux = defineFamily<ShapeParam, Tableau>({
     return obj instanceof Tableau && sameShape(obj, parts) && obj.isStandard();
   },
   compare: compareStandard,
-  arbitrary({ parts }) {
-    return exactArbitrary(
-      (rng) => hookWalk(parts, rng),
-      (v) => v instanceof Tableau && sameShape(v, parts) && v.isStandard(),
-      simplify,
-    );
+  arbitrary(p): fc.Arbitrary<Tableau> {
+    const { parts } = p;
+    return new FamilyArbitrary(standardTableaux, p, (rng) => hookWalk(parts, rng));
   },
   *shrink({ parts, n }, obj): Generator<Shrunk<ShapeParam, Tableau>> {
     if (n > 0) {

@@ -28,6 +28,11 @@ export class Word implements Structured {
     return new Word(letters.slice());
   }
 
+  /** The letters in order: a word is a source after `in`. */
+  elements(): readonly number[] {
+    return this.letters;
+  }
+
   equals(other: Structured): boolean {
     const b = (other as Word).letters, a = this.letters;
     if (a.length !== b.length) return false;

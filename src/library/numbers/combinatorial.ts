@@ -61,6 +61,10 @@ export function fallingBinomial(n: bigint, k: number): bigint {
 
 /** C(n, k) for integers n (any sign) and k, with C(n, k) = 0 for k < 0; k or n - k must be small. */
 export function binomial(n: Int, k: Int, kMax: number): Int | undefined {
+  if (typeof n === 'number' && typeof k === 'number' && n >= 0 && n <= 60) {
+    if (k < 0 || k > n) return 0;
+    return smallBinomial(n, Math.min(k, n - k));
+  }
   const N = toBig(n), K = toBig(k);
   if (K < 0n) return 0;
   if (N >= 0n) {

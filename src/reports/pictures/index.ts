@@ -30,7 +30,7 @@ export function drawValue(v: Value, opts: PictureOptions): string | null {
   return draw(v, glyphsFor(opts.unicode));
 }
 
-/** The fields read from each kind's class (see src/families/ and src/algebra/matrix.ts). */
+/** A value read by field name; the fields each kind relies on are named beside its case in draw(). */
 type Fields = Record<string, any>;
 
 /**

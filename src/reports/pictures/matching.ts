@@ -39,7 +39,7 @@ export function drawMatching(p: readonly number[], g: Glyphs): string {
   const d = digits(m);
   const step = d + 1;
   const x = (i: number) => (i - 1) * step + d - 1; // under the last digit of the label
-  const canvas = new Canvas(top + 1, x(m) + 1);
+  const canvas = new Canvas(top, x(m) + 1);
   const row = (h: number) => top - h; // height h is drawn on canvas row top - h
   // Bars first, then legs, so a leg meeting a bar turns it into a crossing.
   arcs.forEach(([a, b], k) => {
@@ -53,7 +53,7 @@ export function drawMatching(p: readonly number[], g: Glyphs): string {
       for (const c of [x(a), x(b)]) canvas.set(row(h), c, canvas.get(row(h), c) === g.horizontal ? g.cross : g.vertical);
     }
   });
-  const lines = canvas.lines().slice(0, top);
+  const lines = canvas.lines();
   let labels = '';
   for (let i = 1; i <= m; i++) labels += (i > 1 ? ' ' : '') + padLeft(String(i), d);
   lines.push(labels);

@@ -10,7 +10,7 @@ export function drawPermutation(a: readonly number[], g: Glyphs): string {
   if (n === 0) return '(the empty permutation)';
   const d = digits(n);
   const cell = (s: string) => ' ' + padLeft(s, d);
-  const lines = [`w = [${a.join(', ')}]`];
+  const lines = [`w = ${a.join(' ')}`]; // one-line notation
   for (let v = n; v >= 1; v--) {
     let line = padLeft(String(v), d) + ' ' + g.vertical;
     for (let i = 0; i < n; i++) line += cell(a[i] === v ? g.dot : g.empty);

@@ -9,7 +9,7 @@ describe('permutation diagrams', () => {
       fc.property(fc.integer({ min: 1, max: 25 }).chain((n) => fc.shuffledSubarray(Array.from({ length: n }, (_, i) => i + 1), { minLength: n, maxLength: n })), (a) => {
         const n = a.length;
         const lines = drawPermutation(a, UNICODE).split('\n');
-        expect(lines[0]).toBe(`w = [${a.join(', ')}]`);
+        expect(lines[0]).toBe(`w = ${a.join(' ')}`);
         const rows = lines.slice(1, n + 1);
         rows.forEach((line, k) => {
           const v = n - k;

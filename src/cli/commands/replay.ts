@@ -1,0 +1,80 @@
+// hunch replay FILE: re-evaluate a counterexample file from the file alone.
+// Exit 0 it still refutes its conjecture, 1 it no longer does, 2 the file cannot be read (or needs
+// plugins this project does not have).
+
+import { dirname } from 'node:path';
+import '../../families/index.js';
+import '../../library/index.js';
+import { decodeValue } from '../../values/decode.js';
+import { valueToText } from '../../values/operations.js';
+import { openProject } from '../../records/open-project.js';
+import { replayCounterexample } from '../../records/replay.js';
+import { EXIT } from '../errors.js';
+import type { AddCommand } from './index.js';
+
+function text(x: unknown): string {
+  try {
+    return valueToText(decodeValue(x));
+  } catch {
+    return JSON.stringify(x);
+  }
+}
+
+export const addReplayCommand: AddCommand = (program, t, setExit) => {
+  program
+    .command('replay')
+    .description('re-evaluate a counterexample file: exit 0 if it still refutes its conjecture, 1 if not')
+    .argument('<file>', 'a counterexample file (counterexamples/<id>.yaml)')
+    .option('--json', 'print the replay as JSON')
+    .action(async (file: string, flags: { json?: boolean }) => {
+      const c = t.color;
+      // The local project: the one holding the file, else the current folder's. Only its own
+      // hunch.yaml can bring plugins in.
+      const project = await openProject(dirname(file));
+      const r = replayCounterexample(file, project);
+      const code = r.verdict === 'refutes' ? EXIT.ok : r.verdict === 'needs-plugins' ? EXIT.invalid : EXIT.contradicted;
+      if (flags.json) {
+        t.out(JSON.stringify({ ...r, file: undefined, conjecture: r.file.conjecture, hash: r.file.hash }, null, 2) + '\n');
+        setExit(code);
+        return;
+      }
+      const id = c.bold(r.file.conjecture);
+      if (r.verdict === 'needs-plugins') {
+        t.err(
+          `${c.red('error:')} ${file} uses functions from plugins this project does not load, so it was not run:\n` +
+            r.missingPlugins.map((p) => `    ${p.file} (sha256 ${p.sha256.slice(0, 12)}…): ${p.functions.join(', ')}\n`).join('') +
+            'Plugins are code and are loaded only from your own hunch.yaml: if you trust them, get the plugin files from\n' +
+            'whoever sent this file, list them under "plugins:" in hunch.yaml, and replay again.\n',
+        );
+        setExit(code);
+        return;
+      }
+      for (const p of r.changedPlugins)
+        t.err(`${c.yellow('warning:')} the plugin providing ${p.functions.join(', ')} differs from the one the case was found with (${p.file}).\n`);
+      if (!r.embeddedHashMatches)
+        t.err(`${c.yellow('warning:')} the conjecture inside ${file} was edited after the file was written (its hash no longer matches); replaying it as it is now.\n`);
+      if (r.local)
+        t.err(
+          `${c.yellow('note:')} ${r.file.conjecture} in ${r.local.file} has changed since this counterexample was found, so it is replayed against the conjecture as written in the file. What changed:\n` +
+            r.local.differences.map((d) => `    ${d}\n`).join(''),
+        );
+      const caseText = Object.entries(r.bindings).map(([k, v]) => `    ${k} = ${v}`).join('\n');
+      switch (r.verdict) {
+        case 'refutes':
+          t.out(`${c.green('still refutes')} ${id}\n${caseText}\n`);
+          for (const [k, v] of Object.entries(r.values)) t.out(`    ${c.cyan(k)} = ${text(v)}\n`);
+          if (r.sides) t.out(`    the two sides: ${text(r.sides[0])} and ${text(r.sides[1])}\n`);
+          break;
+        case 'holds':
+          t.out(`${c.red('no longer refutes')} ${id}: the claim holds for this case\n${caseText}\n`);
+          break;
+        case 'excluded':
+          t.out(`${c.red('no longer refutes')} ${id}: "where" now excludes this case\n${caseText}\n`);
+          break;
+        case 'error':
+          t.out(`${c.red('no longer refutes')} ${id}: the case cannot be evaluated: ${r.error}\n${caseText}\n`);
+          break;
+      }
+      setExit(code);
+    });
+};
