@@ -106,37 +106,37 @@ defineFunction({
 defineFunction({
   name: 'conjugate',
   topic,
-  params: [{ name: 'lambda', type: 'partition' }],
+  params: [{ name: 'lambda', type: ['partition', 'list'] }],
   returns: 'partition',
   description: "the conjugate partition lambda' (the transposed Young diagram)",
   example: 'conjugate(partition([3, 1]))',
   exampleValue: 'partition([2, 1, 1])',
   source: 'Macdonald, Symmetric Functions and Hall Polynomials, I.1',
-  impl: (l) => new Partition(conjugateParts((l as Partition).parts)),
+  impl: (l) => new Partition(conjugateParts(partitionArg(l))),
 });
 
 defineFunction({
   name: 'hooks',
   topic,
-  params: [{ name: 'lambda', type: 'partition' }],
+  params: [{ name: 'lambda', type: ['partition', 'list'] }],
   returns: 'list',
   description: 'the hook lengths of the cells of lambda, as one list read row by row',
   example: 'hooks(partition([3, 1]))',
   exampleValue: '[4, 2, 1, 1]',
   source: 'Macdonald, Symmetric Functions and Hall Polynomials, I.1 Example 1; hook length formula (Frame, Robinson and Thrall 1954)',
-  impl: (l) => hookLengths((l as Partition).parts).flat(),
+  impl: (l) => hookLengths(partitionArg(l)).flat(),
 });
 
 defineFunction({
   name: 'contents',
   topic,
-  params: [{ name: 'lambda', type: 'partition' }],
+  params: [{ name: 'lambda', type: ['partition', 'list'] }],
   returns: 'list',
   description: 'the contents j - i of the cells (i, j) of lambda, as one list read row by row',
   example: 'contents(partition([3, 1]))',
   exampleValue: '[0, 1, 2, -1]',
   source: 'Macdonald, Symmetric Functions and Hall Polynomials, I.1 Example 3',
-  impl: (l) => contentsOf((l as Partition).parts).flat(),
+  impl: (l) => contentsOf(partitionArg(l)).flat(),
 });
 
 defineFunction({

@@ -182,7 +182,7 @@ export function counterexampleText(f: CounterexampleFile, texts?: Record<string,
         if (node.items.length && node.items.every((p) => isScalar(p.value) && typeof p.value.value === 'number')) node.flow = true;
       },
     });
-  return header(f, t) + doc.toString({ lineWidth: 0 });
+  return header(f, t) + doc.toString({ lineWidth: 0, flowCollectionPadding: false });
 }
 
 /**

@@ -39,7 +39,11 @@ export function describeCoverage(checked: CheckedPiece[]): CoverageText {
     const whole = ex.filter((p) => !p.partial);
     const rng = whole.length ? sizeRanges(whole) : '';
     const cases = formatCount(sum(ex));
-    exhaustive = rng
+    // An aggregate claim (no family binding) is one case per size: say what that means.
+    const aggregate = ex.every((p) => p.cases + p.skipped <= 1) && ex.length > 1;
+    exhaustive = rng && aggregate
+      ? `${rng} exhaustive (one claim about the whole of each size)${partial(ex)}`
+      : rng
       ? `${rng} exhaustive, ${cases} case${sum(ex) === 1 ? '' : 's'}${excluded(ex)}${partial(ex)}`
       : Object.keys(ex[0].size).length === 0
         ? `every case, ${cases} case${sum(ex) === 1 ? '' : 's'}${excluded(ex)}${partial(ex)}`

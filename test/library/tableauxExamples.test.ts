@@ -45,4 +45,15 @@ describe('examples', () => {
     ];
     for (const [f, v] of expected) expect(ev(f.example)).toBe(v);
   });
+  it('indexing: lambda[i] is 0 past the length, T[i] is a row, kept rows do not change under enumeration', () => {
+    expect(ev('partition([3, 1])[2]')).toBe('1');
+    expect(ev('partition([3, 1])[5]')).toBe('0');
+    expect(ev('tableau([[1, 2], [3]])[2]')).toBe('[3]');
+    expect(ev('list(T in standardTableaux(partition([2, 1])): T[1])')).toBe('[[1, 2], [1, 3]]');
+    expect(ev('list(T in standardTableaux(partition([2, 1])): T)')).toBe('[tableau([[1, 2], [3]]), tableau([[1, 3], [2]])]');
+    expect(ev('setPartition([[1, 3], [2]])[2]')).toBe('[2]');
+    expect(ev('sum(l in partitions(6): syt(l)^2)')).toBe('720');
+    expect(ev('count(T in standardTableaux([3, 2]))')).toBe('5');
+    expect(() => ev('tableau([[1, 2], [3]])[3]')).toThrow(/out of range/);
+  });
 });

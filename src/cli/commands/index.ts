@@ -5,6 +5,7 @@ import type { Terminal } from '../terminal.js';
 import { addCheckCommand } from './check.js';
 import { addListCommand } from './list.js';
 import { addEvalCommand } from './eval.js';
+import { addTableCommand } from './table.js';
 import { addInitCommand } from './init.js';
 import { addMergeCommand } from './merge.js';
 import { addReplayCommand } from './replay.js';
@@ -13,4 +14,4 @@ import { addStatusCommand } from './status.js';
 /** Adds a command; the action reports its exit code through setExit. */
 export type AddCommand = (program: Command, t: Terminal, setExit: (code: number) => void) => void;
 
-export const commands: AddCommand[] = [addCheckCommand, addEvalCommand, addListCommand, addStatusCommand, addReplayCommand, addMergeCommand, addInitCommand];
+export const commands: AddCommand[] = [addCheckCommand, addEvalCommand, addTableCommand, addListCommand, addStatusCommand, addReplayCommand, addMergeCommand, addInitCommand];

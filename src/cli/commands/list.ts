@@ -8,6 +8,7 @@ import '../../library/index.js';
 import { allFunctions, signatureOf } from '../../library/registry.js';
 import { EXIT } from '../errors.js';
 import type { AddCommand } from './index.js';
+import { REDUCERS } from '../../language/expr/index.js';
 
 export const addListCommand: AddCommand = (program, t, setExit) => {
   program
@@ -22,7 +23,11 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
       let showF = true, showFn = true;
       let fnFilter = (_: (typeof fns)[number]) => true;
       let famFilter = (_: (typeof fams)[number]) => true;
-      if (what === 'families') showFn = false;
+      const showForms = what === undefined || what === 'forms';
+      if (what === 'forms') {
+        showF = false;
+        showFn = false;
+      } else if (what === 'families') showFn = false;
       else if (what === 'functions') showF = false;
       else if (what) {
         if (topics.includes(what)) {
@@ -32,7 +37,7 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
           fnFilter = (f) => f.name === what;
           famFilter = (f) => f.name === what;
         } else {
-          const s = nearest(what, ['families', 'functions', ...topics, ...fns.map((f) => f.name), ...fams.map((f) => f.name)]);
+          const s = nearest(what, ['families', 'functions', 'forms', ...topics, ...fns.map((f) => f.name), ...fams.map((f) => f.name)]);
           throw new InputError(`nothing is listed under "${what}"${s ? `; did you mean ${s}?` : ''} (topics: ${topics.join(', ')})`, undefined, what, s);
         }
       }
@@ -53,6 +58,11 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
         return;
       }
       const c = t.color;
+      if (showForms) {
+        t.out(c.bold('Language forms') + ' (comprehensions; each also reduces a plain list: sum([1,2,3]))\n');
+        t.out(`  ${REDUCERS.join(', ')}\n`);
+        t.out('    e.g. sum(i in 1..n: i^2), count(w in permutations(n) where des(w) == 1), all(x in L: x > 0)\n\n');
+      }
       if (selF.length) {
         t.out(c.bold('Families') + '\n');
         for (const f of selF) {

@@ -17,9 +17,8 @@ export class Asm implements Structured {
   }
 
   /** Row i (1-based). */
-  at(i: number): number[] {
-    if (!(i >= 1 && i <= this.rows.length)) fail(`row ${i} of a ${this.rows.length} x ${this.rows.length} matrix does not exist`);
-    return this.rows[i - 1];
+  at(i: number): number[] | undefined {
+    return i >= 1 && i <= this.rows.length ? this.rows[i - 1].slice() : undefined;
   }
 
   /** The number of -1 entries. */

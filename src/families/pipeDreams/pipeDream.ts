@@ -11,17 +11,34 @@ export class PipeDream implements Structured {
   readonly kind = 'pipeDream';
   transient = false;
 
+  /**
+   * The side of the staircase it is drawn in (w in S_n): given by pipeDreams(w), otherwise the
+   * smallest n with every cross (i, j) at i + j <= n. Not part of equality or the encoding.
+   */
+  readonly n: number;
+
   /** Trusts that `crosses` are distinct and sorted lexicographically; use PipeDream.from for user data. */
-  constructor(readonly crosses: [number, number][]) {}
+  constructor(
+    readonly crosses: [number, number][],
+    n?: number,
+  ) {
+    let m = 1;
+    for (const [i, j] of crosses) if (i + j > m) m = i + j;
+    this.n = n ?? m;
+  }
 
   get size(): number {
     return this.crosses.length;
   }
 
   /** The i-th cross (1-based, in lexicographic order) as [row, column]. */
-  at(i: number): number[] {
-    if (!(i >= 1 && i <= this.crosses.length)) fail(`cross ${i} of a pipe dream with ${this.crosses.length} crosses does not exist`);
-    return this.crosses[i - 1];
+  at(i: number): number[] | undefined {
+    return i >= 1 && i <= this.crosses.length ? this.crosses[i - 1].slice() : undefined;
+  }
+
+  /** The number of crosses (what P[i] ranges over). */
+  get length(): number {
+    return this.crosses.length;
   }
 
   has(i: number, j: number): boolean {
@@ -61,7 +78,7 @@ export class PipeDream implements Structured {
   }
 
   copy(): PipeDream {
-    return new PipeDream(this.crosses.map((c) => [c[0], c[1]] as [number, number]));
+    return new PipeDream(this.crosses.map((c) => [c[0], c[1]] as [number, number]), this.n);
   }
 }
 

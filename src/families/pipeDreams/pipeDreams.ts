@@ -6,6 +6,7 @@
 // (i_k, a_k - i_k + 1), read top row first and right to left in each row. Their number is
 // S_w(1, ..., 1).
 
+import { fail } from '../../base/errors.js';
 import { defineFamily } from '../registry.js';
 import type { Shrunk } from '../family.js';
 import { inversions } from '../permutations/permutation.js';
@@ -21,6 +22,7 @@ export interface PipeParam {
 }
 
 const memo = new Map<string, bigint>();
+const MEMO_LIMIT = 2_000_000;
 
 /** The next (a, i) pairs allowed after (lastA, lastI) with v still to be written. */
 function* steps(v: readonly number[], lastA: number, lastI: number): Generator<[number, number]> {
@@ -36,6 +38,7 @@ function continuations(v: number[], lastA: number, lastI: number): bigint {
   const key = `${v.join(',')}|${lastA}|${lastI}`;
   const hit = memo.get(key);
   if (hit !== undefined) return hit;
+  if (memo.size >= MEMO_LIMIT) fail(`counting the pipe dreams of a permutation this large needs more than ${MEMO_LIMIT} intermediate counts`);
   let s = 0n;
   for (const [a, i] of steps(v, lastA, lastI)) s += continuations(leftMultiply(v, a), a, i);
   memo.set(key, s);
@@ -101,7 +104,7 @@ export function randomPipeDream(w: readonly number[], rng: fc.Random): PipeDream
   }
   const out = stack.map(() => [0, 0] as [number, number]);
   sortCrosses(stack, out);
-  return new PipeDream(out);
+  return new PipeDream(out, w.length);
 }
 
 /** Lexicographically smaller pipe dreams of w: move one cross up into the next column (ladder-like moves), checked by tracing. */
@@ -113,7 +116,7 @@ function* simplify(p: PipeDream, w: readonly number[]): Generator<PipeDream> {
       const moved = p.crosses.filter((_, t) => t !== k);
       moved.push([r, j + 1]);
       moved.sort((x, y) => x[0] - y[0] || x[1] - y[1]);
-      const q = new PipeDream(moved);
+      const q = new PipeDream(moved, w.length);
       if (isPipeDreamOf(q, w) && comparePipeDreams(q, p) < 0) yield q;
     }
   }
@@ -136,7 +139,7 @@ export const pipeDreams = defineFamily<PipeParam, PipeDream>({
     return pipeDreamCount(w);
   },
   enumerate({ w, length }, visit) {
-    const p = new PipeDream(Array.from({ length }, () => [0, 0] as [number, number]));
+    const p = new PipeDream(Array.from({ length }, () => [0, 0] as [number, number]), w.length);
     p.transient = true;
     const stack: [number, number][] = [];
     const go = (v: number[], lastA: number, lastI: number): boolean => {

@@ -8,6 +8,8 @@ import { Permutation, inversions } from '../permutations/permutation.js';
 import type { Value } from '../../values/value.js';
 
 const memo = new Map<string, bigint>();
+/** Bounds the memory of the memo (about 100 bytes an entry); S_9 fits entirely. */
+const MEMO_LIMIT = 1_000_000;
 
 /** Left descents of w, increasing: i with w^{-1}(i+1) < w^{-1}(i). */
 export function leftDescents(w: readonly number[]): number[] {
@@ -32,6 +34,9 @@ export function reducedWordCount(w: readonly number[]): bigint {
   const key = w.slice(0, n).join(',');
   const hit = memo.get(key);
   if (hit !== undefined) return hit;
+  if (memo.size >= MEMO_LIMIT) {
+    fail(`counting reduced words needs every permutation below w in weak order; w = [${w.join(', ')}] has too many (over ${MEMO_LIMIT})`);
+  }
   let s = 0n;
   for (const i of leftDescents(w.slice(0, n))) s += reducedWordCount(leftMultiply(w.slice(0, n), i));
   memo.set(key, s);

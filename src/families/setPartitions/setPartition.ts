@@ -36,10 +36,14 @@ export class SetPartition implements Structured {
   }
 
   /** The i-th block (1-based, by least element). */
-  at(i: number): number[] {
+  at(i: number): number[] | undefined {
     const bs = this.blocks();
-    if (!(i >= 1 && i <= bs.length)) fail(`block ${i} of a set partition with ${bs.length} blocks does not exist`);
-    return bs[i - 1];
+    return i >= 1 && i <= bs.length ? bs[i - 1] : undefined;
+  }
+
+  /** The number of blocks (what s[i] ranges over). */
+  get length(): number {
+    return this.blockCount;
   }
 
   static fromBlocks(blocks: readonly unknown[]): SetPartition {

@@ -25,10 +25,14 @@ export class Tableau implements Structured {
     return s;
   }
 
-  /** Row i (1-based) as a list. */
-  at(i: number): number[] {
-    if (!(i >= 1 && i <= this.rows.length)) fail(`row ${i} of a tableau with ${this.rows.length} rows does not exist`);
-    return this.rows[i - 1];
+  /** The number of rows (what T[i] ranges over). */
+  get length(): number {
+    return this.rows.length;
+  }
+
+  /** Row i (1-based) as a fresh list (the tableau may be transient); undefined out of range. */
+  at(i: number): number[] | undefined {
+    return i >= 1 && i <= this.rows.length ? this.rows[i - 1].slice() : undefined;
   }
 
   /** Whether the entries are 1..n, each once (rows and columns then increase strictly). */

@@ -1,0 +1,45 @@
+// hunch table EXPR --over NAME=A..B: tabulate an expression and say what it notices.
+
+import '../../families/index.js';
+import '../../library/index.js';
+import { evaluate } from '../../language/expr/index.js';
+import { detectProperties } from '../../reports/sequence-properties.js';
+import { encodeValue, valueToText } from '../../values/operations.js';
+import type { Value } from '../../values/value.js';
+import { EXIT } from '../errors.js';
+import { collect, parseRangeOption } from '../options.js';
+import type { AddCommand } from './index.js';
+
+export const addTableCommand: AddCommand = (program, t, setExit) => {
+  program
+    .command('table')
+    .description('tabulate an expression over a range and list the properties every value shares')
+    .argument('<expr>', 'the expression, e.g. "count(w in involutions(n))"')
+    .requiredOption('--over <NAME=A..B>', 'the range to tabulate over')
+    .option('--let <NAME=EXPR>', 'a named value the expression may use (repeatable; may use NAME)', collect)
+    .option('--indeterminates <NAMES>', 'polynomial variables, comma-separated (e.g. q,x)')
+    .option('--json', 'as JSON')
+    .action((expr: string, flags: { over: string; let?: string[]; indeterminates?: string; json?: boolean }) => {
+      const [name, lo, hi] = parseRangeOption(flags.over, '--over');
+      const vars = flags.indeterminates ? flags.indeterminates.split(',').map((s) => s.trim()).filter(Boolean) : [];
+      const extra: Array<[string, string]> = (flags.let ?? []).map((l) => {
+        const i = l.indexOf('=');
+        return [l.slice(0, i).trim(), l.slice(i + 1)];
+      });
+      const rows: Array<[number, Value]> = [];
+      for (let v = lo; v <= hi; v++) rows.push([v, evaluate(expr, [[name, String(v)], ...extra], vars)]);
+      const props = detectProperties(rows.map((r) => r[1]));
+      if (flags.json) {
+        t.out(JSON.stringify({ over: name, rows: rows.map(([v, x]) => ({ [name]: v, value: encodeValue(x) })), properties: props }, null, 2) + '\n');
+      } else {
+        const w = Math.max(name.length, String(hi).length, String(lo).length);
+        t.out(`${t.color.bold(name.padStart(w))}  ${t.color.bold(expr)}\n`);
+        for (const [v, x] of rows) t.out(`${String(v).padStart(w)}  ${valueToText(x)}\n`);
+        if (props.length) {
+          t.out(`\nAt every ${name} in ${lo}..${hi}: ${props.join(', ')}.\n`);
+          t.out(t.color.dim('(Observed on these values only: a hint for a conjecture, not a theorem.)\n'));
+        }
+      }
+      setExit(EXIT.ok);
+    });
+};
