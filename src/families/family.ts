@@ -40,6 +40,12 @@ export interface Family<P = unknown, T extends Structured = Structured> {
    * (mutated in place afterwards; see Structured.transient). Returns true if `visit` stopped it.
    */
   enumerate(p: P, visit: Visit<T>): boolean;
+  /**
+   * Optional (issue 7): visit only the objects with indices lo..hi-1 of `enumerate`'s order, in that
+   * order, without walking the ones before (unranking). Parallel and sharded checks cut a size into
+   * such ranges; a family without it is cut by enumerating from the start and skipping.
+   */
+  enumerateRange?(p: P, lo: bigint, hi: bigint, visit: Visit<T>): boolean;
   /** Whether a value is an object of this family with these parameters. */
   isMember(p: P, obj: Structured): boolean;
   /**

@@ -41,7 +41,7 @@ export function createCheckRecorder(project: Project, compiled: CompiledConjectu
     regressionCases(list) {
       const out: Record<string, unknown[]> = {};
       for (const cc of list) {
-        const enc = readRegressionEncoded(project.root, cc.spec, (m) => warnings.push(m));
+        const enc = readRegressionEncoded(project.root, cc.spec, (m) => warnings.push(m), cc.hash);
         if (enc) out[cc.spec.id] = enc;
       }
       return out;

@@ -187,7 +187,8 @@ export function counterexampleText(f: CounterexampleFile, texts?: Record<string,
 
 /**
  * Write counterexamples/<id>.yaml under the project root, atomically. Returns its path relative to
- * the current folder (for the replay command). A regression counterexample leaves the file as is.
+ * the current folder (for the replay command). A saved case that still fails (phase 'regression')
+ * leaves the file as is unless the conjecture changed since it was written.
  */
 export function writeCounterexampleFile(
   root: string,
@@ -199,7 +200,15 @@ export function writeCounterexampleFile(
   if (!cx) return null;
   const path = counterexamplePath(root, spec.id);
   const shown = relative(process.cwd(), path) || path;
-  if (cx.phase === 'regression') return shown;
+  if (cx.phase === 'regression') {
+    // The saved case still fails. Keep the file while it describes the conjecture as it stands;
+    // after a change, rewrite it so that it holds the current conjecture (replayable as it is now).
+    try {
+      if (readCounterexampleFile(path).hash === result.hash) return shown;
+    } catch {
+      // unreadable: rewrite it below
+    }
+  }
   writeFileAtomic(path, counterexampleText(counterexampleRecord(spec, result.hash, cx, shown, plugins), cx.text));
   return shown;
 }
@@ -292,7 +301,12 @@ export function bindingsInOrder(f: CounterexampleFile, names: readonly string[])
  * in the conjecture's `for` order; null when there is none or it no longer fits the conjecture.
  * A damaged file is reported through `warn` and skipped (it must not stop a check).
  */
-export function readRegressionEncoded(root: string, spec: ConjectureSpec, warn?: (message: string) => void): unknown[] | null {
+/**
+ * The saved counterexample's bindings, to be tried first — only when it was found for the
+ * conjecture as it stands now (`hash`): after an edit, the old case may no longer be the simplest,
+ * so the full check runs instead (and rewrites the file).
+ */
+export function readRegressionEncoded(root: string, spec: ConjectureSpec, warn?: (message: string) => void, hash?: string): unknown[] | null {
   const path = counterexamplePath(root, spec.id);
   let f: CounterexampleFile;
   try {
@@ -306,6 +320,7 @@ export function readRegressionEncoded(root: string, spec: ConjectureSpec, warn?:
     throw e;
   }
   if (f.conjecture !== spec.id) return null;
+  if (hash !== undefined && f.hash !== hash) return null;
   return bindingsInOrder(f, spec.bindings.map((b) => b.name));
 }
 

@@ -23,6 +23,8 @@ export interface RunRequest {
   count: number | null;
   seed: string | null;
   budgetMs: number | null;
+  /** The project root: a worker thread opens the project there (plugins, the canonical hash). */
+  root: string | null;
   /** Encoded regression cases by conjecture id (from counterexample files). */
   regression: Record<string, unknown[]>;
 }

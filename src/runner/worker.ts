@@ -6,6 +6,9 @@ import '../library/index.js';
 import '../families/index.js';
 import { decodeValue } from '../values/decode.js';
 import { prepareRun, runSession, type RunRequest } from './session.js';
+// The worker is the composition root of its thread, like the CLI of the main one: it opens the
+// project (plugins, canonical hash) before compiling, so it may reach up to the records layer.
+import { openProjectAt } from '../records/open-project.js';
 
 export type WorkerMessage =
   | { type: 'start'; id: string }
@@ -19,6 +22,7 @@ const { request, flag } = workerData as { request: RunRequest; flag: Int32Array 
 const post = (m: WorkerMessage) => parentPort!.postMessage(m);
 
 try {
+  if (request.root) await openProjectAt(request.root);
   const compiled = prepareRun(request);
   let lastProgress = 0;
   runSession(

@@ -14,7 +14,8 @@ import { EXIT } from '../errors.js';
 import { collect, parseCount, parseDuration, parseRangeOption } from '../options.js';
 import type { Terminal } from '../terminal.js';
 import type { AddCommand } from './index.js';
-import { checkRecorder, type CheckRecorder } from './check-records.js';
+import { createCheckRecorder, type CheckRecorder } from '../../records/check-recorder.js';
+import { openProject } from '../../records/open-project.js';
 
 interface CheckFlags {
   sizes?: string[];
@@ -56,7 +57,7 @@ export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
 
 function buildRequest(paths: string[], f: CheckFlags): RunRequest {
   return {
-    paths: paths.length ? paths : ['conjectures'],
+    paths,
     ids: f.id ?? null,
     sizes: (f.sizes ?? []).map((s) => parseRangeOption(s, '--sizes')),
     sampleRanges: (f.sample ?? []).map((s) => parseRangeOption(s, '--sample')),
@@ -64,6 +65,7 @@ function buildRequest(paths: string[], f: CheckFlags): RunRequest {
     count: f.count === undefined ? null : parseCount(f.count, '--count'),
     seed: f.seed ?? null,
     budgetMs: f.budget === undefined ? null : parseDuration(f.budget),
+    root: null,
     regression: {},
   };
 }
@@ -71,9 +73,14 @@ function buildRequest(paths: string[], f: CheckFlags): RunRequest {
 export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal): Promise<number> {
   const req = buildRequest(paths, flags);
   if (flags.workers !== undefined) parseCount(flags.workers, '--workers');
-  // Everything is loaded and validated here first: a bad file exits 2 before anything is recorded.
+  // The project (hunch.yaml, its plugins, the canonical hash) is opened in this thread and again in
+  // the worker. Everything is loaded and validated here first: a bad file exits 2 before anything
+  // is recorded.
+  const project = await openProject(req.paths[0]);
+  req.root = project.root;
+  if (req.paths.length === 0) req.paths = project.config.conjectures;
   const compiled = prepareRun(req);
-  const recorder: CheckRecorder = checkRecorder(flags.ledger, compiled);
+  const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger });
   req.regression = recorder.regressionCases(compiled);
 
   const started = performance.now();
@@ -135,6 +142,8 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   }
   const interrupted = interrupts > 0;
   if (flags.junit) recorder.junit(flags.junit, results);
+  for (const w of recorder.warnings) t.err(`${t.color.yellow('warning:')} ${w}\n`);
+  recorder.close();
   if (flags.json) t.out(JSON.stringify(resultDocument(results), null, 2) + '\n');
   else {
     t.out(formatSummary(results, performance.now() - started, style));

@@ -53,6 +53,18 @@ export const permutations: Family<SizeParam, Permutation> = defineFamily<SizePar
     } while (nextPermutation(w.a));
     return false;
   },
+  enumerateRange({ n }, lo, hi, visit) {
+    const total = factorialBig(n);
+    if (hi > total) hi = total;
+    if (lo >= hi) return false;
+    const w = new Permutation(unrankLex(n, lo));
+    w.transient = true;
+    for (let left = Number(hi - lo); left > 0; left--) {
+      if (visit(w)) return true;
+      if (left > 1) nextPermutation(w.a);
+    }
+    return false;
+  },
   isMember({ n }, obj) {
     return obj instanceof Permutation && obj.n === n;
   },
@@ -64,6 +76,20 @@ export const permutations: Family<SizeParam, Permutation> = defineFamily<SizePar
     return shrinkPermutation(p.n, w);
   },
 });
+
+/** The permutation of rank r (0-based) among the permutations of 1..n in lexicographic order (factorial number system). */
+export function unrankLex(n: number, r: bigint): number[] {
+  const left = Array.from({ length: n }, (_, i) => i + 1);
+  const out: number[] = [];
+  let f = factorialBig(n);
+  for (let i = n; i >= 1; i--) {
+    f /= BigInt(i);
+    const d = Number(r / f);
+    r %= f;
+    out.push(left.splice(d, 1)[0]);
+  }
+  return out;
+}
 
 /**
  * Shrink steps of permutations(n) (LIBRARY.md §1): delete an entry and standardise (to S_{n-1}),

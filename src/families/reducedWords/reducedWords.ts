@@ -9,11 +9,19 @@ import { Word } from '../words/word.js';
 import type * as fc from 'fast-check';
 import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 import { inversions } from '../permutations/permutation.js';
+import { edelmanGreeneWord, isLongest } from './edelmanGreene.js';
+import { hookWalk } from '../tableaux/standardTableaux.js';
+import { hookLengthCount } from '../tableaux/shapes.js';
 import { isReducedWordOf, leftDescents, leftMultiply, permutationArg, reducedWordCount } from './reducedWordCounts.js';
 
 export interface PermParam {
   w: number[];
   length: number;
+}
+
+/** The staircase (n-1, ..., 1). */
+function staircase(n: number): number[] {
+  return Array.from({ length: n - 1 }, (_, i) => n - 1 - i);
 }
 
 export function compareReducedWords(a: Word, b: Word): number {
@@ -73,7 +81,8 @@ export const reducedWords = defineFamily<PermParam, Word>({
     return { w, length: inversions(w) };
   },
   count({ w }) {
-    return reducedWordCount(w);
+    // For w0 the memo would hold all of S_n; Stanley's theorem gives the count directly.
+    return isLongest(w) && w.length > 1 ? hookLengthCount(staircase(w.length)) : reducedWordCount(w);
   },
   enumerate({ w, length }, visit) {
     const word = new Word(new Array<number>(length).fill(0));
@@ -94,6 +103,11 @@ export const reducedWords = defineFamily<PermParam, Word>({
   compare: compareReducedWords,
   arbitrary(p): fc.Arbitrary<Word> {
     const { w } = p;
+    if (isLongest(w) && w.length > 1) {
+      // Uniform staircase tableau (hook walk), then the Edelman–Greene bijection: no memo needed.
+      const stair = staircase(w.length);
+      return new FamilyArbitrary(reducedWords, p, (rng) => new Word(edelmanGreeneWord(hookWalk(stair, rng).rows)));
+    }
     return new FamilyArbitrary(reducedWords, p, (rng) => randomReducedWord(w, rng));
   },
   *shrink(p, obj): Generator<Shrunk<PermParam, Word>> {

@@ -29,6 +29,11 @@ describe('asms(n)', () => {
     const { chi, threshold } = chiSquareUniform(asms.arbitrary!({ n: 4 }), all, 12600);
     expect(chi).toBeLessThan(threshold);
   });
+  it('samples uniformly at n = 5 too (chi-square over all 429, about 1 s)', () => {
+    const all = checkEnumeration(asms, { n: 5 });
+    const { chi, threshold } = chiSquareUniform(asms.arbitrary!({ n: 5 }), all, 50 * 429, 5);
+    expect(chi).toBeLessThan(threshold);
+  });
   it('samples valid ASMs at n = 12', () => {
     for (const a of fc.sample(asms.arbitrary!({ n: 12 }), { numRuns: 3, seed: 3 })) Asm.from(a.rows);
   });
