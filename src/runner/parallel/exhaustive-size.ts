@@ -7,6 +7,7 @@ import type { CompiledConjecture } from '../../language/conjecture/compiled.js';
 import type { Value } from '../../values/value.js';
 import { compareCases } from '../case-order.js';
 import { bindingTexts, encodeBindings, explainCase, frameFor, sizeOf } from '../case-report.js';
+import { plannedCases } from '../plan.js';
 import type { CheckedPiece, Counterexample } from '../result.js';
 import { countCases, hasCheapRanges } from './case-space.js';
 import type { HeldCounts, ResumeIndex } from './resume.js';
@@ -58,13 +59,15 @@ export function planExhaustiveSize(cc: CompiledConjecture, size: number | null, 
       return plan;
     }
   }
+  if (!o.shard && !o.slice && !o.resume?.hasSlices(rec)) {
+    // The plain path: one enumeration, counted beforehand only where the families' counts tell it.
+    const planned = plannedCases(cc, sizeFixing(cc, size));
+    plan.total = planned;
+    return plan;
+  }
   const total = countCases(cc, sizeFixing(cc, size));
   const s = sliceCount(total, o.shard?.of ?? 1, hasCheapRanges(cc));
   const held = o.resume ? o.resume.exhaustiveSlices(rec, s) : new Map<number, HeldCounts>();
-  if (!o.shard && !o.slice && held.size === 0) {
-    plan.total = total;
-    return plan;
-  }
   plan.total = total;
   plan.slices = s;
   plan.whole = false;

@@ -91,6 +91,11 @@ export class ResumeIndex {
     return out;
   }
 
+  /** Whether the ledger holds any slice record of this exhaustive size. */
+  hasSlices(size: Record<string, number>): boolean {
+    return this.records('exhaustive', size).some((r) => r.shard !== undefined);
+  }
+
   /** A sampled size already recorded with this seed (for this shard, or whole). */
   sampleCovered(size: Record<string, number>, seed: string, shard: Shard | null): HeldCounts | null {
     const want = shard ? shardText(shard) : undefined;
