@@ -12,6 +12,8 @@ import type { RunHooks, StopReason } from './hooks.js';
 import type { CheckedPiece, ConjectureResult, Counterexample, ErrorInfo } from './result.js';
 import { runSample } from './sample.js';
 import { DEFAULT_SEED } from './seeds.js';
+import { ResumeIndex, type HeldRecord } from './parallel/resume.js';
+import type { Shard } from './parallel/slicing.js';
 
 export interface CheckOptions {
   /** --sizes: replacement exhaustive ranges by binding name. */
@@ -24,6 +26,10 @@ export interface CheckOptions {
   seed?: string;
   /** A case to try first (from counterexamples/<id>.yaml), as decoded binding values in `for` order. */
   regression?: Value[] | null;
+  /** --shard I/K: only this shard's slices of every size and chunks of every sampled size. */
+  shard?: Shard | null;
+  /** --resume: ledger records of earlier runs; finished sizes and slices of the current hash are skipped. */
+  resume?: readonly HeldRecord[] | null;
 }
 
 export const DEFAULT_SAMPLE_COUNT = 100;
@@ -80,7 +86,24 @@ export function errorInfo(e: unknown, bindings: Record<string, unknown> | null):
   throw e; // a bug in hunch itself: the CLI reports it as such
 }
 
-function tryRegression(cc: CompiledConjecture, vals: Value[]): Counterexample | null {
+/** The exhaustive sizes of a run: the size binding's range, or --sizes for it. */
+export function exhaustiveSizes(cc: CompiledConjecture, opts: CheckOptions): number[] {
+  const override = cc.sizeIndex >= 0 ? opts.sizes?.get(cc.bindings[cc.sizeIndex].name) : undefined;
+  if (override) return Array.from({ length: Math.max(0, override[1] - override[0] + 1) }, (_, i) => override[0] + i);
+  return sizesOf(cc);
+}
+
+/** The sample count and ranges of a run (file, then options). */
+export function sampleSettingsOf(cc: CompiledConjecture, opts: CheckOptions): { count: number; ranges: Map<string, [number, number]> } {
+  return { count: opts.count ?? cc.spec.sample?.count ?? DEFAULT_SAMPLE_COUNT, ranges: sampleRangesOf(cc, opts.sampleRanges) };
+}
+
+/** --sizes applied to a compiled conjecture (the runner and the worker pool both check this). */
+export function withSizeOverrides(cc: CompiledConjecture, opts: CheckOptions): CompiledConjecture {
+  return withSizes(cc, opts.sizes);
+}
+
+export function tryRegression(cc: CompiledConjecture, vals: Value[]): Counterexample | null {
   const f = frameFor(cc, vals);
   if (evaluateCase(cc, f) !== 0) return null;
   const { values, sides } = explainCase(cc, f);
@@ -138,17 +161,15 @@ export function checkConjecture(compiled: CompiledConjecture, opts: CheckOptions
       }
       if (result.counterexample) return finish(null);
     }
-    let sizes = sizesOf(cc);
-    const override = cc.sizeIndex >= 0 ? opts.sizes?.get(cc.bindings[cc.sizeIndex].name) : undefined;
-    if (override) sizes = Array.from({ length: Math.max(0, override[1] - override[0] + 1) }, (_, i) => override[0] + i);
+    const shard = opts.shard ?? null;
+    const resume = opts.resume ? new ResumeIndex(opts.resume, spec.id, cc.hash) : null;
     if (opts.exhaustive !== false) {
-      const stopped = absorb(runExhaustive(cc, sizes, hooks));
+      const stopped = absorb(runExhaustive(cc, exhaustiveSizes(cc, opts), hooks, { shard, resume }));
       if (stopped || result.counterexample) return finish(stopped);
     }
-    const count = opts.count ?? spec.sample?.count ?? DEFAULT_SAMPLE_COUNT;
-    const ranges = sampleRangesOf(cc, opts.sampleRanges);
+    const { count, ranges } = sampleSettingsOf(cc, opts);
     if (count > 0 && ranges.size > 0) {
-      const stopped = absorb(runSample(cc, { seed: opts.seed ?? DEFAULT_SEED, count, ranges }, hooks));
+      const stopped = absorb(runSample(cc, { seed: opts.seed ?? DEFAULT_SEED, count, ranges, shard, resume }, hooks));
       return finish(stopped);
     }
     return finish(null);

@@ -1,16 +1,15 @@
 // The exhaustive phase (FORMAT.md §4.2): sizes in increasing order; stop after the first size with
 // a failure, but finish that size, count its failures and keep the simplest failing case.
+// In-process, a size is one plain enumeration; with a shard or a resumed ledger it is cut into the
+// slices of src/runner/parallel/exhaustive-size.ts (the worker pool cuts it the same way).
 
-import type { CompiledConjecture, Frame } from '../language/conjecture/compiled.js';
-import { own } from '../values/operations.js';
-import type { Value } from '../values/value.js';
-import { compareCases } from './case-order.js';
-import { bindingTexts, encodeBindings, explainCase, frameFor, sizeOf } from './case-report.js';
-import { enumerateCases } from './enumerate-cases.js';
-import { evaluateCase, SKIPPED } from './evaluate-case.js';
-import { POLL_MASK, RunHooks, StopReason } from './hooks.js';
-import { plannedCases } from './plan.js';
+import type { CompiledConjecture } from '../language/conjecture/compiled.js';
+import type { RunHooks, StopReason } from './hooks.js';
 import type { CheckedPiece, Counterexample } from './result.js';
+import { coveredPiece, finishSize, planExhaustiveSize, unitRange } from './parallel/exhaustive-size.js';
+import type { ResumeIndex } from './parallel/resume.js';
+import type { Shard } from './parallel/slicing.js';
+import { runSlice, type SliceOutcome } from './parallel/work-units.js';
 
 export interface PhaseResult {
   pieces: CheckedPiece[];
@@ -28,79 +27,49 @@ export class CaseError extends Error {
   }
 }
 
-export function runExhaustive(cc: CompiledConjecture, sizes: number[], hooks: RunHooks): PhaseResult {
+export interface ExhaustiveOptions {
+  shard?: Shard | null;
+  resume?: ResumeIndex | null;
+}
+
+export function runExhaustive(cc: CompiledConjecture, sizes: number[], hooks: RunHooks, opts: ExhaustiveOptions = {}): PhaseResult {
   const pieces: CheckedPiece[] = [];
-  const frame: Frame = new Array(cc.frameSize);
   let stoppedBy: StopReason | null = null;
   const sizeList: Array<number | null> = cc.sizeIndex < 0 ? [null] : sizes;
+  const shouldStop = () => {
+    const s = hooks.shouldStop?.() ?? null;
+    if (s) stoppedBy = s;
+    return s;
+  };
 
   for (const size of sizeList) {
-    const fixed = new Map<number, Value>();
-    if (size !== null) fixed.set(cc.sizeIndex, size);
-    const planned = plannedCases(cc, fixed);
-    const total = planned === null ? null : Number(planned);
-    const label = size === null ? cc.spec.id : `${cc.spec.id}: ${cc.bindings[cc.sizeIndex].name} = ${size}`;
-    let cases = 0, failures = 0, skipped = 0, visited = 0;
-    let best: Value[] | null = null;
-    const t0 = performance.now();
-    const stopped = (() => {
-      try {
-        return enumerateCases(cc, frame, fixed, () => {
-          const r = evaluateCase(cc, frame);
-          if (r === SKIPPED) skipped++;
-          else {
-            cases++;
-            if (r === 0) {
-              failures++;
-              const current = cc.bindings.map((b) => frame[b.slot]);
-              if (best === null || compareCases(cc, current, best) < 0) best = current.map(own);
-            }
-          }
-          if ((++visited & POLL_MASK) === 0) {
-            hooks.onProgress?.(visited, total, label);
-            const s = hooks.shouldStop?.() ?? null;
-            if (s) {
-              stoppedBy = s;
-              return true;
-            }
-          }
-          return false;
-        });
-      } catch (e) {
-        throw new CaseError(e, encodeBindings(cc, frame));
-      }
-    })();
-    const piece: CheckedPiece = {
-      phase: 'exhaustive',
-      size: size === null ? {} : { [cc.bindings[cc.sizeIndex].name]: size },
-      cases,
-      failures,
-      skipped,
-      ms: performance.now() - t0,
-    };
-    if (stopped) piece.partial = true;
-    pieces.push(piece);
-    if (!stopped) hooks.onPiece?.(piece);
-    if (best !== null) {
-      const f = frameFor(cc, best);
-      const { values, sides } = explainCase(cc, f);
-      return {
-        pieces,
-        stoppedBy,
-        counterexample: {
-          phase: 'exhaustive',
-          size: sizeOf(cc, f),
-          bindings: encodeBindings(cc, f),
-          values,
-          sides,
-          failuresAtSize: stopped ? null : failures,
-          shrinkSteps: 0,
-          seed: null,
-          text: bindingTexts(cc, f),
-        },
-      };
+    const plan = planExhaustiveSize(cc, size, { shard: opts.shard ?? null, resume: opts.resume ?? null, slice: false });
+    if (plan.covered) {
+      const held = coveredPiece(cc, plan);
+      if (held) pieces.push(held);
+      continue;
     }
-    if (stopped) break;
+    const total = plan.total === null ? null : Number(plan.total);
+    const t0 = performance.now();
+    const outcomes = new Map<number, SliceOutcome>();
+    let done = 0;
+    for (const h of plan.held.values()) done += h.cases + h.skipped;
+    for (const j of plan.units) {
+      const o = runSlice(cc, size, unitRange(plan, j), {
+        shouldStop,
+        onProgress: (k) => hooks.onProgress?.(done + k, total, plan.label),
+      });
+      outcomes.set(j, o);
+      done += o.cases + o.skipped;
+      if (o.fault || o.stopped) break;
+      if (shouldStop()) break;
+    }
+    const fin = finishSize(cc, plan, outcomes, performance.now() - t0);
+    if (fin.fault) throw new CaseError(fin.fault.error, fin.fault.bindings);
+    pieces.push(fin.piece);
+    for (const r of fin.records) hooks.onPiece?.(r);
+    if (fin.counterexample) return { pieces, stoppedBy, counterexample: fin.counterexample };
+    if (stoppedBy) break;
   }
   return { pieces, counterexample: null, stoppedBy };
 }

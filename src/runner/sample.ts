@@ -1,18 +1,20 @@
 // The sample phase (FORMAT.md §4.3): for each value of the size in its sample range, `count` random
 // cases drawn exactly uniformly (range bindings uniformly from their sample range, families by their
 // exact samplers); the first failure is shrunk. Sampling is evidence, not proof, and reports say so.
+// A size's cases come in fixed chunks, each with its own seed (src/runner/parallel/sample-size.ts),
+// so the same cases are drawn in-process, by any number of workers and by any number of shards.
 
-import { EvalError, fail } from '../base/errors.js';
+import { fail } from '../base/errors.js';
 import type { CompiledBinding, CompiledConjecture, Frame } from '../language/conjecture/compiled.js';
 import type { Value } from '../values/value.js';
-import { bindingTexts, encodeBindings, explainCase, frameFor, sizeOf } from './case-report.js';
 import { rangeBound } from './enumerate-cases.js';
-import { evaluateCase, SKIPPED } from './evaluate-case.js';
 import { CaseError, PhaseResult } from './exhaustive.js';
 import { RunHooks, StopReason } from './hooks.js';
 import type { CheckedPiece } from './result.js';
-import { randomFor } from './seeds.js';
-import { shrinkCase } from './shrink.js';
+import type { ResumeIndex } from './parallel/resume.js';
+import { coveredSamplePiece, finishSampleSize, plannedDraws, planSampleSize, quotaOf, sampleCounterexample } from './parallel/sample-size.js';
+import type { Shard } from './parallel/slicing.js';
+import { runSampleChunk, type ChunkOutcome } from './parallel/work-units.js';
 import type fc from 'fast-check';
 
 export interface SampleOptions {
@@ -20,10 +22,12 @@ export interface SampleOptions {
   count: number;
   /** Sample ranges by binding name (overrides of the file's `sample:`), as [lo, hi]. */
   ranges: Map<string, [number, number]>;
+  shard?: Shard | null;
+  resume?: ResumeIndex | null;
 }
 
 /** Draw a value for one binding into the frame. */
-function draw(b: CompiledBinding, frame: Frame, rng: fc.Random, ranges: Map<string, [number, number]>): void {
+export function drawBinding(b: CompiledBinding, frame: Frame, rng: fc.Random, ranges: Map<string, [number, number]>): void {
   const src = b.source;
   if (src.kind === 'range') {
     const r = ranges.get(b.name);
@@ -44,86 +48,52 @@ function draw(b: CompiledBinding, frame: Frame, rng: fc.Random, ranges: Map<stri
   }
 }
 
+/** The sizes of the sample phase, in order (empty when there is nothing to sample). */
+export function sampleSizes(cc: CompiledConjecture, opts: Pick<SampleOptions, 'count' | 'ranges'>): number[] {
+  if (cc.sizeIndex < 0 || opts.count === 0) return [];
+  const sr = opts.ranges.get(cc.bindings[cc.sizeIndex].name);
+  if (!sr) return [];
+  const out: number[] = [];
+  for (let s = sr[0]; s <= sr[1]; s++) out.push(s);
+  return out;
+}
+
 export function runSample(cc: CompiledConjecture, opts: SampleOptions, hooks: RunHooks): PhaseResult {
   const pieces: CheckedPiece[] = [];
   let stoppedBy: StopReason | null = null;
-  if (cc.sizeIndex < 0 || opts.count === 0) return { pieces, counterexample: null, stoppedBy };
-  const sizeB = cc.bindings[cc.sizeIndex];
-  const sr = opts.ranges.get(sizeB.name);
-  if (!sr) return { pieces, counterexample: null, stoppedBy };
-  const frame: Frame = new Array(cc.frameSize);
-
-  for (let size = sr[0]; size <= sr[1]; size++) {
-    const rng = randomFor(opts.seed, cc.spec.id, String(size));
-    let cases = 0, failures = 0, skipped = 0, attempts = 0;
-    const t0 = performance.now();
-    const label = `${cc.spec.id}: sampling ${sizeB.name} = ${size}`;
-    let failing: Value[] | null = null;
-    const maxAttempts = opts.count * 20 + 100;
-    try {
-      while (cases < opts.count && attempts < maxAttempts) {
-        attempts++;
-        for (let i = 0; i < cc.bindings.length; i++) {
-          if (i === cc.sizeIndex) frame[sizeB.slot] = size;
-          else draw(cc.bindings[i], frame, rng, opts.ranges);
-        }
-        const r = evaluateCase(cc, frame);
-        if (r === SKIPPED) {
-          skipped++;
-          continue;
-        }
-        cases++;
-        if (r === 0) {
-          failures++;
-          failing = cc.bindings.map((b) => frame[b.slot]);
-          break;
-        }
-        if ((cases & 63) === 0) {
-          hooks.onProgress?.(cases, opts.count, label);
-          const s = hooks.shouldStop?.() ?? null;
-          if (s) {
-            stoppedBy = s;
-            break;
-          }
-        }
-      }
-    } catch (e) {
-      if (e instanceof EvalError) throw new CaseError(e, encodeBindings(cc, frame));
-      throw e;
+  const shouldStop = () => {
+    const s = hooks.shouldStop?.() ?? null;
+    if (s) stoppedBy = s;
+    return s;
+  };
+  for (const size of sampleSizes(cc, opts)) {
+    const plan = planSampleSize(cc, size, opts.count, opts.seed, opts.shard ?? null, opts.resume ?? null);
+    if (plan.covered) {
+      const held = coveredSamplePiece(cc, plan, opts.seed);
+      if (held) pieces.push(held);
+      continue;
     }
-    const piece: CheckedPiece = {
-      phase: 'sample',
-      size: { [sizeB.name]: size },
-      cases,
-      failures,
-      skipped,
-      ms: performance.now() - t0,
-      seed: opts.seed,
-    };
-    if (stoppedBy) piece.partial = true;
-    pieces.push(piece);
-    if (!stoppedBy) hooks.onPiece?.(piece);
-    if (failing) {
-      const before = sizeOf(cc, frameFor(cc, failing));
-      const shrunk = shrinkCase(cc, failing, opts.ranges, hooks);
-      const f = frameFor(cc, shrunk.bindings);
-      const { values, sides } = explainCase(cc, f);
-      return {
-        pieces,
-        stoppedBy,
-        counterexample: {
-          phase: 'sample',
-          size: sizeOf(cc, f),
-          bindings: encodeBindings(cc, f),
-          values,
-          sides,
-          failuresAtSize: null,
-          shrinkSteps: shrunk.steps,
-          seed: opts.seed,
-          shrunkFrom: before,
-          text: bindingTexts(cc, f),
-        },
-      };
+    const t0 = performance.now();
+    const total = plannedDraws(plan);
+    const outcomes = new Map<number, ChunkOutcome>();
+    let done = 0;
+    for (const c of plan.units) {
+      const o = runSampleChunk(cc, size, c, quotaOf(plan, c), opts, {
+        shouldStop,
+        onProgress: (k) => hooks.onProgress?.(done + k, total, plan.label),
+      });
+      outcomes.set(c, o);
+      done += o.cases;
+      if (o.failing || o.fault || o.stopped) break;
+      if (shouldStop()) break;
+    }
+    const fin = finishSampleSize(cc, plan, outcomes, performance.now() - t0, opts.seed);
+    if (fin.fault) throw new CaseError(fin.fault.error, fin.fault.bindings);
+    pieces.push(fin.piece);
+    if (fin.complete) hooks.onPiece?.(fin.piece);
+    if (fin.failingChunk !== null) {
+      const failing = outcomes.get(fin.failingChunk)!.failing!;
+      return { pieces, stoppedBy, counterexample: sampleCounterexample(cc, failing, opts.ranges, opts.seed, hooks) };
     }
     if (stoppedBy) break;
   }

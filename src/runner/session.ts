@@ -12,6 +12,8 @@ import type { RunHooks } from './hooks.js';
 import { MAX_EXHAUSTIVE_CASES, plannedCases } from './plan.js';
 import type { CheckedPiece, ConjectureResult } from './result.js';
 import type { Value } from '../values/value.js';
+import type { HeldRecord } from './parallel/resume.js';
+import type { Shard } from './parallel/slicing.js';
 
 /** Everything a run needs, in a form that can cross to a worker thread (plain data). */
 export interface RunRequest {
@@ -27,6 +29,12 @@ export interface RunRequest {
   root: string | null;
   /** Encoded regression cases by conjecture id (from counterexample files). */
   regression: Record<string, unknown[]>;
+  /** --shard I/K (absent or null: the whole). */
+  shard?: Shard | null;
+  /** --resume: the ledger's records of the requested conjectures (any hash; the runner keeps the current one's). */
+  resume?: HeldRecord[] | null;
+  /** The project root, for worker threads to open the project (plugins, hash) like the main thread. */
+  projectRoot?: string | null;
 }
 
 /** Load and compile; every problem is an InputError (exit 2) before anything runs. */
@@ -46,7 +54,7 @@ export function prepareRun(req: RunRequest): CompiledConjecture[] {
   return compiled;
 }
 
-function overrides(list: Array<[string, number, number]>): Map<string, [number, number]> {
+export function overrides(list: Array<[string, number, number]>): Map<string, [number, number]> {
   return new Map(list.map(([k, a, b]) => [k, [a, b] as [number, number]]));
 }
 
@@ -83,6 +91,8 @@ export function checkOptionsFor(req: RunRequest, cc: CompiledConjecture, decode:
     count: req.count ?? undefined,
     seed: req.seed ?? undefined,
     regression: reg ? reg.map(decode) : null,
+    shard: req.shard ?? null,
+    resume: req.resume ? req.resume.filter((r) => r.id === cc.spec.id) : null,
   };
 }
 

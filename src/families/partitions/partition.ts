@@ -42,6 +42,11 @@ export class Partition implements Structured {
     return new Partition(parts.slice() as number[]);
   }
 
+  /** The parts, largest first: a partition is a source after `in` (sum(lambda), all(p in lambda: ...)). */
+  elements(): readonly number[] {
+    return this.parts;
+  }
+
   equals(other: Structured): boolean {
     const b = (other as Partition).parts, a = this.parts;
     if (a.length !== b.length) return false;
