@@ -33,8 +33,6 @@ export interface RunRequest {
   shard?: Shard | null;
   /** --resume: the ledger's records of the requested conjectures (any hash; the runner keeps the current one's). */
   resume?: HeldRecord[] | null;
-  /** The project root, for worker threads to open the project (plugins, hash) like the main thread. */
-  projectRoot?: string | null;
 }
 
 /** Load and compile; every problem is an InputError (exit 2) before anything runs. */

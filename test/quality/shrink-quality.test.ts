@@ -3,15 +3,19 @@
 // force here (test/runner/brute.ts, independent of src/families); over 50 seeds the shrunk case must
 // reach the true minimal size in at least 95% of them.
 //
-// Measured on this commit (2 cores), printed by each test as "shrink quality: ..."; "size" is the
-// share of 50 seeds reaching the true minimal size, "exact" the share giving exactly the simplest
-// failing case:
-//   cycles(w) <= 5, n = 12..24              -> identity of S_6       size 100%, exact 100%
-//   maj(w) <= inv(w), n = 15..25            -> 132                   size 100%, exact 100%
-//   crossings(m) <= 2, n = 8..12            -> [[1,4],[2,5],[3,6]]   size  22%, exact  22%   (BUG, see below)
-//   lambda[1] <= 4 or length <= 3, 15..25   -> [5,1,1,1]             size 100%, exact 100%
-//   no 3 consecutive elements, 15..25       -> {1,2,3} in 1..3       size 100%, exact 100%
-//   no 3 equal adjacent letters (k=3), 15..25 -> 111                 size 100%, exact  86%   (222 or 333 otherwise)
+// Measured on 2 cores, printed by each test as "shrink quality: ..."; "size" is the share of 50
+// seeds reaching the true minimal size, "exact" the share giving exactly the simplest failing case.
+// Two runs, before and during the worker-thread refactor of src/runner (which changed the drawn
+// cases, not the shrinker):
+//   cycles(w) <= 5, n = 12..24               -> identity of S_6      size 100%/100%, exact 100%/100%
+//   maj(w) <= inv(w), n = 15..25             -> 132                  size 100%/100%, exact 100%/100%
+//   crossings(m) <= 2, n = 8..12             -> [[1,4],[2,5],[3,6]]  size  22%/12%,  exact  22%/12%  (BUG below)
+//   lambda[1] <= 4 or length <= 3, 15..25    -> [5,1,1,1]            size 100%/100%, exact 100%/100%
+//   no 3 consecutive elements, 15..25        -> {1,2,3} in 1..3      size 100%/100%, exact 100%/100%
+//   no 3 equal adjacent letters (k=3), 15..25 -> 111                 size 100%/100%, exact  86%/74%  (else 222, 333)
+//   des(w) <= 1, n = 10..12                  -> 321                  size  16%/20%,  exact  16%/20%  (BUG below)
+//   inv(w) <= 2, n = 10..12                  -> 321                  size  18%/20%,  exact  18%/20%  (BUG below)
+// Shrinking from n = 25 (test/quality/shrink-time.test.ts): at most 16 ms per case.
 
 import { describe, expect, it } from 'vitest';
 import { doc } from '../runner/helpers.js';
@@ -101,6 +105,36 @@ describe('shrink quality over 50 seeds', () => {
       'n', 3, { n: 3, u: { word: [1, 1, 1] } },
     );
     report('no three equal adjacent letters in words(n, 3) at n = 15..25', q);
+    expect(q.minimalSize, q.misses.slice(0, 5).join('\n')).toBeGreaterThanOrEqual(0.95);
+  }, SLOW);
+
+  // KNOWN BUG (src/families/permutations/permutations.ts, shrinkPermutation, together with the
+  // greedy loop of src/runner/shrink.ts): for claims bounding descents or inversions, "delete an
+  // entry" from a smallest-looking failure such as 2143 (2 descents) always loses a descent, and the
+  // same-size steps only lower the statistic, so shrinking stops at n = 4 or 5 although 321 (n = 3)
+  // fails. Marked `fails` until fixed; remove `.fails` then. A fix that serves every family: when
+  // the greedy shrink ends at size s, enumerate the sizes below s whose case count is small (say at
+  // most 10^5, by plannedCases) in increasing order, and take the simplest failing case of the first
+  // size that has one.
+  it.fails('des(w) <= 1 sampled at n = 10..12 shrinks to 321', () => {
+    const m = bruteMinimum(B.permutationsOf, (w) => w.filter((x, i) => i + 1 < w.length && x > w[i + 1]).length > 1, B.comparePerms, 5);
+    expect(m).toEqual({ n: 3, simplest: [3, 2, 1], count: 1 });
+    const q = measure(
+      doc({ id: 'few-descents', for: ['n: 1..2', 'w: permutations(n)'], claim: 'des(w) <= 1', sample: ['n: 10..12'] }),
+      'n', 3, { n: 3, w: { permutation: [3, 2, 1] } },
+    );
+    report('des(w) <= 1 at n = 10..12', q);
+    expect(q.minimalSize, q.misses.slice(0, 5).join('\n')).toBeGreaterThanOrEqual(0.95);
+  }, SLOW);
+
+  it.fails('inv(w) <= 2 sampled at n = 10..12 shrinks to 321', () => {
+    const m = bruteMinimum(B.permutationsOf, (w) => B.inv(w) > 2, B.comparePerms, 5);
+    expect(m).toEqual({ n: 3, simplest: [3, 2, 1], count: 1 });
+    const q = measure(
+      doc({ id: 'few-inversions', for: ['n: 1..2', 'w: permutations(n)'], claim: 'inv(w) <= 2', sample: ['n: 10..12'] }),
+      'n', 3, { n: 3, w: { permutation: [3, 2, 1] } },
+    );
+    report('inv(w) <= 2 at n = 10..12', q);
     expect(q.minimalSize, q.misses.slice(0, 5).join('\n')).toBeGreaterThanOrEqual(0.95);
   }, SLOW);
 });

@@ -217,6 +217,30 @@ describe('where, errors, aggregates, dependent ranges', () => {
   });
 });
 
+describe('bindings without a size', () => {
+  it('a family with constant arguments and no range binding is one piece with an empty size', () => {
+    // S_4 has 3 + 1 permutations with at least 5 inversions (OEIS A008302)
+    const r = check(doc({ for: ['w: permutations(4)'], claim: 'inv(w) < 5' }));
+    expect(r.checked.map((p) => [p.size, p.cases, p.failures])).toEqual([[{}, 24, 4]]);
+    expect(r.counterexample!.bindings).toEqual({ w: perm([3, 4, 2, 1]) });
+    expect(r.counterexample!.size).toEqual({});
+  });
+
+  it('a constant binding (n: 3) is a one-value range and the size', () => {
+    const r = check(doc({ for: ['n: 3', 'w: permutations(n)'], claim: 'inv(w) < 3' }));
+    expect(r.checked.map((p) => [p.size, p.cases])).toEqual([[{ n: 3 }, 6]]);
+    expect(r.counterexample!.bindings).toEqual({ n: 3, w: perm([3, 2, 1]) });
+  });
+
+  it('a list binding is enumerated in list order and compared by value', () => {
+    const r = check(doc({ for: ['n: 1..4', `p: '["21", "12"]'`, 'w: permutations(n)'], claim: 'avoids(w, p) or n < 3' }));
+    // n = 3: with p = "21" the 5 permutations other than 123 fail, with p = "12" the 5 other than
+    // 321; "12" < "21", so the simplest failure has p = "12" and then w = 123.
+    expect(r.counterexample!.failuresAtSize).toBe(10);
+    expect(r.counterexample!.bindings).toEqual({ n: 3, p: '12', w: perm([1, 2, 3]) });
+  });
+});
+
 describe('options', () => {
   const maj = doc({ for: ['n: 1..8', 'w: permutations(n)'], claim: 'maj(w) <= inv(w)' });
 
@@ -255,32 +279,55 @@ describe('options', () => {
     });
     expect(r2.outcome).toBe('error'); // the normal run then meets the error at n = 1
   });
+
+  // BUG (src/runner/check.ts, tryRegression): the saved case is evaluated without checking that it
+  // is a case of the conjecture at all: that each family binding is a member of its family at the
+  // saved parameters, and that range bindings lie in their ranges. A hand-edited or mailed
+  // counterexample file with w = 321 and n = 2 is then reported as a counterexample although 321 is
+  // not in permutations(2). Fix: run the shrinker's isValid (src/runner/shrink.ts) on the case
+  // first, and ignore (with a warning) a case that is not valid.
+  it.fails('a regression case whose object is not a member of its family is not a counterexample (known bug)', async () => {
+    const { decodeValue } = await import('../../src/values/decode.js');
+    const r = check(doc({ for: ['n: 1..4', 'w: permutations(n)'], claim: 'len(w) == n' }), {
+      regression: [2, decodeValue({ permutation: [3, 2, 1] })],
+    });
+    expect(r.counterexample).toBeNull();
+    expect(r.outcome).toBe('holds');
+  });
 });
 
 describe('budgets', () => {
-  it('a budget stop gives outcome incomplete with the finished pieces and a partial one', () => {
-    let polls = 0;
-    const r = check(doc({ for: ['n: 1..9', 'w: permutations(n)'], claim: 'inv(w) >= 0' }), {}, {
-      shouldStop: () => (++polls >= 3 ? 'budget' : null),
+  // The budget runs out once size 7 is finished (announced through onPiece): the stop must then
+  // come in the middle of size 8 (40,320 cases: a budget has to be able to stop a size part way).
+  function budgeted(maxN = 9) {
+    const finished: number[] = [];
+    let out = false;
+    const r = check(doc({ for: [`n: 1..${maxN}`, 'w: permutations(n)'], claim: 'inv(w) >= 0' }), {}, {
+      shouldStop: () => (out ? 'budget' : null),
+      onPiece: (p) => {
+        finished.push(p.size.n);
+        if (p.size.n === 7) out = true;
+      },
     });
+    return { r, finished };
+  }
+
+  it('a budget stop gives outcome incomplete with the finished pieces and a partial one', () => {
+    const { r } = budgeted();
     expect(r.outcome).toBe('incomplete');
     expect(r.stoppedBy).toBe('budget');
-    const last = r.checked[r.checked.length - 1];
-    expect(last.partial).toBe(true);
-    expect(last.cases).toBeGreaterThan(0);
-    expect(last.cases).toBeLessThan(40320);
-    for (const p of r.checked.slice(0, -1)) expect(p.partial).toBeUndefined();
-    expect(r.checked.slice(0, -1).map((p) => p.cases)).toEqual([1, 2, 6, 24, 120, 720, 5040].slice(0, r.checked.length - 1));
+    expect(r.counterexample).toBeNull();
+    const done = r.checked.filter((p) => !p.partial);
+    expect(done.map((p) => [p.size.n, p.cases])).toEqual([1, 2, 6, 24, 120, 720, 5040].map((c, i) => [i + 1, c]));
+    const partial = r.checked.filter((p) => p.partial);
+    expect(partial.map((p) => p.size.n)).toEqual([8]);
+    expect(partial[0].cases).toBeGreaterThan(0);
+    expect(partial[0].cases).toBeLessThan(40320);
+    expect(r.checked.some((p) => p.size.n === 9)).toBe(false);
   });
 
   it('finished pieces are announced through onPiece, the partial one is not', () => {
-    const seen: number[] = [];
-    let polls = 0;
-    check(doc({ for: ['n: 1..9', 'w: permutations(n)'], claim: 'inv(w) >= 0' }), {}, {
-      shouldStop: () => (++polls >= 3 ? 'budget' : null),
-      onPiece: (p) => seen.push(p.size.n),
-    });
-    expect(seen).toEqual([1, 2, 3, 4, 5, 6, 7]);
+    expect(budgeted().finished).toEqual([1, 2, 3, 4, 5, 6, 7]);
   });
 
   it('an interrupt during the sample phase is incomplete too', () => {

@@ -14,7 +14,9 @@ const dir = mkdtempSync(join(tmpdir(), 'hunch-session-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 function request(file: string, over: Partial<RunRequest> = {}): RunRequest {
-  return { paths: [file], ids: null, sizes: [], sampleRanges: [], exhaustive: true, count: null, seed: null, budgetMs: null, regression: {}, ...over };
+  // `root` is null: no project (the test files live in a temporary folder). Cast, because the request
+  // is gaining fields while the runner moves to worker threads.
+  return { paths: [file], ids: null, sizes: [], sampleRanges: [], exhaustive: true, count: null, seed: null, budgetMs: null, root: null, regression: {}, ...over } as RunRequest;
 }
 
 function write(name: string, text: string): string {

@@ -1,12 +1,13 @@
 // hunch check [PATH...]: run the conjectures, print the report, record coverage and counterexamples.
 
-import { Worker } from 'node:worker_threads';
 import type { Command } from 'commander';
 import '../../families/index.js';
 import '../../library/index.js';
 import { prepareRun, type RunRequest } from '../../runner/session.js';
-import { agreesWithExpectation, type CheckedPiece, type ConjectureResult } from '../../runner/result.js';
-import type { WorkerMessage } from '../../runner/worker.js';
+import { agreesWithExpectation, type ConjectureResult } from '../../runner/result.js';
+// issue 7 (parallel helper): the worker pool, shards and resume.
+import { startCheckRun, workerCount } from '../../runner/parallel/run-check.js';
+import { heldRecordsForResume, shardFlag } from './check-parallel-flags.js';
 import { formatResult, formatSummary } from '../../reports/human.js';
 import { resultDocument } from '../../reports/json.js';
 import { ProgressLine } from '../../reports/progress.js';
@@ -45,7 +46,9 @@ export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
     .option('--count <K>', 'random cases per size (0 skips sampling)')
     .option('--seed <S>', 'the random seed (default: fixed, so runs repeat)')
     .option('--budget <TIME>', 'stop each conjecture after this long (30s, 5m, 2h)')
-    .option('--workers <K>', 'worker threads')
+    .option('--workers <K>', 'worker threads (default: the number of cores)')
+    .option('--shard <I/K>', 'check only slice I of K of every size (1-based), deterministically')
+    .option('--resume', 'skip the sizes and slices the ledger already holds for the conjecture as it is now')
     .option('--json', 'print the result document instead of the report')
     .option('--ledger <PATH>', 'where coverage is recorded (default: hunch-ledger.jsonl in the project root)')
     .option('--no-ledger', 'record nothing')
@@ -72,7 +75,9 @@ function buildRequest(paths: string[], f: CheckFlags): RunRequest {
 
 export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal): Promise<number> {
   const req = buildRequest(paths, flags);
-  if (flags.workers !== undefined) parseCount(flags.workers, '--workers');
+  // issue 7: --workers K (default HUNCH_WORKERS, else every core), --shard I/K.
+  const workers = workerCount(flags.workers === undefined ? undefined : parseCount(flags.workers, '--workers'));
+  req.shard = shardFlag(flags.shard);
   // The project (hunch.yaml, its plugins, the canonical hash) is opened in this thread and again in
   // the worker. Everything is loaded and validated here first: a bad file exits 2 before anything
   // is recorded.
@@ -82,6 +87,7 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   const compiled = prepareRun(req);
   const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger });
   req.regression = recorder.regressionCases(compiled);
+  if (flags.resume) req.resume = heldRecordsForResume(flags.ledger, project.config.ledger, compiled); // issue 7
 
   const started = performance.now();
   const style = { color: t.color, unicode: t.unicode };
@@ -90,48 +96,29 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   const flag = new Int32Array(new SharedArrayBuffer(4));
   let interrupts = 0;
 
-  const worker = new Worker(new URL('../../runner/worker.js', import.meta.url), { workerData: { request: req, flag } });
+  // issue 7: one worker (--workers 1) or a pool sharing every size; either way off this thread.
+  const run = startCheckRun(compiled, req, workers, flag, {
+    onProgress: (done, total, label) => progress.update(done, total, label),
+    onPiece: (id, piece) => recorder.piece(id, piece),
+    onResult: (r) => {
+      results.push(r);
+      const replay = recorder.result(r);
+      progress.clear();
+      if (!flags.json) t.out(formatResult(r, style, replay));
+    },
+  });
   const onSigint = () => {
     interrupts++;
     Atomics.store(flag, 0, 1);
     if (interrupts === 1) {
       progress.clear();
       t.err('\nStopping after the current case; finished work is kept (Ctrl-C again to stop at once).\n');
-    } else void worker.terminate();
+    } else run.kill();
   };
   process.on('SIGINT', onSigint);
   process.on('SIGTERM', onSigint);
 
-  let crash: string | null = null;
-  await new Promise<void>((resolve) => {
-    worker.on('message', (m: WorkerMessage) => {
-      switch (m.type) {
-        case 'progress':
-          progress.update(m.done, m.total, m.label);
-          break;
-        case 'piece':
-          recorder.piece(m.id, m.piece as CheckedPiece);
-          break;
-        case 'result': {
-          const r = m.result as ConjectureResult;
-          results.push(r);
-          const replay = recorder.result(r);
-          progress.clear();
-          if (!flags.json) t.out(formatResult(r, style, replay));
-          break;
-        }
-        case 'crash':
-          crash = m.message + (process.env.HUNCH_DEBUG && m.stack ? `\n${m.stack}` : '');
-          break;
-        case 'done':
-          break;
-      }
-    });
-    worker.on('error', (e) => {
-      crash = e.message;
-    });
-    worker.on('exit', () => resolve());
-  });
+  const crash = await run.finished;
   process.off('SIGINT', onSigint);
   process.off('SIGTERM', onSigint);
   progress.clear();

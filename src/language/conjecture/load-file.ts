@@ -43,8 +43,15 @@ function noAliases(y: YamlFile, doc: Document.Parsed): void {
   visit(doc.contents, 0);
 }
 
+/** The document as plain data; integers stay exact (numbers when safe, else decimal strings). */
 function plain(doc: Document.Parsed): Record<string, unknown> {
-  return doc.toJS({ maxAliasCount: 50 }) as Record<string, unknown>;
+  const exact = (v: unknown): unknown => {
+    if (typeof v === 'bigint') return v >= BigInt(Number.MIN_SAFE_INTEGER) && v <= BigInt(Number.MAX_SAFE_INTEGER) ? Number(v) : v.toString();
+    if (Array.isArray(v)) return v.map(exact);
+    if (v && typeof v === 'object') return Object.fromEntries(Object.entries(v).map(([k, x]) => [k, exact(x)]));
+    return v;
+  };
+  return exact(doc.toJS({ maxAliasCount: 50 })) as Record<string, unknown>;
 }
 
 function readDefines(y: YamlFile, node: Node | null): DefineSpec[] {
@@ -67,7 +74,7 @@ export function loadConjectureFile(file: string, source: string): LoadedFile {
 
   for (const doc of y.docs) {
     const node = doc.contents as Node | null;
-    if (node === null) continue; // an empty document (e.g. a trailing ---)
+    if (node === null || (isScalar(node) && node.value === null)) continue; // an empty document (e.g. a trailing ---)
     if (!isMap(node)) throw new InputError('a conjecture document must be a mapping with a "conjecture:" key', y.nodePos(node));
     noAliases(y, doc);
     const keys = mapEntries(y, node, 'the document').map((e) => e.key);
@@ -77,8 +84,16 @@ export function loadConjectureFile(file: string, source: string): LoadedFile {
       defineDocuments.push(plain(doc));
     } else {
       const entries = mapEntries(y, node, 'the document');
-      const near = entries.find((e) => nearest(e.key, ['conjecture', 'define']) !== undefined);
+      // Suggest only for a key that is not already right (a misspelt "conjecture:" or "define:").
+      const near = entries.find((e) => e.key !== 'define' && e.key !== 'conjecture' && nearest(e.key, ['conjecture', 'define']) !== undefined);
       const s = near ? nearest(near.key, ['conjecture', 'define']) : undefined;
+      const extra = entries.find((e) => e.key !== 'define');
+      if (!near && keys.includes('define') && extra)
+        throw new InputError(
+          `a "define:" document holds only definitions; "${extra.key}" belongs in a conjecture document`,
+          y.nodePos(extra.keyNode),
+          extra.key,
+        );
       throw new InputError(
         'a document needs a "conjecture:" key (or only a "define:" key for shared definitions)' +
           (near && s ? `; did you mean "${s}:" for "${near.key}:"?` : ''),

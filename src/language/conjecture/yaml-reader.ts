@@ -1,7 +1,7 @@
 // Reading conjecture files with the `yaml` library while keeping every node's position, so that an
 // error inside an expression points at the line and column of the file, not of the scalar.
 
-import { isMap, isScalar, isSeq, LineCounter, parseAllDocuments, Scalar, YAMLMap, type Document, type Node } from 'yaml';
+import { isAlias, isMap, isScalar, isSeq, LineCounter, parseAllDocuments, Scalar, YAMLMap, type Document, type Node } from 'yaml';
 import { InputError, SourcePos } from '../../base/errors.js';
 
 /** Maps an offset inside an expression's text to its position in the file. */
@@ -27,7 +27,7 @@ export class YamlFile {
   ) {
     this.lines = new LineCounter();
     try {
-      this.docs = parseAllDocuments(source, { lineCounter: this.lines, uniqueKeys: true, prettyErrors: false }) as Document.Parsed[];
+      this.docs = parseAllDocuments(source, { lineCounter: this.lines, uniqueKeys: true, prettyErrors: false, intAsBigInt: true }) as Document.Parsed[];
     } catch (e) {
       if (e instanceof RangeError) throw new InputError('the YAML is nested too deeply to read', { file, line: 1, column: 1 });
       throw e;
@@ -67,7 +67,18 @@ export class YamlFile {
    * file positions. Numbers and booleans keep their source spelling (so a 30-digit integer stays
    * exact: YAML itself would read it as a float).
    */
+  /** An alias of a single value stands for that value (its text and position are the anchor's). */
+  deref(node: Node | null): Node | null {
+    if (!isAlias(node)) return node;
+    for (const d of this.docs) {
+      const t = node.resolve(d);
+      if (t) return t as Node;
+    }
+    return node;
+  }
+
   exprOf(node: Node, what: string): ExprText {
+    node = this.deref(node)!;
     if (!isScalar(node)) throw new InputError(`${what} must be an expression (a single line or block of text)`, this.nodePos(node));
     const [start, end] = node.range!;
     const raw = this.source.slice(start, end);
@@ -76,40 +87,54 @@ export class YamlFile {
   }
 
   private originFor(node: Scalar, raw: string, text: string, start: number): Origin {
-    const file = this.file;
+    const map = alignValueToSource(text, raw, node.type === Scalar.QUOTE_DOUBLE, node.type === Scalar.QUOTE_SINGLE);
     const self = this;
-    // Each line of the value is found in the source, in order; offsets within a line map directly.
-    // This is exact for plain, quoted-without-escapes and literal block scalars, and lands on the
-    // right line for folded ones.
-    const valueLines = text.split('\n');
-    const lineStarts: number[] = [];
-    let cursor = 0;
-    const quoted = node.type === Scalar.QUOTE_DOUBLE || node.type === Scalar.QUOTE_SINGLE;
-    for (const vl of valueLines) {
-      const at = vl.length === 0 ? -1 : raw.indexOf(vl, cursor);
-      if (at >= 0) {
-        lineStarts.push(start + at);
-        cursor = at + vl.length;
-      } else {
-        lineStarts.push(start + (quoted ? 1 : 0) + cursor);
-      }
-    }
     return {
-      file,
+      file: this.file,
       locate(offset: number) {
-        let rem = offset;
-        for (let i = 0; i < valueLines.length; i++) {
-          if (rem <= valueLines[i].length || i === valueLines.length - 1) {
-            const p = self.pos(lineStarts[i] + Math.min(rem, valueLines[i].length));
-            return { line: p.line, column: p.column };
-          }
-          rem -= valueLines[i].length + 1;
-        }
-        const p = self.pos(start);
+        const i = Math.max(0, Math.min(offset, map.length - 1));
+        const p = self.pos(start + map[i] + Math.max(0, offset - (map.length - 1)));
         return { line: p.line, column: p.column };
       },
     };
   }
+}
+
+/**
+ * For each offset of a scalar's value (and one past its end), the offset in its source text.
+ * The value and the source are walked together: equal characters map to each other; a folded
+ * line break (a space or newline in the value) stands for a newline and the next line's
+ * indentation in the source; an escape (double quotes) or a doubled quote (single quotes) is
+ * one character of the value; anything else in the source (block headers, indentation, quotes)
+ * is skipped.
+ */
+export function alignValueToSource(value: string, raw: string, doubleQuoted: boolean, singleQuoted: boolean): number[] {
+  const map: number[] = new Array(value.length + 1);
+  let r = 0;
+  for (let i = 0; i < value.length; i++) {
+    const c = value[i];
+    // Skip what the value does not contain: block headers, indentation, opening quotes.
+    while (r < raw.length && raw[r] !== c) {
+      if (doubleQuoted && raw[r] === '\\') break;
+      if ((c === ' ' || c === '\n') && raw[r] === '\n') break;
+      r++;
+    }
+    map[i] = Math.min(r, raw.length);
+    if (r >= raw.length) continue;
+    if (raw[r] === c) {
+      if (singleQuoted && c === "'" && raw[r + 1] === "'") r += 2;
+      else r++;
+    } else if (doubleQuoted && raw[r] === '\\') {
+      const e = raw[r + 1];
+      r += e === 'x' ? 4 : e === 'u' ? 6 : e === 'U' ? 10 : 2;
+    } else if (raw[r] === '\n') {
+      // A folded line break: the newline and the next line's indentation.
+      r++;
+      while (r < raw.length && (raw[r] === ' ' || raw[r] === '\t')) r++;
+    }
+  }
+  map[value.length] = Math.min(r, raw.length);
+  return map;
 }
 
 /** The entries of a mapping node in order, with their key text. */
@@ -128,6 +153,7 @@ export function seqItems(y: YamlFile, node: Node | null, what: string): Node[] {
 }
 
 export function scalarString(y: YamlFile, node: Node | null, what: string): string {
+  node = y.deref(node);
   if (!isScalar(node) || node.value === null) throw new InputError(`${what} must be a single value`, y.nodePos(node));
   return String(node.value);
 }

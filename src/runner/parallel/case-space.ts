@@ -177,6 +177,14 @@ export function enumerateCaseRange(
           frame[b.slot] = list[Number(k)];
           level(i + 1, base + k * per);
         }
+      } else if (i + 1 === bs.length) {
+        // The innermost binding (the common case): one case per object, no index arithmetic.
+        const slot = b.slot;
+        enumerateFamilyRange(src.family, p, first, last, (obj) => {
+          frame[slot] = obj;
+          if (onCase()) stopped = true;
+          return stopped;
+        });
       } else {
         let k = first;
         const slot = b.slot, next = i + 1;

@@ -65,7 +65,14 @@ export function planExhaustiveSize(cc: CompiledConjecture, size: number | null, 
     plan.total = planned;
     return plan;
   }
-  const total = countCases(cc, sizeFixing(cc, size));
+  let total: bigint;
+  try {
+    total = countCases(cc, sizeFixing(cc, size));
+  } catch {
+    // The size cannot even be counted (a family refuses its arguments): run it whole, so the
+    // error is reported from the case that raises it, exactly as the plain enumeration does.
+    return plan;
+  }
   const s = sliceCount(total, o.shard?.of ?? 1, hasCheapRanges(cc));
   const held = o.resume ? o.resume.exhaustiveSlices(rec, s) : new Map<number, HeldCounts>();
   plan.total = total;

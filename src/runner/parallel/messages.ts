@@ -4,8 +4,8 @@ import type { ErrorInfo, Counterexample } from '../result.js';
 import type { StopReason } from '../hooks.js';
 
 export type PoolTask =
-  /** Cases [lo, hi) of a size (decimal strings: sizes reach beyond 2^53 cases). */
-  | { t: 'slice'; task: number; conj: number; size: number | null; lo: string; hi: string; deadline: number | null }
+  /** Cases [lo, hi) of a size (decimal strings: sizes reach beyond 2^53 cases); null: the whole size. */
+  | { t: 'slice'; task: number; conj: number; size: number | null; lo: string | null; hi: string | null; deadline: number | null }
   /** Chunk `chunk` of a sampled size. */
   | { t: 'chunk'; task: number; conj: number; size: number; chunk: number; quota: number; deadline: number | null }
   /** Re-draw a chunk's failing case, shrink it and explain it. */

@@ -55,7 +55,7 @@ async function main(): Promise<void> {
       const { cc, sample } = prepared[m.conj];
       const ctl = control(m.task, m.deadline);
       if (m.t === 'slice') {
-        const o = runSlice(cc, m.size, [BigInt(m.lo), BigInt(m.hi)], ctl);
+        const o = runSlice(cc, m.size, m.lo === null || m.hi === null ? null : [BigInt(m.lo), BigInt(m.hi)], ctl);
         const out: WireSlice = {
           cases: o.cases, failures: o.failures, skipped: o.skipped, ms: o.ms, stopped: o.stopped,
           bestValues: o.best ? o.best.map(encodeValue) : null,

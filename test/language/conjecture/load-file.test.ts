@@ -181,7 +181,7 @@ define:
   // Scalar whose value is null, not null contents, so the check misses it and the file is refused
   // with "a conjecture document must be a mapping". Fix:
   // `if (node === null || (isScalar(node) && node.value === null)) continue;`
-  it.fails('an empty trailing document (a final ---) is ignored (known bug)', () => {
+  it('an empty trailing document (a final ---) is ignored', () => {
     expect(load('conjecture: c\nclaim: true\n---\n')).toHaveLength(1);
     expect(load('conjecture: c\nclaim: true\n---\n# more later\n')).toHaveLength(1);
   });
@@ -191,7 +191,7 @@ define:
   // for "define:"?' — the nearest name is searched among all keys, so it finds "define" itself.
   // Fix: look for the suggestion among the keys that are not already "define"/"conjecture", and
   // name the extra key ("a define: document holds only define:; x is not allowed here").
-  it.fails('a define: document with an extra key names that key, not define: itself', () => {
+  it('a define: document with an extra key names that key, not define: itself', () => {
     const e = errorOf('define:\n  f(k): k + 1\nx: 3\n---\nconjecture: c\nclaim: f(1) == 2\n');
     expect(e.message).not.toMatch(/"define:" for "define:"/);
     expect(e.message).toMatch(/\bx\b/);
@@ -239,7 +239,7 @@ describe('positions of errors inside expressions', () => {
     ['double-quoted continued on the next line', 'claim: "inv(w) <=\n  frob(w)"\n', 'f.yaml:6:3'],
   ];
   for (const [style, claim, pos] of joined) {
-    it.fails(`${style}: ${pos} (known bug: line-joined scalars)`, () => {
+    it(`${style}: ${pos}`, () => {
       expect(where(errorOf(base + claim))).toBe(pos);
     });
   }
@@ -249,7 +249,7 @@ describe('positions of errors inside expressions', () => {
   // `avoids(w, \"132\")` is the natural way to write a pattern inside a double-quoted claim.
   // Fix: map offsets through the escapes (walk the raw text, counting a backslash escape as one
   // value character), or re-scan the raw text with the YAML escape rules.
-  it.fails('double-quoted with escaped quotes: positions after the escapes (known bug)', () => {
+  it('double-quoted with escaped quotes: positions after the escapes', () => {
     expect(where(errorOf(base + 'claim: "avoids(w, \\"132\\") and frob(w)"\n'))).toBe('f.yaml:5:32');
   });
 
@@ -328,7 +328,7 @@ describe('big integers stay exact', () => {
   // counterexample file written from it states (and replays) a different conjecture.
   // Fix: parse with { intAsBigInt: true } and convert in plain(): bigint -> number when safe, else
   // the decimal string of CLI.md's encoding (or keep the scalar's source text for numbers).
-  it.fails('in the document kept for the hash and counterexample files (known bug)', () => {
+  it('in the document kept for the hash and counterexample files', () => {
     const [c] = load(`conjecture: c\nfor:\n  n: 1..2\nlet:\n  a: ${big}\nclaim: a > 0\n`);
     expect(JSON.stringify(c.document)).toContain(big);
   });
@@ -351,12 +351,12 @@ describe('aliases', () => {
   // for the Alias node itself, so `b: *A` is refused with "let b must be an expression". Fix:
   // resolve aliases first (`if (isAlias(node)) node = node.resolve(doc)`; YamlFile needs the
   // document for that), keeping positions at the anchored text.
-  it.fails('an alias of a single expression is allowed (known bug)', () => {
+  it('an alias of a single expression is allowed', () => {
     const [c] = load('conjecture: c\nfor:\n  n: 1..3\n  w: permutations(n)\nlet:\n  a: &A inv(w)\n  b: *A\nclaim: a == b\n');
     expect(checkConjecture(compileConjecture(c), {}, {}).outcome).toBe('holds');
   });
 
-  it.fails('an alias of a single non-expression value (a reference) is allowed (known bug, same cause)', () => {
+  it('an alias of a single non-expression value (a reference) is allowed', () => {
     const [c] = load('conjecture: c\nstatement: &S Inversions are nonnegative.\nreferences:\n  - *S\nfor:\n  n: 1..3\nclaim: n > 0\n');
     expect(c.references).toEqual(['Inversions are nonnegative.']);
   });

@@ -1,0 +1,98 @@
+// A fixed set of worker threads, one task at a time each. Every worker gets the whole run request
+// and compiles the conjectures itself; tasks name a conjecture by its index in the run.
+
+import { Worker } from 'node:worker_threads';
+import type { RunRequest } from '../session.js';
+import type { PoolReply, PoolTask } from './messages.js';
+
+type Pending = { resolve: (r: PoolReply) => void; reject: (e: Error) => void; progress?: (visited: number) => void };
+
+export class WorkerCrash extends Error {}
+
+export class WorkerPool {
+  private readonly workers: Worker[] = [];
+  private readonly pending = new Map<number, Pending>();
+  private nextTask = 1;
+  private closed = false;
+
+  constructor(
+    readonly size: number,
+    request: RunRequest,
+    readonly flag: Int32Array,
+  ) {
+    for (let i = 0; i < size; i++) {
+      const w = new Worker(new URL('./pool-worker.js', import.meta.url), { workerData: { request, flag } });
+      w.on('message', (m: PoolReply) => this.receive(m));
+      w.on('error', (e) => this.failAll(e.message));
+      w.on('exit', (code) => {
+        if (!this.closed) this.failAll(`a worker thread stopped unexpectedly (exit code ${code})`);
+      });
+      this.workers.push(w);
+    }
+  }
+
+  private readyCount = 0;
+  private readyWaiters: Array<() => void> = [];
+
+  /** Resolves when every worker has compiled the run's conjectures (or the pool failed). */
+  ready(): Promise<void> {
+    if (this.readyCount >= this.size || this.crashed) return Promise.resolve();
+    return new Promise((resolve) => this.readyWaiters.push(resolve));
+  }
+
+  private wakeReady(): void {
+    for (const w of this.readyWaiters.splice(0)) w();
+  }
+
+  private receive(m: PoolReply): void {
+    if (m.t === 'ready') {
+      if (++this.readyCount >= this.size) this.wakeReady();
+      return;
+    }
+    if (m.t === 'progress') {
+      this.pending.get(m.task)?.progress?.(m.visited);
+      return;
+    }
+    if (m.t === 'crash') {
+      const msg = m.message + (process.env.HUNCH_DEBUG && m.stack ? `\n${m.stack}` : '');
+      if (m.task === null) this.failAll(msg);
+      else this.settle(m.task, null, new WorkerCrash(msg));
+      return;
+    }
+    this.settle(m.task, m, null);
+  }
+
+  private settle(task: number, r: PoolReply | null, e: Error | null): void {
+    const p = this.pending.get(task);
+    if (!p) return;
+    this.pending.delete(task);
+    if (e) p.reject(e);
+    else p.resolve(r!);
+  }
+
+  private failAll(message: string): void {
+    for (const [task] of this.pending) this.settle(task, null, new WorkerCrash(message));
+    this.crashed ??= message;
+    this.wakeReady();
+  }
+
+  crashed: string | null = null;
+
+  /** Run a task on worker `lane` (each lane keeps its worker busy with one task at a time). */
+  run<T extends PoolReply>(lane: number, task: DistributiveOmit<PoolTask, 'task'>, progress?: (visited: number) => void): Promise<T> {
+    if (this.crashed) return Promise.reject(new WorkerCrash(this.crashed));
+    const id = this.nextTask++;
+    return new Promise<T>((resolve, reject) => {
+      this.pending.set(id, { resolve: resolve as (r: PoolReply) => void, reject, progress });
+      this.workers[lane].postMessage({ ...task, task: id });
+    });
+  }
+
+  async close(): Promise<void> {
+    this.closed = true;
+    this.failAll('the run was stopped');
+    await Promise.all(this.workers.map((w) => w.terminate()));
+  }
+}
+
+type DistributiveOmit<T, K extends PropertyKey> = T extends unknown ? Omit<T, K> : never;
