@@ -7,6 +7,7 @@ import type { Value } from '../values/value.js';
 import { bindingTexts, encodeBindings, explainCase, frameFor, sizeOf } from './case-report.js';
 import { rangeBound } from './enumerate-cases.js';
 import { evaluateCase } from './evaluate-case.js';
+import { isValid } from './shrink.js';
 import { CaseError, PhaseResult, runExhaustive } from './exhaustive.js';
 import type { RunHooks, StopReason } from './hooks.js';
 import type { CheckedPiece, ConjectureResult, Counterexample, ErrorInfo } from './result.js';
@@ -103,7 +104,9 @@ export function withSizeOverrides(cc: CompiledConjecture, opts: CheckOptions): C
   return withSizes(cc, opts.sizes);
 }
 
-export function tryRegression(cc: CompiledConjecture, vals: Value[]): Counterexample | null {
+export function tryRegression(cc: CompiledConjecture, vals: Value[], sampleRanges = new Map<string, [number, number]>()): Counterexample | null {
+  // A saved case (perhaps edited by hand) counts only if it is still a case of the conjecture.
+  if (vals.length !== cc.bindings.length || !isValid(cc, vals, sampleRanges)) return null;
   const f = frameFor(cc, vals);
   if (evaluateCase(cc, f) !== 0) return null;
   const { values, sides } = explainCase(cc, f);
@@ -155,7 +158,7 @@ export function checkConjecture(compiled: CompiledConjecture, opts: CheckOptions
   try {
     if (opts.regression) {
       try {
-        result.counterexample = tryRegression(cc, opts.regression);
+        result.counterexample = tryRegression(cc, opts.regression, sampleSettingsOf(cc, opts).ranges);
       } catch (e) {
         if (!(e instanceof EvalError)) throw e; // an old case that no longer evaluates is simply not a counterexample
       }

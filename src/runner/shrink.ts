@@ -11,13 +11,16 @@ import type { Value } from '../values/value.js';
 import { compareCases } from './case-order.js';
 import { frameFor } from './case-report.js';
 import { rangeBound } from './enumerate-cases.js';
+import { enumerateCases } from './enumerate-cases.js';
 import { evaluateCase } from './evaluate-case.js';
+import { plannedCases } from './plan.js';
+import { own } from '../values/operations.js';
 import type { RunHooks } from './hooks.js';
 
 const MAX_STEPS = 100_000;
 const MAX_CANDIDATES_PER_ROUND = 5_000;
 
-function isValid(cc: CompiledConjecture, vals: Value[], sampleRanges: Map<string, [number, number]>): boolean {
+export function isValid(cc: CompiledConjecture, vals: Value[], sampleRanges: Map<string, [number, number]>): boolean {
   const frame = frameFor(cc, vals);
   for (let i = 0; i < cc.bindings.length; i++) {
     const b = cc.bindings[i];
@@ -155,9 +158,10 @@ export function shrinkCase(
   failing: Value[],
   sampleRanges: Map<string, [number, number]>,
   hooks: RunHooks,
-): { bindings: Value[]; steps: number } {
+): { bindings: Value[]; steps: number; completedBySearch: boolean } {
   let current = failing;
   let steps = 0;
+  let completedBySearch = false;
   while (steps < MAX_STEPS) {
     let best: Value[] | null = null;
     let seen = 0;
@@ -172,5 +176,69 @@ export function shrinkCase(
     steps++;
     if ((steps & 15) === 0 && hooks.shouldStop?.()) break;
   }
-  return { bindings: current, steps };
+  // Greedy steps can stop at a case that is locally minimal but not of the smallest size (every
+  // deletion loses the failure). Sizes below it that are small enough are then searched
+  // exhaustively, smallest first: the first one with a failure gives the simplest case there.
+  const found = searchSmallerSizes(cc, current, sampleRanges, hooks);
+  if (found) {
+    current = found;
+    steps++;
+    completedBySearch = true;
+  }
+  return { bindings: current, steps, completedBySearch };
+}
+
+/** Sizes with at most this many cases are searched exhaustively below a shrunk case. */
+const SEARCH_CASES_PER_SIZE = 100_000n;
+/** And no more than this many in all. */
+const SEARCH_CASES_TOTAL = 300_000n;
+
+function searchSmallerSizes(
+  cc: CompiledConjecture,
+  current: Value[],
+  sampleRanges: Map<string, [number, number]>,
+  hooks: RunHooks,
+): Value[] | null {
+  if (cc.sizeIndex < 0) return null;
+  const sb = cc.bindings[cc.sizeIndex];
+  if (sb.source.kind !== 'range') return null;
+  const s = current[cc.sizeIndex] as number;
+  let lo: number;
+  try {
+    lo = rangeBound(sb.source.lo(frameFor(cc, current)), sb.name);
+  } catch {
+    return null;
+  }
+  const sr = sampleRanges.get(sb.name);
+  if (sr) lo = Math.min(lo, sr[0]);
+  let budget = SEARCH_CASES_TOTAL;
+  const frame: Frame = new Array(cc.frameSize);
+  for (let v = lo; v < s; v++) {
+    const fixed = new Map<number, Value>([[cc.sizeIndex, v]]);
+    let planned: bigint | null;
+    try {
+      planned = plannedCases(cc, fixed);
+    } catch {
+      return null;
+    }
+    if (planned === null || planned > SEARCH_CASES_PER_SIZE || planned > budget) return null;
+    budget -= planned;
+    let best: Value[] | null = null;
+    try {
+      enumerateCases(cc, frame, fixed, () => {
+        const r = evaluateCase(cc, frame);
+        if (r === 0) {
+          const c = cc.bindings.map((b) => frame[b.slot]);
+          if (best === null || compareCases(cc, c, best) < 0) best = c.map(own);
+        }
+        return false;
+      });
+    } catch (e) {
+      if (e instanceof EvalError) return null; // a smaller size that errors: keep the greedy result
+      throw e;
+    }
+    if (best !== null) return best;
+    if (hooks.shouldStop?.()) return null;
+  }
+  return null;
 }

@@ -5,16 +5,17 @@
 //
 // Measured on 2 cores, printed by each test as "shrink quality: ..."; "size" is the share of 50
 // seeds reaching the true minimal size, "exact" the share giving exactly the simplest failing case.
-// Two runs, before and during the worker-thread refactor of src/runner (which changed the drawn
-// cases, not the shrinker):
+// Two runs before the search of small sizes was added to src/runner/shrink.ts (greedy steps
+// only), and the current one (greedy steps, then an exhaustive search of sizes below the shrunk
+// case whose case count is small):
 //   cycles(w) <= 5, n = 12..24               -> identity of S_6      size 100%/100%, exact 100%/100%
 //   maj(w) <= inv(w), n = 15..25             -> 132                  size 100%/100%, exact 100%/100%
-//   crossings(m) <= 2, n = 8..12             -> [[1,4],[2,5],[3,6]]  size  22%/12%,  exact  22%/12%  (BUG below)
+//   crossings(m) <= 2, n = 8..12             -> [[1,4],[2,5],[3,6]]  size  22%/12% -> 100%, exact 100%
 //   lambda[1] <= 4 or length <= 3, 15..25    -> [5,1,1,1]            size 100%/100%, exact 100%/100%
 //   no 3 consecutive elements, 15..25        -> {1,2,3} in 1..3      size 100%/100%, exact 100%/100%
-//   no 3 equal adjacent letters (k=3), 15..25 -> 111                 size 100%/100%, exact  86%/74%  (else 222, 333)
-//   des(w) <= 1, n = 10..12                  -> 321                  size  16%/20%,  exact  16%/20%  (BUG below)
-//   inv(w) <= 2, n = 10..12                  -> 321                  size  18%/20%,  exact  18%/20%  (BUG below)
+//   no 3 equal adjacent letters (k=3), 15..25 -> 111                 size 100%, exact 86%/74% -> 74% (else 222, 333)
+//   des(w) <= 1, n = 10..12                  -> 321                  size  16%/20% -> 100%, exact 100%
+//   inv(w) <= 2, n = 10..12                  -> 321                  size  18%/20% -> 100%, exact 100%
 // Shrinking from n = 25 (test/quality/shrink-time.test.ts): at most 16 ms per case.
 
 import { describe, expect, it } from 'vitest';
@@ -57,12 +58,9 @@ describe('shrink quality over 50 seeds', () => {
     expect(q.minimalSize, q.misses.slice(0, 5).join('\n')).toBeGreaterThanOrEqual(0.95);
   }, SLOW);
 
-  // KNOWN BUG (src/families/matchings/matchings.ts, shrinkMatching): the only steps are "delete an
-  // arc" and "exchange the partners of two neighbouring points", so a 4-arc matching whose three
-  // crossings form a chain (e.g. [[1,3],[2,5],[4,7],[6,8]]) is a dead end: every deletion loses a
-  // crossing and every neighbour exchange changes the crossing number. Only 22% of seeds reach
-  // n = 3. Marked `fails` until the shrinker is fixed; remove `.fails` then.
-  it.fails('crossings(m) <= 2 sampled at n = 8..12 shrinks to [[1,4],[2,5],[3,6]]', () => {
+  // Greedy steps alone reached n = 3 in only 22% of seeds (a chain of three crossings is a dead
+  // end for arc deletion); the search of small sizes after them finds the minimum.
+  it('crossings(m) <= 2 sampled at n = 8..12 shrinks to [[1,4],[2,5],[3,6]]', () => {
     const m = bruteMinimum(B.matchingsOf, (x) => B.crossings(x) > 2, B.compareMatchings, 4);
     expect(m).toEqual({ n: 3, simplest: [[1, 4], [2, 5], [3, 6]], count: 1 });
     const q = measure(
@@ -108,15 +106,9 @@ describe('shrink quality over 50 seeds', () => {
     expect(q.minimalSize, q.misses.slice(0, 5).join('\n')).toBeGreaterThanOrEqual(0.95);
   }, SLOW);
 
-  // KNOWN BUG (src/families/permutations/permutations.ts, shrinkPermutation, together with the
-  // greedy loop of src/runner/shrink.ts): for claims bounding descents or inversions, "delete an
-  // entry" from a smallest-looking failure such as 2143 (2 descents) always loses a descent, and the
-  // same-size steps only lower the statistic, so shrinking stops at n = 4 or 5 although 321 (n = 3)
-  // fails. Marked `fails` until fixed; remove `.fails` then. A fix that serves every family: when
-  // the greedy shrink ends at size s, enumerate the sizes below s whose case count is small (say at
-  // most 10^5, by plannedCases) in increasing order, and take the simplest failing case of the first
-  // size that has one.
-  it.fails('des(w) <= 1 sampled at n = 10..12 shrinks to 321', () => {
+  // Greedy steps alone stopped at n = 4 or 5 (deleting an entry of 2143 loses a descent); the
+  // search of small sizes after them finds 321.
+  it('des(w) <= 1 sampled at n = 10..12 shrinks to 321', () => {
     const m = bruteMinimum(B.permutationsOf, (w) => w.filter((x, i) => i + 1 < w.length && x > w[i + 1]).length > 1, B.comparePerms, 5);
     expect(m).toEqual({ n: 3, simplest: [3, 2, 1], count: 1 });
     const q = measure(
@@ -127,7 +119,7 @@ describe('shrink quality over 50 seeds', () => {
     expect(q.minimalSize, q.misses.slice(0, 5).join('\n')).toBeGreaterThanOrEqual(0.95);
   }, SLOW);
 
-  it.fails('inv(w) <= 2 sampled at n = 10..12 shrinks to 321', () => {
+  it('inv(w) <= 2 sampled at n = 10..12 shrinks to 321', () => {
     const m = bruteMinimum(B.permutationsOf, (w) => B.inv(w) > 2, B.comparePerms, 5);
     expect(m).toEqual({ n: 3, simplest: [3, 2, 1], count: 1 });
     const q = measure(

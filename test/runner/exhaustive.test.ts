@@ -280,13 +280,9 @@ describe('options', () => {
     expect(r2.outcome).toBe('error'); // the normal run then meets the error at n = 1
   });
 
-  // BUG (src/runner/check.ts, tryRegression): the saved case is evaluated without checking that it
-  // is a case of the conjecture at all: that each family binding is a member of its family at the
-  // saved parameters, and that range bindings lie in their ranges. A hand-edited or mailed
-  // counterexample file with w = 321 and n = 2 is then reported as a counterexample although 321 is
-  // not in permutations(2). Fix: run the shrinker's isValid (src/runner/shrink.ts) on the case
-  // first, and ignore (with a warning) a case that is not valid.
-  it.fails('a regression case whose object is not a member of its family is not a counterexample (known bug)', async () => {
+  // A hand-edited or mailed counterexample file whose case is not a case of the conjecture (here
+  // w = 321 with n = 2) is not a counterexample: tryRegression checks membership and ranges first.
+  it('a regression case whose object is not a member of its family is not a counterexample', async () => {
     const { decodeValue } = await import('../../src/values/decode.js');
     const r = check(doc({ for: ['n: 1..4', 'w: permutations(n)'], claim: 'len(w) == n' }), {
       regression: [2, decodeValue({ permutation: [3, 2, 1] })],
