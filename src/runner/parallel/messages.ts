@@ -39,4 +39,6 @@ export type PoolReply =
   | { t: 'chunk'; task: number; out: WireChunk }
   | { t: 'shrink'; task: number; out: Counterexample | null }
   | { t: 'progress'; task: number; visited: number }
+  /** How far a long exact solve (a stationary measure) inside the current case has got, 0..1. */
+  | { t: 'solve'; fraction: number }
   | { t: 'crash'; task: number | null; message: string; stack?: string };

@@ -7,6 +7,7 @@ import '../../library/index.js';
 import '../../families/index.js';
 import type { CompiledConjecture } from '../../language/conjecture/compiled.js';
 import { decodeValue } from '../../values/decode.js';
+import { setStationaryProgress } from '../../library/markov.js';
 import { encodeValue } from '../../values/operations.js';
 import { errorInfo, sampleSettingsOf, withSizeOverrides } from '../check.js';
 import type { StopReason } from '../hooks.js';
@@ -38,6 +39,14 @@ async function main(): Promise<void> {
   });
   let current = -1;
   let lastProgress = 0;
+  let lastSolve = 0;
+  setStationaryProgress((fraction) => {
+    const now = performance.now();
+    if (now - lastSolve > 200) {
+      lastSolve = now;
+      post({ t: 'solve', fraction });
+    }
+  });
   const control = (task: number, deadline: number | null) => ({
     shouldStop: (): StopReason | null =>
       Atomics.load(flag, 0) !== 0 ? 'interrupt' : deadline !== null && Date.now() > deadline ? 'budget' : null,

@@ -14,6 +14,8 @@ export class WorkerPool {
   private readonly pending = new Map<number, Pending>();
   private nextTask = 1;
   private closed = false;
+  /** Progress of a long exact solve inside a case (issue 6), for the progress line. */
+  onSolve: ((fraction: number) => void) | null = null;
 
   constructor(
     readonly size: number,
@@ -47,6 +49,10 @@ export class WorkerPool {
   private receive(m: PoolReply): void {
     if (m.t === 'ready') {
       if (++this.readyCount >= this.size) this.wakeReady();
+      return;
+    }
+    if (m.t === 'solve') {
+      this.onSolve?.(m.fraction);
       return;
     }
     if (m.t === 'progress') {

@@ -79,6 +79,7 @@ function singleWorker(req: RunRequest, flag: Int32Array, h: RunHandlers): CheckR
 
 function pooled(compiled: CompiledConjecture[], req: RunRequest, workers: number, flag: Int32Array, h: RunHandlers): CheckRun {
   const pool = new WorkerPool(workers, req, flag);
+  pool.onSolve = (f) => h.onProgress(Math.round(f * 1000), 1000, 'solving for an exact stationary measure');
   let killed = false;
   const interrupted = () => Atomics.load(flag, 0) !== 0;
   const finished = (async (): Promise<string | null> => {
