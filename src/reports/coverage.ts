@@ -50,7 +50,7 @@ export function describeCoverage(checked: CheckedPiece[]): CoverageText {
         : `${cases} cases of ${sizeRanges(ex)}, not finished`;
   }
   const sampled = sa.length
-    ? `${sizeRanges(sa)} sampled, ${formatCount(sum(sa))} random cases${excluded(sa)}${partial(sa)}`
+    ? `${sizeRanges(sa)} sampled, ${formatCount(sum(sa))} random case${sum(sa) === 1 ? '' : 's'}${excluded(sa)}${partial(sa)}`
     : null;
   return { exhaustive, sampled };
 }
