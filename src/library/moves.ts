@@ -78,7 +78,7 @@ defineFunction({
     'the Temperley–Lieb action on a matching around a circle: i and i+1 (mod 2n) become an arc and their former partners are joined; unchanged if i, i+1 already form an arc',
   example: 'joinAt(matching([[1, 3], [2, 4]]), 1)',
   exampleValue: 'matching([[1, 2], [3, 4]])',
-  source: 'Temperley and Lieb, Proc. R. Soc. Lond. A 322 (1971); link patterns as in de Gier, "Loops, matchings and alternating-sign matrices", arXiv:math/0211285',
+  source: 'Temperley and Lieb, Proc. R. Soc. Lond. A 322 (1971); link patterns as in "Loops, matchings and alternating-sign matrices", arXiv:math/0211285',
   impl: (m, i) => joinAt(m as Matching, circlePosition('joinAt(m, i)', m as Matching, i)),
 });
 
@@ -93,7 +93,7 @@ defineFunction({
   description: 'the points i and i+1 (mod 2n) exchange partners; unchanged if they form an arc',
   example: 'crossAt(matching([[1, 4], [2, 3]]), 1)',
   exampleValue: 'matching([[1, 3], [2, 4]])',
-  source: 'the crossing generators of the Brauer algebra; Di Francesco and Zinn-Justin, Comm. Math. Phys. 262 (2006)',
+  source: 'the crossing generators of the Brauer algebra; "Inhomogeneous model of crossing loops and multidegrees of some algebraic varieties", Comm. Math. Phys. 262 (2006)',
   impl: (m, i) => crossAt(m as Matching, circlePosition('crossAt(m, i)', m as Matching, i)),
 });
 

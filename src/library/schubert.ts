@@ -85,7 +85,7 @@ defineFunction({
   example: 'grothendieck(perm([1, 3, 2]), x)',
   exampleValue: '-x[1]*x[2] + x[1] + x[2]',
   source:
-    'A. Lascoux, M.-P. Schützenberger, C. R. Acad. Sci. Paris 295 (1982); tested against the K-theoretic pipe dream formula (S. Fomin, A. N. Kirillov, Grothendieck polynomials and the Yang–Baxter equation, 1994; A. Knutson, E. Miller, Ann. of Math. 161 (2005))',
+    'A. Lascoux, M.-P. Schützenberger, C. R. Acad. Sci. Paris 295 (1982); tested against the K-theoretic pipe dream formula (S. Fomin, A. N. Kirillov, Grothendieck polynomials and the Yang–Baxter equation, 1994; "Gröbner geometry of Schubert polynomials", Ann. of Math. 161 (2005))',
   impl: (w, x) => grothendieckPolynomial(permArg('grothendieck(w, x)', w), indexedBaseArg('grothendieck(w, x)', 'x', x)),
 });
 

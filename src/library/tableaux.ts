@@ -105,7 +105,7 @@ defineFunction({
   description: 'the pipe dream with crosses at the given cells [row, column] (elbows elsewhere)',
   example: 'pipeDream([[1, 2], [1, 1]])',
   exampleValue: 'pipeDream([[1, 1], [1, 2]])',
-  source: 'definition; Knutson and Miller, Ann. of Math. 161 (2005), §1.4',
+  source: 'definition; "Gröbner geometry of Schubert polynomials", Ann. of Math. 161 (2005), §1.4',
   impl: (cs) => {
     if (!Array.isArray(cs)) fail(`a pipe dream is a list of crosses [row, column], got ${valueToText(cs)}`);
     return PipeDream.from(cs.map((c) => intList(c, 'a cross of a pipe dream')));

@@ -4,7 +4,7 @@
 //   (Billey–Jockusch–Stanley 1993, Bergeron–Billey 1993);
 // - S_w(x; y) = sum over the same P of prod (x_i - y_j) (Fomin–Kirillov 1996; BJS Thm 1.1 form);
 // - G_w = sum over all pipe dreams P whose Demazure product is w of (-1)^{|P| - inv(w)} prod x_i
-//   (Fomin–Kirillov 1994; Knutson–Miller 2005, §1.4).
+//   (Fomin–Kirillov 1994; "Gröbner geometry of Schubert polynomials", Ann. of Math. 2005, §1.4).
 // Exponent vectors are plain string keys here, deliberately unlike the library.
 
 export type Expansion = Map<string, bigint>; // "e1,e2,..." (x exponents, then y exponents) -> coefficient

@@ -1,7 +1,7 @@
 // A pipe dream: a finite set of crosses (i, j) (row i, column j, both 1-based) in the quadrant;
 // every other tile is an elbow. Stored sorted lexicographically. The pipe entering row i from the
-// left leaves through the top of column w(i) (Knutson and Miller, Groebner geometry of Schubert
-// varieties, Ann. of Math. 161 (2005), §1.4); the family pipeDreams(w) decides membership.
+// left leaves through the top of column w(i) ("Gröbner geometry of Schubert
+// polynomials", Ann. of Math. 161 (2005), §1.4); the family pipeDreams(w) decides membership.
 
 import { fail } from '../../base/errors.js';
 import { registerDecoder } from '../../values/decode.js';

@@ -1,12 +1,12 @@
 // The exact stationary solver (src/algebra/linear/stationary.ts) on the loop chain of issue 6.
 //
 // Source for the numbers: OEIS A029729 (degree of the variety of pairs of commuting n x n
-// matrices: 1, 3, 31, 1145, 154881, 77899563, ...), whose comment (de Gier and Nienhuis, 2004)
+// matrices: 1, 3, 31, 1145, 154881, 77899563, ...), whose comment (2004)
 // identifies it with the ratio of ground-state entries of H = sum_i (3 - 2 e_i - b_i) on the
 // Brauer loop model with 2n points and periodic boundary: the stationary measure of our chain,
 // since H psi = 0 says exactly that psi is invariant under (1/6n) sum_i (2 e_i + b_i). Proofs:
-// Di Francesco and Zinn-Justin, Comm. Math. Phys. 262 (2006); Knutson and Zinn-Justin, "A scheme
-// related to the Brauer loop model", Adv. Math. 214 (2007).
+// "Inhomogeneous model of crossing loops and multidegrees of some algebraic varieties", Comm. Math.
+// Phys. 262 (2006); "A scheme related to the Brauer loop model", Adv. Math. 214 (2007).
 
 import { describe, expect, it } from 'vitest';
 import { stationaryDense } from '../../../src/algebra/linear/denseRational.js';
