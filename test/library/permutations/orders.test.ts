@@ -48,7 +48,7 @@ function bruhatBelowBySubwords(v: number[]): Set<string> {
     let p = Array.from({ length: n }, (_, i) => i + 1), len = 0;
     word.forEach((i, k) => {
       if (mask & (1 << k)) {
-        p = compose(p, (call('simple', i, n) as { a: number[] }).a);
+        p = compose(p, (call('simple', i, n) as unknown as { a: number[] }).a);
         len++;
       }
     });
