@@ -123,11 +123,10 @@ export function tryRegression(cc: CompiledConjecture, vals: Value[], sampleRange
   };
 }
 
-export function checkConjecture(compiled: CompiledConjecture, opts: CheckOptions, hooks: RunHooks): ConjectureResult {
-  const t0 = performance.now();
-  const cc = withSizes(compiled, opts.sizes);
+/** A result before any work: it holds until something fails. */
+export function startResult(cc: CompiledConjecture): ConjectureResult {
   const spec = cc.spec;
-  const result: ConjectureResult = {
+  return {
     id: spec.id,
     file: spec.file,
     hash: cc.hash,
@@ -140,16 +139,26 @@ export function checkConjecture(compiled: CompiledConjecture, opts: CheckOptions
     error: null,
     ms: 0,
   };
-  const finish = (stoppedBy: StopReason | null) => {
-    result.ms = performance.now() - t0;
-    if (result.error) result.outcome = 'error';
-    else if (result.counterexample) result.outcome = 'fails';
-    else if (stoppedBy) {
-      result.outcome = 'incomplete';
-      result.stoppedBy = stoppedBy;
-    }
-    return result;
-  };
+}
+
+/** The outcome from what was found: an error, else a counterexample, else a stop, else it holds. */
+export function finishResult(result: ConjectureResult, t0: number, stoppedBy: StopReason | null): ConjectureResult {
+  result.ms = performance.now() - t0;
+  if (result.error) result.outcome = 'error';
+  else if (result.counterexample) result.outcome = 'fails';
+  else if (stoppedBy) {
+    result.outcome = 'incomplete';
+    result.stoppedBy = stoppedBy;
+  }
+  return result;
+}
+
+export function checkConjecture(compiled: CompiledConjecture, opts: CheckOptions, hooks: RunHooks): ConjectureResult {
+  const t0 = performance.now();
+  const cc = withSizes(compiled, opts.sizes);
+  const spec = cc.spec;
+  const result = startResult(cc);
+  const finish = (stoppedBy: StopReason | null) => finishResult(result, t0, stoppedBy);
   const absorb = (r: PhaseResult) => {
     result.checked.push(...r.pieces);
     result.counterexample = r.counterexample;

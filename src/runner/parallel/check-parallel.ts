@@ -5,7 +5,7 @@
 import type { CompiledConjecture } from '../../language/conjecture/compiled.js';
 import { decodeValue } from '../../values/decode.js';
 import type { Value } from '../../values/value.js';
-import { errorInfo, exhaustiveSizes, sampleSettingsOf, tryRegression, withSizeOverrides, type CheckOptions } from '../check.js';
+import { errorInfo, exhaustiveSizes, finishResult, startResult, sampleSettingsOf, tryRegression, withSizeOverrides, type CheckOptions } from '../check.js';
 import { EvalError } from '../../base/errors.js';
 import type { RunHooks, StopReason } from '../hooks.js';
 import type { ConjectureResult, ErrorInfo } from '../result.js';
@@ -59,20 +59,8 @@ export async function checkConjectureParallel(
   const t0 = performance.now();
   const cc = withSizeOverrides(compiled, opts);
   const spec = cc.spec;
-  const result: ConjectureResult = {
-    id: spec.id, file: spec.file, hash: cc.hash, expect: spec.expect, outcome: 'holds', statement: spec.statement,
-    claim: spec.claim.text, checked: [], counterexample: null, error: null, ms: 0,
-  };
-  const finish = (stoppedBy: StopReason | null) => {
-    result.ms = performance.now() - t0;
-    if (result.error) result.outcome = 'error';
-    else if (result.counterexample) result.outcome = 'fails';
-    else if (stoppedBy) {
-      result.outcome = 'incomplete';
-      result.stoppedBy = stoppedBy;
-    }
-    return result;
-  };
+  const result = startResult(cc);
+  const finish = (stoppedBy: StopReason | null) => finishResult(result, t0, stoppedBy);
   const lanes = ctx.pool.size;
   const shouldStop = () => hooks.shouldStop?.() ?? null;
   const shard = opts.shard ?? null;
@@ -84,7 +72,7 @@ export async function checkConjectureParallel(
   try {
     if (opts.regression) {
       try {
-        result.counterexample = tryRegression(cc, opts.regression);
+        result.counterexample = tryRegression(cc, opts.regression, sampleSettingsOf(cc, opts).ranges);
       } catch (e) {
         if (!(e instanceof EvalError)) throw e;
       }
