@@ -2,14 +2,23 @@
 
 import { fail } from '../../base/errors.js';
 import { registerDecoder } from '../../values/decode.js';
-import type { Structured } from '../../values/structured.js';
+import { IntegerSequence } from '../common/integer-sequence.js';
 
-export class Composition implements Structured {
+export class Composition extends IntegerSequence {
   readonly kind = 'composition';
-  transient = false;
 
   /** Trusts that every part is a positive integer; use Composition.from for user data. */
-  constructor(readonly parts: number[]) {}
+  constructor(readonly parts: number[]) {
+    super();
+  }
+
+  protected sequence(): readonly number[] {
+    return this.parts;
+  }
+
+  protected rebuild(values: number[]): Composition {
+    return new Composition(values);
+  }
 
   /** The sum of the parts. */
   get size(): number {
@@ -27,34 +36,6 @@ export class Composition implements Structured {
       if (!Number.isSafeInteger(x) || x < 1) fail(`[${parts.join(', ')}] is not a composition: the part ${x} is not a positive integer`);
     }
     return new Composition(parts.slice());
-  }
-
-  /** The parts in order: a composition is a source after `in` (sum(c), max(c)). */
-  elements(): readonly number[] {
-    return this.parts;
-  }
-
-  equals(other: Structured): boolean {
-    const b = (other as Composition).parts, a = this.parts;
-    if (a.length !== b.length) return false;
-    for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
-    return true;
-  }
-
-  key(): string {
-    return this.parts.join(',');
-  }
-
-  toText(): string {
-    return `composition([${this.parts.join(', ')}])`;
-  }
-
-  encode(): unknown {
-    return { composition: this.parts.slice() };
-  }
-
-  copy(): Composition {
-    return new Composition(this.parts.slice());
   }
 }
 

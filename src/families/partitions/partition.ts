@@ -3,14 +3,23 @@
 
 import { fail } from '../../base/errors.js';
 import { registerDecoder } from '../../values/decode.js';
-import type { Structured } from '../../values/structured.js';
+import { IntegerSequence } from '../common/integer-sequence.js';
 
-export class Partition implements Structured {
+export class Partition extends IntegerSequence {
   readonly kind = 'partition';
-  transient = false;
 
   /** Trusts that `parts` is weakly decreasing and positive; use Partition.from for user data. */
-  constructor(readonly parts: number[]) {}
+  constructor(readonly parts: number[]) {
+    super();
+  }
+
+  protected sequence(): readonly number[] {
+    return this.parts;
+  }
+
+  protected rebuild(values: number[]): Partition {
+    return new Partition(values);
+  }
 
   /** The number of parts. */
   get length(): number {
@@ -40,34 +49,6 @@ export class Partition implements Structured {
       }
     }
     return new Partition(parts.slice() as number[]);
-  }
-
-  /** The parts, largest first: a partition is a source after `in` (sum(lambda), all(p in lambda: ...)). */
-  elements(): readonly number[] {
-    return this.parts;
-  }
-
-  equals(other: Structured): boolean {
-    const b = (other as Partition).parts, a = this.parts;
-    if (a.length !== b.length) return false;
-    for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
-    return true;
-  }
-
-  key(): string {
-    return this.parts.join(',');
-  }
-
-  toText(): string {
-    return `partition([${this.parts.join(', ')}])`;
-  }
-
-  encode(): unknown {
-    return { partition: this.parts.slice() };
-  }
-
-  copy(): Partition {
-    return new Partition(this.parts.slice());
   }
 }
 

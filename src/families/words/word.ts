@@ -3,14 +3,23 @@
 
 import { fail } from '../../base/errors.js';
 import { registerDecoder } from '../../values/decode.js';
-import type { Structured } from '../../values/structured.js';
+import { IntegerSequence } from '../common/integer-sequence.js';
 
-export class Word implements Structured {
+export class Word extends IntegerSequence {
   readonly kind = 'word';
-  transient = false;
 
   /** Trusts that every letter is a positive integer; use Word.from for user data. */
-  constructor(readonly letters: number[]) {}
+  constructor(readonly letters: number[]) {
+    super();
+  }
+
+  protected sequence(): readonly number[] {
+    return this.letters;
+  }
+
+  protected rebuild(values: number[]): Word {
+    return new Word(values);
+  }
 
   get length(): number {
     return this.letters.length;
@@ -26,34 +35,6 @@ export class Word implements Structured {
       if (!Number.isSafeInteger(x) || x < 1) fail(`[${letters.join(', ')}] is not a word: the letter ${x} is not a positive integer`);
     }
     return new Word(letters.slice());
-  }
-
-  /** The letters in order: a word is a source after `in`. */
-  elements(): readonly number[] {
-    return this.letters;
-  }
-
-  equals(other: Structured): boolean {
-    const b = (other as Word).letters, a = this.letters;
-    if (a.length !== b.length) return false;
-    for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
-    return true;
-  }
-
-  key(): string {
-    return this.letters.join(',');
-  }
-
-  toText(): string {
-    return `word([${this.letters.join(', ')}])`;
-  }
-
-  encode(): unknown {
-    return { word: this.letters.slice() };
-  }
-
-  copy(): Word {
-    return new Word(this.letters.slice());
   }
 }
 
