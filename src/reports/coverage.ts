@@ -32,26 +32,38 @@ export function describeCoverage(checked: CheckedPiece[]): CoverageText {
   const sa = checked.filter((p) => p.phase === 'sample');
   const sum = (ps: CheckedPiece[]) => ps.reduce((a, p) => a + p.cases, 0);
   const skipped = (ps: CheckedPiece[]) => ps.reduce((a, p) => a + p.skipped, 0);
-  const partial = (ps: CheckedPiece[]) => (ps.some((p) => p.partial) ? ' (the last size only in part)' : '');
   const excluded = (ps: CheckedPiece[]) => (skipped(ps) ? `, ${formatCount(skipped(ps))} excluded by where` : '');
+  // Finished sizes are named as ranges; a size stopped part-way is named apart with what it did.
+  const unfinished = (ps: CheckedPiece[], what: string) =>
+    ps
+      .filter((p) => p.partial)
+      .map((p) => `${sizeRanges([p])} stopped part-way, after ${formatCount(p.cases)} ${what}`)
+      .join('; ');
   let exhaustive: string | null = null;
   if (ex.length) {
     const whole = ex.filter((p) => !p.partial);
     const rng = whole.length ? sizeRanges(whole) : '';
-    const cases = formatCount(sum(ex));
+    const n = sum(whole);
     // An aggregate claim (no family binding) is one case per size: say what that means.
-    const aggregate = ex.every((p) => p.cases + p.skipped <= 1) && ex.length > 1;
-    exhaustive = rng && aggregate
-      ? `${rng} exhaustive (one claim about the whole of each size)${partial(ex)}`
-      : rng
-      ? `${rng} exhaustive, ${cases} case${sum(ex) === 1 ? '' : 's'}${excluded(ex)}${partial(ex)}`
-      : Object.keys(ex[0].size).length === 0
-        ? `every case, ${cases} case${sum(ex) === 1 ? '' : 's'}${excluded(ex)}${partial(ex)}`
-        : `${cases} cases of ${sizeRanges(ex)}, not finished`;
+    const aggregate = whole.length > 1 && whole.every((p) => p.cases + p.skipped <= 1);
+    const parts: string[] = [];
+    if (rng && aggregate) parts.push(`${rng} exhaustive (one claim about the whole of each size)`);
+    else if (rng) parts.push(`${rng} exhaustive, ${formatCount(n)} case${n === 1 ? '' : 's'}${excluded(whole)}`);
+    else if (whole.length) parts.push(`every case, ${formatCount(n)} case${n === 1 ? '' : 's'}${excluded(whole)}`);
+    const u = unfinished(ex, 'cases');
+    if (u) parts.push(u);
+    exhaustive = parts.join('; ') || null;
   }
-  const sampled = sa.length
-    ? `${sizeRanges(sa)} sampled, ${formatCount(sum(sa))} random case${sum(sa) === 1 ? '' : 's'}${excluded(sa)}${partial(sa)}`
-    : null;
+  let sampled: string | null = null;
+  if (sa.length) {
+    const whole = sa.filter((p) => !p.partial);
+    const n = sum(whole);
+    const parts: string[] = [];
+    if (whole.length) parts.push(`${sizeRanges(whole)} sampled, ${formatCount(n)} random case${n === 1 ? '' : 's'}${excluded(whole)}`);
+    const u = unfinished(sa, 'random cases');
+    if (u) parts.push(u);
+    sampled = parts.join('; ') || null;
+  }
   return { exhaustive, sampled };
 }
 

@@ -134,7 +134,10 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   if (flags.json) t.out(JSON.stringify(resultDocument(results), null, 2) + '\n');
   else {
     t.out(formatSummary(results, performance.now() - started, style));
-    if (interrupted) t.out(t.color.yellow(`Interrupted: ${compiled.length - results.length} conjecture(s) not started; what was finished is recorded.\n`));
+    if (interrupted) {
+      const left = compiled.length - results.length;
+      t.out(t.color.yellow(`Interrupted${left ? `: ${left} conjecture${left === 1 ? '' : 's'} not started` : ''}; what was finished is recorded.\n`));
+    }
   }
   if (interrupted) return EXIT.interrupted;
   return results.every((r) => agreesWithExpectation(r) || (r.outcome === 'incomplete' && r.expect !== 'fails'))
