@@ -61,7 +61,9 @@ export async function checkConjectureParallel(
   const spec = cc.spec;
   const result = startResult(cc);
   const finish = (stoppedBy: StopReason | null) => finishResult(result, t0, stoppedBy);
-  const lanes = ctx.pool.size;
+  // Two lanes per worker: each worker has its next unit queued when it finishes one, so it never
+  // waits for a round trip through the main thread.
+  const lanes = 2 * ctx.pool.size;
   const shouldStop = () => hooks.shouldStop?.() ?? null;
   const shard = opts.shard ?? null;
   const resume = opts.resume ? new ResumeIndex(opts.resume, spec.id, cc.hash) : null;

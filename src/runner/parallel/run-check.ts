@@ -10,7 +10,7 @@ import type { CheckedPiece, ConjectureResult } from '../result.js';
 import { checkOptionsFor, type RunRequest } from '../session.js';
 import type { WorkerMessage } from '../worker.js';
 import { checkConjectureParallel } from './check-parallel.js';
-import { WorkerPool } from './pool.js';
+import { WORKER_LIMITS, WorkerPool } from './pool.js';
 
 export interface RunHandlers {
   onStart?(id: string): void;
@@ -45,7 +45,7 @@ export function startCheckRun(
 }
 
 function singleWorker(req: RunRequest, flag: Int32Array, h: RunHandlers): CheckRun {
-  const worker = new Worker(new URL('../worker.js', import.meta.url), { workerData: { request: req, flag } });
+  const worker = new Worker(new URL('../worker.js', import.meta.url), { workerData: { request: req, flag }, resourceLimits: WORKER_LIMITS });
   let crash: string | null = null;
   const finished = new Promise<string | null>((resolve) => {
     worker.on('message', (m: WorkerMessage) => {
