@@ -129,7 +129,9 @@ describe('status after runs', () => {
     expect(code).toBe(3);
     const s = status(d).conjectures[0];
     expect(s.exhaustive.map((e: any) => e.size.n)).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9]);
-    expect(s.unfinished).toEqual([]);
+    // Slices of n = 10 finished before the stop may be recorded (for --resume): they show as
+    // unfinished, never as verified.
+    expect(s.unfinished.every((u: any) => u.size.n === 10)).toBe(true);
   }, 60_000);
 
   test('two concurrent checks on one ledger lose and interleave nothing', async () => {
