@@ -13,7 +13,7 @@
 //   crossings(m) <= 2, n = 8..12             -> [[1,4],[2,5],[3,6]]  size  22%/12% -> 100%, exact 100%
 //   lambda[1] <= 4 or length <= 3, 15..25    -> [5,1,1,1]            size 100%/100%, exact 100%/100%
 //   no 3 consecutive elements, 15..25        -> {1,2,3} in 1..3      size 100%/100%, exact 100%/100%
-//   no 3 equal adjacent letters (k=3), 15..25 -> 111                 size 100%, exact 86%/74% -> 74% (else 222, 333)
+//   no 3 equal adjacent letters (k=3), 15..25 -> 111                 size 100%, exact 86%/74% -> 100% (with the letter exchange)
 //   des(w) <= 1, n = 10..12                  -> 321                  size  16%/20% -> 100%, exact 100%
 //   inv(w) <= 2, n = 10..12                  -> 321                  size  18%/20% -> 100%, exact 100%
 // Shrinking from n = 25 (test/quality/shrink-time.test.ts): at most 16 ms per case.

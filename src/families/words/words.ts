@@ -61,7 +61,11 @@ export const words: Family<WordsParam, Word> = defineFamily<WordsParam, Word>({
   },
 });
 
-/** Delete a letter (length n-1), then lower a letter by one. */
+/**
+ * Delete a letter (length n-1); then exchange two letter values throughout the word when that makes
+ * it lexicographically smaller (222 becomes 111: claims about patterns of equal letters keep
+ * failing); then lower a letter by one.
+ */
 function* shrinkWord(p: WordsParam, w: Word): Generator<Shrunk<WordsParam, Word>> {
   const a = w.letters;
   const seen = new Set<string>();
@@ -71,6 +75,13 @@ function* shrinkWord(p: WordsParam, w: Word): Generator<Shrunk<WordsParam, Word>
     if (seen.has(key)) continue;
     seen.add(key);
     yield { params: { n: p.n - 1, k: p.k }, size: p.n - 1, obj: new Word(b) };
+  }
+  const present = [...new Set(a)].sort((x, y) => x - y);
+  for (const hi of present) {
+    for (let lo = 1; lo < hi; lo++) {
+      const b = a.map((x) => (x === hi ? lo : x === lo ? hi : x));
+      if (compareWords(new Word(b), w) < 0) yield { params: p, obj: new Word(b) };
+    }
   }
   for (let i = 0; i < a.length; i++) {
     if (a[i] > 1) {
