@@ -190,8 +190,10 @@ export function shrinkCase(
 
 /** Sizes with at most this many cases are searched exhaustively below a shrunk case. */
 const SEARCH_CASES_PER_SIZE = 100_000n;
-/** And no more than this many in all. */
+/** And no more than this many in all, */
 const SEARCH_CASES_TOTAL = 300_000n;
+/** nor for longer than this (milliseconds). */
+const SEARCH_MS = 5_000;
 
 function searchSmallerSizes(
   cc: CompiledConjecture,
@@ -213,6 +215,11 @@ function searchSmallerSizes(
   if (sr) lo = Math.min(lo, sr[0]);
   let budget = SEARCH_CASES_TOTAL;
   const frame: Frame = new Array(cc.frameSize);
+  // Slow cases (a big polynomial per case) make the search costly in time, not count: give up
+  // after a few seconds and keep the greedy result.
+  const deadline = performance.now() + SEARCH_MS;
+  let timedOut = false;
+  let seen = 0;
   for (let v = lo; v < s; v++) {
     const fixed = new Map<number, Value>([[cc.sizeIndex, v]]);
     let planned: bigint | null;
@@ -226,6 +233,10 @@ function searchSmallerSizes(
     let best: Value[] | null = null;
     try {
       enumerateCases(cc, frame, fixed, () => {
+        if ((++seen & 63) === 0 && performance.now() > deadline) {
+          timedOut = true;
+          return true;
+        }
         const r = evaluateCase(cc, frame);
         if (r === 0) {
           const c = cc.bindings.map((b) => frame[b.slot]);
@@ -237,7 +248,8 @@ function searchSmallerSizes(
       if (e instanceof EvalError) return null; // a smaller size that errors: keep the greedy result
       throw e;
     }
-    if (best !== null) return best;
+    if (best !== null) return best; // smaller than the greedy result even if the search ran out of time
+    if (timedOut) return null;
     if (hooks.shouldStop?.()) return null;
   }
   return null;

@@ -10,7 +10,7 @@ import { compareCases } from '../case-order.js';
 import { encodeBindings } from '../case-report.js';
 import { enumerateCases } from '../enumerate-cases.js';
 import { evaluateCase, SKIPPED } from '../evaluate-case.js';
-import { POLL_MASK, type StopReason } from '../hooks.js';
+import { Poller, type StopReason } from '../hooks.js';
 import { randomFor } from '../seeds.js';
 import { drawBinding } from '../sample.js';
 import { enumerateCaseRange } from './case-space.js';
@@ -57,6 +57,7 @@ export function runSlice(cc: CompiledConjecture, size: number | null, range: [bi
   const fixed = sizeFixing(cc, size);
   const out: SliceOutcome = { cases: 0, failures: 0, skipped: 0, best: null, bestIndex: null, fault: null, stopped: null, ms: 0 };
   let visited = 0;
+  const poller = new Poller();
   const base = range ? range[0] : 0n;
   const onCase = (): boolean => {
     const r = evaluateCase(cc, frame);
@@ -72,7 +73,8 @@ export function runSlice(cc: CompiledConjecture, size: number | null, range: [bi
         }
       }
     }
-    if ((++visited & POLL_MASK) === 0) {
+    visited++;
+    if (poller.due()) {
       ctl.onProgress?.(visited);
       const s = ctl.shouldStop?.() ?? null;
       if (s) {
@@ -128,6 +130,7 @@ export function runSampleChunk(
   const rng = chunkRandom(cc, settings.seed, size, chunk);
   const frame: Frame = new Array(cc.frameSize);
   const out: ChunkOutcome = { cases: 0, failures: 0, skipped: 0, failing: null, fault: null, stopped: null, ms: 0 };
+  const poller = new Poller();
   const sizeB = cc.bindings[cc.sizeIndex];
   // A `where` that rejects most draws must not loop for ever.
   const maxAttempts = quota * 20 + 20;
@@ -150,7 +153,7 @@ export function runSampleChunk(
         out.failing = cc.bindings.map((b) => own(frame[b.slot]));
         break;
       }
-      if ((out.cases & 63) === 0) {
+      if (poller.due()) {
         ctl.onProgress?.(out.cases);
         const s = ctl.shouldStop?.() ?? null;
         if (s) {
