@@ -327,9 +327,15 @@ describe('budgets', () => {
   });
 
   it('an interrupt during the sample phase is incomplete too', () => {
+    // Stop a few polls into the sample phase (polls are frequent at first, so count them only
+    // once the three exhaustive sizes are finished).
     let polls = 0;
+    let exhaustiveDone = 0;
     const r = check(doc({ for: ['n: 1..3', 'w: permutations(n)'], claim: 'inv(w) >= 0', sample: ['n: 10..12', 'count: 1000'] }), {}, {
-      shouldStop: () => (++polls >= 4 ? 'interrupt' : null),
+      shouldStop: () => (exhaustiveDone >= 3 && ++polls >= 4 ? 'interrupt' : null),
+      onPiece: (p) => {
+        if (p.phase === 'exhaustive') exhaustiveDone++;
+      },
     });
     expect(r.outcome).toBe('incomplete');
     expect(r.stoppedBy).toBe('interrupt');
