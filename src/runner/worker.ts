@@ -5,6 +5,7 @@ import { parentPort, workerData } from 'node:worker_threads';
 import '../library/index.js';
 import '../families/index.js';
 import { decodeValue } from '../values/decode.js';
+import { setStationaryProgress } from '../library/markov.js';
 import { prepareRun, runSession, type RunRequest } from './session.js';
 // The worker is the composition root of its thread, like the CLI of the main one: it opens the
 // project (plugins, canonical hash) before compiling, so it may reach up to the records layer.
@@ -25,6 +26,14 @@ try {
   if (request.root) await openProjectAt(request.root);
   const compiled = prepareRun(request);
   let lastProgress = 0;
+  // A long exact solve inside one case (a stationary measure) reports how far it has got.
+  setStationaryProgress((f) => {
+    const now = performance.now();
+    if (now - lastProgress > 200) {
+      lastProgress = now;
+      post({ type: 'progress', done: Math.round(f * 1000), total: 1000, label: 'solving for an exact stationary measure' });
+    }
+  });
   runSession(
     compiled,
     request,
