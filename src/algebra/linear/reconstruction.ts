@@ -6,8 +6,15 @@
 
 import { bigGcd } from '../../numbers/integer.js';
 
+/** Integers known modulo `modulus` (0 <= values[i] < modulus). */
+export interface ResidueVector {
+  readonly length: number;
+  readonly modulus: bigint;
+  readonly values: readonly bigint[];
+}
+
 /** x ≡ a (mod m), x ≡ b (mod p) with 0 <= x < m p, for coprime m and p. */
-export class CrtVector {
+export class CrtVector implements ResidueVector {
   modulus = 1n;
   values: bigint[];
 
@@ -90,7 +97,7 @@ export interface CommonFraction {
  * (value_i * D) mod M, where D is the product of the denominators found so far. Null when some
  * entry has no reconstruction within the bound (more primes are needed).
  */
-export function reconstructVector(crt: CrtVector): CommonFraction | null {
+export function reconstructVector(crt: ResidueVector): CommonFraction | null {
   const m = crt.modulus;
   const bound = isqrt(m / 2n);
   const nums: bigint[] = new Array(crt.length);

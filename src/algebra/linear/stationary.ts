@@ -1,12 +1,14 @@
 // The exact stationary measure of a finite chain:
 //   1. the closed communicating classes (there must be exactly one; transient states get 0);
 //   2. the closed class lumped by its coarsest equitable partition (lumping.ts);
-//   3. the stationary vector modulo primes p_0, p_1, ... (modularKernel.ts), folded together by
-//      Chinese remaindering and turned into rationals by rational reconstruction; as soon as a
-//      reconstruction exists it is
+//   3. the stationary vector of that system as rationals: normally from one sparse factorisation
+//      modulo one prime and p-adic lifting (padicLifting.ts), for chains with huge weights from
+//      solves modulo primes p_0, p_1, ... (modularKernel.ts) folded by Chinese remaindering; either
+//      way turned into rationals by rational reconstruction, and as soon as a reconstruction
+//      exists it is
 //   4. verified exactly against the original chain (verifyStationary.ts) and returned; if it
-//      fails, more primes are added (a reconstruction that is stable across an extra prime and
-//      still fails means the system was wrong: see lumping.ts).
+//      fails, more digits or primes are added (a reconstruction that is stable over an extra one
+//      and still fails means the system was wrong: see lumping.ts).
 // Nothing is returned that has not passed step 4.
 
 import { fail } from '../../base/errors.js';
@@ -15,7 +17,9 @@ import { makeRat, type Scalar } from '../../numbers/rational.js';
 import { closedClasses } from './closedClasses.js';
 import { equitablePartition, lumpedChain } from './lumping.js';
 import { modPrime } from './modular.js';
+import { integerGenerator, type IntegerGenerator } from './integerGenerator.js';
 import { stationaryModP, type PivotPlan } from './modularKernel.js';
+import { PadicKernel } from './padicLifting.js';
 import { agreesModP, CrtVector, reconstructVector, type CommonFraction } from './reconstruction.js';
 import { describeByNumber, restrictChain, type Describe, type SparseChain } from './sparseChain.js';
 import { isStationary } from './verifyStationary.js';
@@ -27,7 +31,7 @@ export interface StationaryOptions {
   onProgress?: (fraction: number) => void;
   /** Use the equitable partition to shrink the system (default true). */
   lump?: boolean;
-  /** Give up (an internal error) after this many primes (default 400: about 9000 bits). */
+  /** Give up (an internal error) after this many primes or p-adic digits (default 400: about 9000 bits). */
   maxPrimes?: number;
 }
 
@@ -37,7 +41,12 @@ export interface SolveStats {
   closedClassSize: number;
   /** Size of the system actually solved (blocks of the equitable partition, or the class). */
   systemSize: number;
+  /** 'lifting': one prime and p-adic digits; 'primes': one solve per prime, Chinese remaindering. */
+  method: 'lifting' | 'primes';
+  /** Primes factored (for 'lifting', unlucky ones included). */
   primes: number;
+  /** p-adic digits computed ('lifting' only). */
+  digits: number;
   denseSize: number;
   lumped: boolean;
 }
@@ -61,8 +70,9 @@ function classesMessage(classes: number[][], describe: Describe): string {
 }
 
 /**
- * The stationary vector of an irreducible chain as a common fraction (pi(s) = nums[s] / den),
- * from its residues modulo successive primes; `accept` is the exact test a candidate must pass.
+ * The stationary vector of an irreducible chain as a common fraction (pi(s) = nums[s] / den);
+ * `accept` is the exact test a candidate must pass. Null when a candidate is stable yet fails the
+ * test (the system is not the chain's: a wrong lumping).
  */
 function solveIrreducible(
   c: SparseChain,
@@ -70,7 +80,79 @@ function solveIrreducible(
   opts: StationaryOptions,
   stats: SolveStats,
 ): CommonFraction | null {
+  const g = integerGenerator(c);
+  return g ? solveByLifting(c, g, accept, opts, stats) : solveByPrimes(c, accept, opts, stats);
+}
+
+/** Share of the progress bar given to the factorisation in solveByLifting (the digits are cheap). */
+const FACTOR_SHARE = 0.8;
+
+/**
+ * One factorisation modulo one prime, then p-adic digits of the kernel (padicLifting.ts) until a
+ * rational reconstruction passes the exact test. Needs the integer form of the chain.
+ */
+function solveByLifting(
+  c: SparseChain,
+  g: IntegerGenerator,
+  accept: (f: CommonFraction) => boolean,
+  opts: StationaryOptions,
+  stats: SolveStats,
+): CommonFraction | null {
+  const maxDigits = opts.maxPrimes ?? 400;
+  stats.method = 'lifting';
+  const progress = opts.onProgress;
+  let kernel: PadicKernel | null = null;
+  for (let k = 0; !kernel; k++) {
+    // An unlucky prime divides a pivot (chance about 1/p each); twenty in a row cannot happen
+    // for a nonsingular system, so that is an internal error.
+    if (k >= 20) throw new Error('no prime is usable for this chain');
+    stats.primes = k + 1;
+    kernel = PadicKernel.start(c, g, modPrime(k), {
+      onProgress: progress ? (f) => progress(FACTOR_SHARE * f) : undefined,
+    });
+  }
+  stats.denseSize = kernel.lu.plan.denseOrder.length;
+  let previous: CommonFraction | null = null;
+  let rejected = 0;
+  let expected = 3;
+  while (kernel.digits < maxDigits) {
+    kernel.step();
+    stats.digits = kernel.digits;
+    if (kernel.digits >= expected) expected = kernel.digits + 1;
+    progress?.(Math.min(0.99, FACTOR_SHARE + ((1 - FACTOR_SHARE) * kernel.digits) / expected));
+    const y = reconstructVector(kernel);
+    if (!y) continue;
+    if (previous && sameFraction(previous, y)) {
+      // Stable over an extra digit, yet it failed the exact test when it was made: either a
+      // coincidence (chance about 1/p; more digits fix it) or a system that is not the chain's.
+      if (++rejected >= 2) return null;
+    }
+    previous = y;
+    // pi(s) is proportional to T'_s y(s) (integerGenerator.ts).
+    const nums = y.nums.map((a, s) => a * BigInt(g.total[s]));
+    let den = 0n;
+    for (const a of nums) den += a;
+    if (accept({ nums, den })) return { nums, den };
+  }
+  throw new Error(`the stationary measure did not stabilise within ${maxDigits} p-adic digits`);
+}
+
+function sameFraction(a: CommonFraction, b: CommonFraction): boolean {
+  return a.den === b.den && a.nums.every((x, i) => x === b.nums[i]);
+}
+
+/**
+ * The stationary vector from its residues modulo successive primes (modularKernel.ts), folded by
+ * Chinese remaindering; for chains whose weights are too large for solveByLifting.
+ */
+function solveByPrimes(
+  c: SparseChain,
+  accept: (f: CommonFraction) => boolean,
+  opts: StationaryOptions,
+  stats: SolveStats,
+): CommonFraction | null {
   const maxPrimes = opts.maxPrimes ?? 400;
+  stats.method = 'primes';
   const crt = new CrtVector(c.size);
   let plan: PivotPlan | undefined;
   let candidate: CommonFraction | null = null;
@@ -122,7 +204,9 @@ export function stationaryFraction(c: SparseChain, opts: StationaryOptions = {})
     states: c.size,
     closedClassSize: cls.length,
     systemSize: cls.length,
+    method: 'lifting',
     primes: 0,
+    digits: 0,
     denseSize: 0,
     lumped: false,
   };

@@ -60,7 +60,7 @@ describe('the loop chain, join 2/3 and exchange 1/3 (OEIS A029729)', () => {
     });
   });
 
-  // Timed: about 0.05 s with lumping and 1 s without on one core, so it stays in the normal tier
+  // Timed: about 0.05 s with lumping and 0.3 s without on one core, so it stays in the normal tier
   // with a generous timeout (the issue asks for under 10 s).
   it('n = 5 (945 states) solves exactly and gives 154881 for the nested matching, with and without lumping', () => {
     for (const lump of [true, false]) {
