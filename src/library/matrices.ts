@@ -3,7 +3,20 @@
 
 import { charpoly, determinant, Matrix, rank, transpose } from '../algebra/matrix.js';
 import type { PolyLike } from '../algebra/polynomial.js';
+import { fail } from '../base/errors.js';
+import { isScalar } from '../numbers/rational.js';
+import { valueToText } from '../values/operations.js';
+import type { Value } from '../values/value.js';
 import { defineFunction } from './registry.js';
+
+/** The rows, after naming the first entry that is not a number in the language's own notation. */
+function matrixRows(rows: Value): unknown[][] {
+  if (Array.isArray(rows))
+    for (const row of rows)
+      if (Array.isArray(row))
+        for (const x of row) if (!isScalar(x)) fail(`a matrix entry must be a number, not ${valueToText(x)}`);
+  return rows as unknown[][];
+}
 
 const topic = 'matrices';
 
@@ -16,7 +29,7 @@ defineFunction({
   example: 'matrix([[1, 2], [3, 4]])',
   exampleValue: 'matrix([[1, 2], [3, 4]])',
   source: 'definition',
-  impl: (rows) => Matrix.from(rows as unknown[][]),
+  impl: (rows) => Matrix.from(matrixRows(rows)),
 });
 
 defineFunction({

@@ -52,6 +52,7 @@ export function slideOut(rows: number[][]): number {
 /** Promotion: delete 1, slide, subtract 1 from every entry, put n in the vacated cell. */
 export function promotionRows(t: readonly (readonly number[])[]): number[][] {
   const n = t.reduce((s, r) => s + r.length, 0);
+  if (n === 0) return []; // the empty tableau is its own promotion
   const rows = t.map((r) => r.slice());
   const i = slideOut(rows);
   for (const r of rows) for (let j = 0; j < r.length; j++) r[j]--;

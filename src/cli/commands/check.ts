@@ -1,6 +1,8 @@
 // hunch check [PATH...]: run the conjectures, print the report, record coverage and counterexamples.
 
 import type { Command } from 'commander';
+import { InputError } from '../../base/errors.js';
+import { MAX_EXHAUSTIVE_SIZES } from '../../language/conjecture/compile-conjecture.js';
 import '../../families/index.js';
 import '../../library/index.js';
 import { prepareRun, type RunRequest } from '../../runner/session.js';
@@ -58,11 +60,21 @@ export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
     .action(async (paths: string[], flags: CheckFlags) => setExit(await runCheck(paths, flags, t)));
 };
 
+/** An exhaustive range of more sizes than a file may give is refused here too (it would exhaust memory). */
+function limitSizes(r: [string, number, number]): [string, number, number] {
+  if (r[2] - r[1] + 1 > MAX_EXHAUSTIVE_SIZES)
+    throw new InputError(
+      `--sizes ${r[0]}=${r[1]}..${r[2]} has ${(r[2] - r[1] + 1).toLocaleString('en-US')} sizes; an exhaustive range may have at most ` +
+        `${MAX_EXHAUSTIVE_SIZES.toLocaleString('en-US')}. Check large sizes with --sample instead`,
+    );
+  return r;
+}
+
 function buildRequest(paths: string[], f: CheckFlags): RunRequest {
   return {
     paths,
     ids: f.id ?? null,
-    sizes: (f.sizes ?? []).map((s) => parseRangeOption(s, '--sizes')),
+    sizes: (f.sizes ?? []).map((s) => limitSizes(parseRangeOption(s, '--sizes'))),
     sampleRanges: (f.sample ?? []).map((s) => parseRangeOption(s, '--sample')),
     exhaustive: f.exhaustive,
     count: f.count === undefined ? null : parseCount(f.count, '--count'),

@@ -6,10 +6,16 @@ import type { Family, Shrunk } from '../family.js';
 import { defineFamily } from '../registry.js';
 import { sizeArg, type SizeParam } from '../permutations/permutations.js';
 import { Composition } from './composition.js';
+import { clampRange } from '../common/ranges.js';
 
 /** Simplicity order: the sum, the number of parts, then the parts lexicographically. */
 export function compareCompositions(u: Composition, v: Composition): number {
   return u.size - v.size || u.length - v.length || lexCompareArrays(u.parts, v.parts);
+}
+
+/** The number of compositions of n: 2^(n-1), and 1 for n = 0. */
+export function compositionCount(n: number): bigint {
+  return n === 0 ? 1n : 1n << BigInt(n - 1);
 }
 
 export const compositions: Family<SizeParam, Composition> = defineFamily<SizeParam, Composition>({
@@ -24,7 +30,7 @@ export const compositions: Family<SizeParam, Composition> = defineFamily<SizePar
     return { n: sizeArg(args[0]) };
   },
   count({ n }) {
-    return n === 0 ? 1n : 1n << BigInt(n - 1);
+    return compositionCount(n);
   },
   enumerate({ n }, visit) {
     const c = new Composition([]);
@@ -41,6 +47,39 @@ export const compositions: Family<SizeParam, Composition> = defineFamily<SizePar
       return false;
     };
     return go(n);
+  },
+  enumerateRange({ n }, lo, hi, visit) {
+    // The recursion of `enumerate`, passing over whole subtrees while objects remain to be skipped:
+    // after a first part f, the rest is one of the compositionCount(rest - f) compositions of rest - f.
+    const range = clampRange(lo, hi, compositionCount(n));
+    if (!range) return false;
+    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    const c = new Composition([]);
+    c.transient = true;
+    const parts = c.parts;
+    const go = (rest: number): boolean => {
+      if (rest === 0) {
+        if (visit(c) === true) return (stopped = true);
+        return --left === 0;
+      }
+      for (let first = 1; first <= rest; first++) {
+        if (skipping) {
+          const below = compositionCount(rest - first);
+          if (below <= skip) {
+            skip -= below;
+            skipping = skip > 0n;
+            continue;
+          }
+        }
+        parts.push(first);
+        const stop = go(rest - first);
+        parts.pop();
+        if (stop) return true;
+      }
+      return false;
+    };
+    go(n);
+    return stopped;
   },
   isMember({ n }, obj: Structured) {
     if (!(obj instanceof Composition)) return false;

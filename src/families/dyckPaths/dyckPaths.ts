@@ -7,12 +7,25 @@ import { sizeArg, type SizeParam } from '../permutations/permutations.js';
 import type * as fc from 'fast-check';
 import { FamilyArbitrary } from '../common/arbitrary.js';
 import { DyckPath } from './dyckPath.js';
+import { clampRange } from '../common/ranges.js';
+import { binomialBig } from '../subsets/subsets.js';
 
 export function catalanBig(n: number): bigint {
   // C(2n, n) / (n + 1), built up exactly: C_{k+1} = C_k * 2(2k+1) / (k+2).
   let c = 1n;
   for (let k = 0; k < n; k++) c = (c * BigInt(2 * (2 * k + 1))) / BigInt(k + 2);
   return c;
+}
+
+/**
+ * The number of paths of r steps U = +1, D = -1 from height h down to height 0 that never go below
+ * 0: C(r, u) - C(r, u - 1) with u = (r - h)/2 up steps, by the reflection principle (Feller, An
+ * Introduction to Probability Theory and Its Applications I, §III.1); 0 when r - h is odd or negative.
+ */
+export function ballotPaths(r: number, h: number): bigint {
+  if (h < 0 || h > r || (r - h) % 2 !== 0) return 0n;
+  const u = (r - h) / 2;
+  return binomialBig(r, u) - binomialBig(r, u - 1);
 }
 
 /** Simplicity: size, then area, then lexicographic with U before D. */
@@ -107,6 +120,41 @@ export const dyckPaths = defineFamily<SizeParam, DyckPath>({
       return false;
     };
     return go(0, 0, 0);
+  },
+  enumerateRange({ n }, lo, hi, visit) {
+    // The recursion of `enumerate`, passing over whole subtrees while objects remain to be skipped:
+    // after i steps at height h, the rest is one of ballotPaths(2n - i, h) paths.
+    const range = clampRange(lo, hi, catalanBig(n));
+    if (!range) return false;
+    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    const d = new DyckPath(new Array<number>(2 * n).fill(1));
+    d.transient = true;
+    const s = d.steps;
+    // Whether the subtree after step i (to height h) is passed over whole.
+    const pass = (i: number, h: number): boolean => {
+      const c = ballotPaths(2 * n - i - 1, h);
+      if (c > skip) return false;
+      skip -= c;
+      skipping = skip > 0n;
+      return true;
+    };
+    const go = (i: number, ups: number, h: number): boolean => {
+      if (i === 2 * n) {
+        if (visit(d) === true) return (stopped = true);
+        return --left === 0;
+      }
+      if (ups < n && !(skipping && pass(i, h + 1))) {
+        s[i] = 1;
+        if (go(i + 1, ups + 1, h + 1)) return true;
+      }
+      if (h > 0 && !(skipping && pass(i, h - 1))) {
+        s[i] = -1;
+        if (go(i + 1, ups, h - 1)) return true;
+      }
+      return false;
+    };
+    go(0, 0, 0);
+    return stopped;
   },
   isMember({ n }, obj) {
     return obj instanceof DyckPath && obj.steps.length === 2 * n;

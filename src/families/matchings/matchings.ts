@@ -7,6 +7,7 @@ import { defineFamily } from '../registry.js';
 import { sizeArg, type SizeParam } from '../permutations/permutations.js';
 import { Matching, matchingCrossings, matchingNestings } from './matching.js';
 import { deleteArc, isPerfectMatching } from './arcs.js';
+import { clampRange } from '../common/ranges.js';
 
 /** (2n-1)!! = 1·3·5···(2n-1) (OEIS A001147). */
 export function doubleFactorialOdd(n: number): bigint {
@@ -63,6 +64,45 @@ export const matchings: Family<SizeParam, Matching> = defineFamily<SizeParam, Ma
       return false;
     };
     return go(0);
+  },
+  enumerateRange({ n }, lo, hi, visit) {
+    // The recursion of `enumerate`, passing over whole subtrees while objects remain to be skipped:
+    // with `arcs` arcs still to draw, each choice of partner leaves (2 arcs - 3)!! matchings.
+    const range = clampRange(lo, hi, doubleFactorialOdd(n));
+    if (!range) return false;
+    const below: bigint[] = [1n];
+    for (let k = 1; k <= n; k++) below.push(below[k - 1] * BigInt(2 * k - 1));
+    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    const m = new Matching(new Array<number>(2 * n).fill(0));
+    m.transient = true;
+    const p = m.p;
+    const go = (i: number, arcs: number): boolean => {
+      while (i < 2 * n && p[i] !== 0) i++;
+      if (i === 2 * n) {
+        if (visit(m) === true) return (stopped = true);
+        return --left === 0;
+      }
+      for (let j = i + 1; j < 2 * n; j++) {
+        if (p[j] !== 0) continue;
+        if (skipping && below[arcs - 1] <= skip) {
+          skip -= below[arcs - 1];
+          skipping = skip > 0n;
+          continue;
+        }
+        p[i] = j + 1;
+        p[j] = i + 1;
+        const stop = go(i + 1, arcs - 1);
+        p[j] = 0;
+        if (stop) {
+          p[i] = 0;
+          return true;
+        }
+      }
+      p[i] = 0;
+      return false;
+    };
+    go(0, n);
+    return stopped;
   },
   isMember({ n }, obj: Structured) {
     return obj instanceof Matching && obj.n === n && obj.p.length === 2 * n && isPerfectMatching(obj.p);

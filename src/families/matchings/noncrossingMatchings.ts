@@ -8,6 +8,8 @@ import { defineFamily } from '../registry.js';
 import { sizeArg, type SizeParam } from '../permutations/permutations.js';
 import { Matching, matchingNestings } from './matching.js';
 import { deleteArc, isNoncrossing, isPerfectMatching } from './arcs.js';
+import { clampRange } from '../common/ranges.js';
+import { ballotPaths } from '../dyckPaths/dyckPaths.js';
 
 export function catalanBig(n: number): bigint {
   let c = 1n;
@@ -75,6 +77,49 @@ export const noncrossingMatchings: Family<SizeParam, Matching> = defineFamily<Si
       return false;
     };
     return go(0, 0);
+  },
+  enumerateRange({ n }, lo, hi, visit) {
+    // The recursion of `enumerate`, passing over whole subtrees while objects remain to be skipped:
+    // after i points with `depth` arcs open, the rest is one of ballotPaths(2n - i, depth) Dyck words.
+    const range = clampRange(lo, hi, catalanBig(n));
+    if (!range) return false;
+    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    const m = new Matching(new Array<number>(2 * n).fill(0));
+    m.transient = true;
+    const p = m.p;
+    const stack = new Array<number>(n);
+    let depth = 0;
+    // Whether the subtree after point i (with h arcs open) is passed over whole.
+    const pass = (i: number, h: number): boolean => {
+      const c = ballotPaths(2 * n - i - 1, h);
+      if (c > skip) return false;
+      skip -= c;
+      skipping = skip > 0n;
+      return true;
+    };
+    const go = (i: number, opened: number): boolean => {
+      if (i === 2 * n) {
+        if (visit(m) === true) return (stopped = true);
+        return --left === 0;
+      }
+      if (opened < n && !(skipping && pass(i, depth + 1))) {
+        stack[depth++] = i + 1;
+        const stop = go(i + 1, opened + 1);
+        depth--;
+        if (stop) return true;
+      }
+      if (depth > 0 && !(skipping && pass(i, depth - 1))) {
+        const a = stack[--depth];
+        p[a - 1] = i + 1;
+        p[i] = a;
+        const stop = go(i + 1, opened);
+        stack[depth++] = a;
+        if (stop) return true;
+      }
+      return false;
+    };
+    go(0, 0);
+    return stopped;
   },
   isMember({ n }, obj: Structured) {
     return obj instanceof Matching && obj.p.length === 2 * n && isPerfectMatching(obj.p) && isNoncrossing(obj.p);

@@ -10,6 +10,7 @@ import type * as fc from 'fast-check';
 import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 import { Matrix } from '../../algebra/matrix.js';
 import type { Structured } from '../../values/structured.js';
+import { clampRange } from '../common/ranges.js';
 
 export interface RectParam {
   k: number;
@@ -122,6 +123,41 @@ export const partialPermutations = defineFamily<RectParam, Matrix>({
       return false;
     };
     return go(0);
+  },
+  enumerateRange({ k, n }, lo, hi, visit) {
+    // The recursion of `enumerate`, passing over whole subtrees while objects remain to be skipped:
+    // with rows i+1.. and f columns free after row i, there are partialPermutationCount(k - i - 1, f) ways on.
+    const range = clampRange(lo, hi, partialPermutationCount(k, n));
+    if (!range) return false;
+    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    const img = new Array<number>(k).fill(0);
+    const used = new Uint8Array(n + 1);
+    const go = (i: number, free: number): boolean => {
+      if (i === k) {
+        if (visit(matrixOfImages(img, n)) === true) return (stopped = true);
+        return --left === 0;
+      }
+      for (let c = 0; c <= n; c++) {
+        if (c && used[c]) continue;
+        if (skipping) {
+          const below = partialPermutationCount(k - i - 1, c ? free - 1 : free);
+          if (below <= skip) {
+            skip -= below;
+            skipping = skip > 0n;
+            continue;
+          }
+        }
+        img[i] = c;
+        used[c] = c ? 1 : 0;
+        const stop = go(i + 1, c ? free - 1 : free);
+        if (c) used[c] = 0;
+        if (stop) return true;
+      }
+      img[i] = 0;
+      return false;
+    };
+    go(0, n);
+    return stopped;
   },
   isMember({ k, n }, obj) {
     return obj instanceof Matrix && obj.rows === k && obj.cols === n && rowImages(obj) !== undefined;

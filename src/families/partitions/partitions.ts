@@ -7,6 +7,7 @@ import { lexCompare } from '../permutations/permutation.js';
 import type { Shrunk } from '../family.js';
 import { Partition } from './partition.js';
 import { partitionCount } from './partitionCounts.js';
+import { clampRange } from '../common/ranges.js';
 import type * as fc from 'fast-check';
 import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 
@@ -34,6 +35,53 @@ export function nextPartition(parts: number[]): boolean {
   }
   if (rem > 0) parts.push(rem);
   return true;
+}
+
+/**
+ * The partition of n of rank r (0-based) in reverse lexicographic order. Those with first part v
+ * come after the ones with larger first parts, and their rest is a partition of n - v into parts at
+ * most v, of which there are boundedPartitionCount(n - v, v).
+ */
+export function unrankPartition(n: number, r: bigint): number[] {
+  const count = boundedPartitionCounter();
+  const parts: number[] = [];
+  let m = n, k = n;
+  while (m > 0) {
+    for (let v = Math.min(m, k); v >= 1; v--) {
+      const c = count(m - v, v);
+      if (r < c) {
+        parts.push(v);
+        m -= v;
+        k = v;
+        break;
+      }
+      r -= c;
+    }
+  }
+  return parts;
+}
+
+/**
+ * The number of partitions of m into parts at most k, memoised for one use:
+ * P(0, k) = 1, P(m, k) = P(m, k - 1) + P(m - k, k) (the parts are all below k, or one equals k),
+ * P(m, k) = P(m, m) for k > m (Andrews, The Theory of Partitions, ch. 1).
+ */
+function boundedPartitionCounter(): (m: number, k: number) => bigint {
+  const memo = new Map<number, bigint>();
+  const count = (m: number, k: number): bigint => {
+    if (k > m) k = m;
+    if (m === 0) return 1n;
+    if (k === 0) return 0n;
+    if (k === 1) return 1n;
+    const key = m * 1_048_576 + k;
+    let v = memo.get(key);
+    if (v === undefined) {
+      v = count(m, k - 1) + count(m - k, k);
+      memo.set(key, v);
+    }
+    return v;
+  };
+  return count;
 }
 
 /**
@@ -103,6 +151,17 @@ export const partitions = defineFamily<SizeParam, Partition>({
       if (visit(lambda)) return true;
     } while (nextPartition(lambda.parts));
     return false;
+  },
+  enumerateRange({ n }, lo, hi, visit) {
+    const range = clampRange(lo, hi, partitionCount(n));
+    if (!range) return false;
+    const lambda = new Partition(unrankPartition(n, range.first));
+    lambda.transient = true;
+    for (let left = range.length; ; ) {
+      if (visit(lambda)) return true;
+      if (--left === 0) return false;
+      nextPartition(lambda.parts);
+    }
   },
   isMember({ n }, obj) {
     return obj instanceof Partition && obj.size === n;

@@ -6,7 +6,8 @@ import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 import type { Family, Shrunk } from '../family.js';
 import { defineFamily } from '../registry.js';
 import { Permutation } from './permutation.js';
-import { comparePermutations, sizeArg, type SizeParam } from './permutations.js';
+import { comparePermutations, factorialBig, sizeArg, type SizeParam } from './permutations.js';
+import { clampRange } from '../common/ranges.js';
 import { deleteTwoEntries, removeFromCycle } from './standardise.js';
 
 /** D(0..n) with D(m) = (m-1)(D(m-1) + D(m-2)), D(0) = 1, D(1) = 0 (OEIS A000166). */
@@ -51,6 +52,26 @@ function drawDerangement(rng: import('fast-check').Random, m: number, d: bigint[
   return a;
 }
 
+/**
+ * R(m, k), for m <= n: the bijections between two m-sets that avoid k given cells, no two in a
+ * row or column: sum_j (-1)^j C(k, j) (m-j)! (inclusion–exclusion; Stanley, Enumerative
+ * Combinatorics 1, §2.2), computed by R(m, 0) = m!, R(m, k) = R(m, k-1) - R(m-1, k-1)
+ * (the k-th cell either is used or not). R(m, m) is the number of derangements of m points.
+ */
+function completionsAvoiding(n: number): (m: number, k: number) => bigint {
+  const memo = new Map<number, bigint>();
+  const r = (m: number, k: number): bigint => {
+    const key = m * (n + 1) + k;
+    let v = memo.get(key);
+    if (v === undefined) {
+      v = k === 0 ? factorialBig(m) : r(m, k - 1) - r(m - 1, k - 1);
+      memo.set(key, v);
+    }
+    return v;
+  };
+  return r;
+}
+
 export const derangements: Family<SizeParam, Permutation> = defineFamily<SizeParam, Permutation>({
   name: 'derangements',
   params: [{ name: 'n', type: 'integer' }],
@@ -87,6 +108,46 @@ export const derangements: Family<SizeParam, Permutation> = defineFamily<SizePar
       return false;
     };
     return go(0);
+  },
+  enumerateRange({ n }, lo, hi, visit) {
+    // The recursion of `enumerate`, passing over whole subtrees while objects remain to be skipped.
+    // A subtree is the set of bijections from the free positions to the free values avoiding the
+    // k cells (p, p) with both p free: counted by inclusion–exclusion (completionsAvoiding).
+    const range = clampRange(lo, hi, derangementCounts(n)[n]);
+    if (!range) return false;
+    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    const completions = completionsAvoiding(n);
+    const w = new Permutation(new Array<number>(n).fill(0));
+    w.transient = true;
+    const a = w.a;
+    const used = new Uint8Array(n + 1);
+    const go = (i: number): boolean => {
+      if (i === n) {
+        if (visit(w) === true) return (stopped = true);
+        return --left === 0;
+      }
+      let k = 0; // the free positions after i whose own value is still free
+      if (skipping) for (let q = i + 2; q <= n; q++) if (!used[q]) k++;
+      for (let v = 1; v <= n; v++) {
+        if (used[v] || v === i + 1) continue;
+        if (skipping) {
+          const c = completions(n - i - 1, v >= i + 2 ? k - 1 : k);
+          if (c <= skip) {
+            skip -= c;
+            skipping = skip > 0n;
+            continue;
+          }
+        }
+        a[i] = v;
+        used[v] = 1;
+        const stop = go(i + 1);
+        used[v] = 0;
+        if (stop) return true;
+      }
+      return false;
+    };
+    go(0);
+    return stopped;
   },
   isMember({ n }, obj: Structured) {
     return obj instanceof Permutation && obj.n === n && isDerangement(obj.a);

@@ -4,6 +4,7 @@ import type { Structured } from '../../values/structured.js';
 import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 import type { Family, Shrunk } from '../family.js';
 import { defineFamily } from '../registry.js';
+import { clampRange } from '../common/ranges.js';
 import { Permutation } from './permutation.js';
 import { comparePermutations, sizeArg, type SizeParam } from './permutations.js';
 import { deleteEntry, deleteTwoEntries } from './standardise.js';
@@ -58,6 +59,48 @@ export const involutions: Family<SizeParam, Permutation> = defineFamily<SizePara
       return false;
     };
     return go(0);
+  },
+  enumerateRange({ n }, lo, hi, visit) {
+    // The recursion of `enumerate`, passing over whole subtrees while objects remain to be
+    // skipped: with f free points, fixing the smallest leaves a(f-1) involutions, pairing it a(f-2).
+    const counts = involutionCounts(n);
+    const range = clampRange(lo, hi, counts[n]);
+    if (!range) return false;
+    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    const w = new Permutation(new Array<number>(n).fill(0));
+    w.transient = true;
+    const a = w.a;
+    const go = (i: number, free: number): boolean => {
+      while (i < n && a[i] !== 0) i++;
+      if (i === n) {
+        if (visit(w) === true) return (stopped = true);
+        return --left === 0;
+      }
+      if (skipping && counts[free - 1] <= skip) {
+        skip -= counts[free - 1];
+        skipping = skip > 0n;
+      } else {
+        a[i] = i + 1;
+        if (go(i + 1, free - 1)) return true;
+      }
+      for (let j = i + 1; j < n; j++) {
+        if (a[j] !== 0) continue;
+        if (skipping && counts[free - 2] <= skip) {
+          skip -= counts[free - 2];
+          skipping = skip > 0n;
+          continue;
+        }
+        a[i] = j + 1;
+        a[j] = i + 1;
+        const stop = go(i + 1, free - 2);
+        a[j] = 0;
+        if (stop) return true;
+      }
+      a[i] = 0;
+      return false;
+    };
+    go(0, n);
+    return stopped;
   },
   isMember({ n }, obj: Structured) {
     return obj instanceof Permutation && obj.n === n && isInvolution(obj.a);

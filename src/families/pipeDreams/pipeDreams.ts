@@ -14,6 +14,7 @@ import type * as fc from 'fast-check';
 import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 import { leftDescents, leftMultiply, permutationArg } from '../reducedWords/reducedWordCounts.js';
 import { PipeDream, tracePipes } from './pipeDream.js';
+import { clampRange } from '../common/ranges.js';
 
 export interface PipeParam {
   w: number[];
@@ -156,6 +157,41 @@ export const pipeDreams = defineFamily<PipeParam, PipeDream>({
       return false;
     };
     return go(w.slice(), Number.MAX_SAFE_INTEGER, 1);
+  },
+  enumerateRange({ w, length }, lo, hi, visit) {
+    // The recursion of `enumerate`, passing over whole subtrees while objects remain to be skipped:
+    // after the step (a, i) there are continuations(s_a v, a, i) compatible sequences on.
+    const range = clampRange(lo, hi, pipeDreamCount(w));
+    if (!range) return false;
+    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    const p = new PipeDream(Array.from({ length }, () => [0, 0] as [number, number]), w.length);
+    p.transient = true;
+    const stack: [number, number][] = [];
+    const go = (v: number[], lastA: number, lastI: number): boolean => {
+      if (stack.length === length) {
+        sortCrosses(stack, p.crosses);
+        if (visit(p) === true) return (stopped = true);
+        return --left === 0;
+      }
+      for (const [a, i] of steps(v, lastA, lastI)) {
+        const u = leftMultiply(v, a);
+        if (skipping) {
+          const below = continuations(u, a, i);
+          if (below <= skip) {
+            skip -= below;
+            skipping = skip > 0n;
+            continue;
+          }
+        }
+        stack.push([i, a - i + 1]);
+        const stop = go(u, a, i);
+        stack.pop();
+        if (stop) return true;
+      }
+      return false;
+    };
+    go(w.slice(), Number.MAX_SAFE_INTEGER, 1);
+    return stopped;
   },
   isMember({ w }, obj) {
     return obj instanceof PipeDream && isPipeDreamOf(obj, w);

@@ -3,7 +3,8 @@
 // count is Stanley's binom(n,2)! / prod (2i-1)^(n-i) (OEIS A005118).
 
 import { defineFamily } from '../registry.js';
-import type { Shrunk } from '../family.js';
+import type { Family, Shrunk } from '../family.js';
+import { clampRange, enumerateBySkipping } from '../common/ranges.js';
 import { lexCompare } from '../permutations/permutation.js';
 import { Word } from '../words/word.js';
 import type * as fc from 'fast-check';
@@ -68,7 +69,7 @@ function* simplify(word: Word): Generator<Word> {
   }
 }
 
-export const reducedWords = defineFamily<PermParam, Word>({
+export const reducedWords: Family<PermParam, Word> = defineFamily<PermParam, Word>({
   name: 'reducedWords',
   params: [{ name: 'w', type: 'any' }],
   objectKind: 'word',
@@ -96,6 +97,42 @@ export const reducedWords = defineFamily<PermParam, Word>({
       return false;
     };
     return go(w.slice(), 0);
+  },
+  enumerateRange(p, lo, hi, visit) {
+    const { w, length } = p;
+    // Below the longest element of S_n, n >= 10, counting the subtrees would need more of S_n than
+    // the memo of reducedWordCount holds; such sizes are far beyond exhaustive checks, so walking
+    // from the start costs nothing that matters there.
+    if (isLongest(w) && w.length >= 10) return enumerateBySkipping((v) => reducedWords.enumerate(p, v), lo, hi, visit);
+    // The recursion of `enumerate`, passing over whole subtrees while objects remain to be skipped:
+    // the words beginning with the left descent i are the reducedWordCount(s_i v) ones of s_i v.
+    const range = clampRange(lo, hi, reducedWords.count(p));
+    if (!range) return false;
+    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    const word = new Word(new Array<number>(length).fill(0));
+    word.transient = true;
+    const go = (v: number[], k: number): boolean => {
+      if (k === length) {
+        if (visit(word) === true) return (stopped = true);
+        return --left === 0;
+      }
+      for (const i of leftDescents(v)) {
+        const u = leftMultiply(v, i);
+        if (skipping) {
+          const below = reducedWordCount(u);
+          if (below <= skip) {
+            skip -= below;
+            skipping = skip > 0n;
+            continue;
+          }
+        }
+        word.letters[k] = i;
+        if (go(u, k + 1)) return true;
+      }
+      return false;
+    };
+    go(w.slice(), 0);
+    return stopped;
   },
   isMember({ w }, obj) {
     return obj instanceof Word && isReducedWordOf(obj.letters, w);

@@ -8,6 +8,7 @@ import { lexCompare } from '../permutations/permutation.js';
 import type * as fc from 'fast-check';
 import { FamilyArbitrary, uniformBelow } from '../common/arbitrary.js';
 import { SetPartition } from './setPartition.js';
+import { clampRange } from '../common/ranges.js';
 
 // completions[r][m]: the number of ways to extend a restricted growth string whose largest entry
 // is m by r more entries: T(0, m) = 1, T(r, m) = m T(r-1, m) + T(r-1, m+1). Bell(n) = T(n-1, 1).
@@ -47,6 +48,29 @@ export function nextRgs(a: number[], prefixMax: number[]): boolean {
     }
   }
   return false;
+}
+
+/**
+ * Set a (length n, a[0] = 1) to the restricted growth string of rank r (0-based) in lexicographic
+ * order, and prefixMax to its prefix maxima as nextRgs keeps them. After a[0..i] with largest
+ * entry m there are completionCount(n - i - 1, m) strings, so the entry at i is the first value v
+ * (1 <= v <= max + 1) whose completions reach past r. Call bellNumber(n) first.
+ */
+export function unrankRgs(r: bigint, a: number[], prefixMax: number[]): void {
+  const n = a.length;
+  let m = 1;
+  for (let i = 1; i < n; i++) {
+    prefixMax[i] = m;
+    for (let v = 1; ; v++) {
+      const c = completionCount(n - i - 1, Math.max(m, v));
+      if (r < c || v === m + 1) {
+        a[i] = v;
+        break;
+      }
+      r -= c;
+    }
+    if (a[i] > m) m = a[i];
+  }
 }
 
 /** Exactly uniform: each next entry is drawn with probability proportional to its completions. */
@@ -102,6 +126,20 @@ export const setPartitions = defineFamily<SizeParam, SetPartition>({
       if (visit(s)) return true;
     } while (nextRgs(s.rgs, prefixMax));
     return false;
+  },
+  enumerateRange({ n }, lo, hi, visit) {
+    const range = clampRange(lo, hi, bellNumber(n));
+    if (!range) return false;
+    const s = new SetPartition(new Array<number>(n).fill(1));
+    s.transient = true;
+    const prefixMax = new Array<number>(n).fill(1);
+    if (n > 0) prefixMax[0] = 0;
+    unrankRgs(range.first, s.rgs, prefixMax);
+    for (let left = range.length; ; ) {
+      if (visit(s)) return true;
+      if (--left === 0) return false;
+      nextRgs(s.rgs, prefixMax);
+    }
   },
   isMember({ n }, obj) {
     return obj instanceof SetPartition && obj.n === n;

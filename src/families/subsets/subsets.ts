@@ -7,6 +7,7 @@ import type { Family, Shrunk } from '../family.js';
 import { defineFamily } from '../registry.js';
 import { sizeArg } from '../permutations/permutations.js';
 import { Subset } from './subset.js';
+import { clampRange } from '../common/ranges.js';
 
 export interface SubsetsParam {
   n: number;
@@ -26,6 +27,17 @@ export function compareSubsets(u: Subset, v: Subset): number {
   return u.size - v.size || lexCompareArrays(u.elems, v.elems);
 }
 
+/** Step e, a subset of 1..n in increasing order, to the next one of its size in lexicographic order; false after the last. */
+function nextCombination(e: number[], n: number): boolean {
+  const k = e.length;
+  let i = k - 1;
+  while (i >= 0 && e[i] === n - k + i + 1) i--;
+  if (i < 0) return false;
+  e[i]++;
+  for (let j = i + 1; j < k; j++) e[j] = e[j - 1] + 1;
+  return true;
+}
+
 /** Visit the k-subsets of 1..n in lexicographic order, in place in s.elems. */
 function combinations(n: number, k: number, s: Subset, visit: (s: Subset) => boolean | void): boolean {
   const e = s.elems;
@@ -33,11 +45,31 @@ function combinations(n: number, k: number, s: Subset, visit: (s: Subset) => boo
   for (let i = 0; i < k; i++) e[i] = i + 1;
   for (;;) {
     if (visit(s) === true) return true;
-    let i = k - 1;
-    while (i >= 0 && e[i] === n - k + i + 1) i--;
-    if (i < 0) return false;
-    e[i]++;
-    for (let j = i + 1; j < k; j++) e[j] = e[j - 1] + 1;
+    if (!nextCombination(e, n)) return false;
+  }
+}
+
+/**
+ * Set e to the k-subset of 1..n of rank r (0-based) in lexicographic order. Those whose element at
+ * position pos is below x (the earlier ones fixed, the element at least x0) number
+ * C(n-x0+1, j+1) - C(n-x+1, j+1) with j = k-pos-1 elements still to come; the element is the
+ * largest x with at most r of them (binary search).
+ */
+function unrankCombination(n: number, k: number, r: bigint, e: number[]): void {
+  e.length = k;
+  let x0 = 1;
+  for (let pos = 0; pos < k; pos++) {
+    const j = k - pos - 1;
+    const all = binomialBig(n - x0 + 1, j + 1);
+    let lo = x0, hi = n - j;
+    while (lo < hi) {
+      const mid = lo + Math.ceil((hi - lo) / 2);
+      if (all - binomialBig(n - mid + 1, j + 1) <= r) lo = mid;
+      else hi = mid - 1;
+    }
+    r -= all - binomialBig(n - lo + 1, j + 1);
+    e[pos] = lo;
+    x0 = lo + 1;
   }
 }
 
@@ -66,6 +98,33 @@ export const subsets: Family<SubsetsParam, Subset> = defineFamily<SubsetsParam, 
     if (k !== undefined) return k <= n ? combinations(n, k, s, visit) : false;
     for (let j = 0; j <= n; j++) if (combinations(n, j, s, visit)) return true;
     return false;
+  },
+  enumerateRange({ n, k }, lo, hi, visit) {
+    const range = clampRange(lo, hi, k === undefined ? 1n << BigInt(n) : binomialBig(n, k));
+    if (!range) return false;
+    // The size of the first subset: subsets(n) lists C(n, 0), C(n, 1), ... subsets of each size.
+    let size = k ?? 0;
+    let r = range.first;
+    if (k === undefined) {
+      for (let c = 1n; r >= c; size++) {
+        r -= c;
+        c = (c * BigInt(n - size)) / BigInt(size + 1);
+      }
+    }
+    const s = new Subset([]);
+    s.transient = true;
+    const e = s.elems;
+    unrankCombination(n, size, r, e);
+    for (let left = range.length; ; ) {
+      if (visit(s) === true) return true;
+      if (--left === 0) return false;
+      if (!nextCombination(e, n)) {
+        // only subsets(n) gets here: on to the first subset of the next size
+        size++;
+        e.length = size;
+        for (let i = 0; i < size; i++) e[i] = i + 1;
+      }
+    }
   },
   isMember({ n, k }, obj: Structured) {
     if (!(obj instanceof Subset)) return false;

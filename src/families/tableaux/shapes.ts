@@ -2,6 +2,7 @@
 // and hook-content formulas (exact, in BigInt), and reading a partition argument.
 
 import { fail } from '../../base/errors.js';
+import { valueToText } from '../../values/operations.js';
 import type { Value } from '../../values/value.js';
 import { Partition, conjugateParts, isPartitionList } from '../partitions/partition.js';
 import { factorialBig } from '../permutations/permutations.js';
@@ -10,7 +11,7 @@ import { factorialBig } from '../permutations/permutations.js';
 export function partitionArg(v: Value, what = 'lambda'): number[] {
   if (v instanceof Partition) return v.parts;
   if (Array.isArray(v) && isPartitionList(v)) return v as number[];
-  fail(`${what} must be a partition (weakly decreasing positive integers), got ${Array.isArray(v) ? `[${v.join(', ')}]` : String(v)}`);
+  fail(`${what} must be a partition (weakly decreasing positive integers), got ${valueToText(v)}`);
 }
 
 export function sizeOf(parts: readonly number[]): number {

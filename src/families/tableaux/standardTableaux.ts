@@ -2,7 +2,8 @@
 // by the hook length formula and sampled by the hook walk.
 
 import { defineFamily } from '../registry.js';
-import type { Shrunk } from '../family.js';
+import type { Family, Shrunk } from '../family.js';
+import { clampRange, enumerateBySkipping } from '../common/ranges.js';
 import type * as fc from 'fast-check';
 import { FamilyArbitrary } from '../common/arbitrary.js';
 import { Tableau } from './tableau.js';
@@ -68,7 +69,52 @@ function* simplify(t: Tableau): Generator<Tableau> {
   }
 }
 
-export const standardTableaux = defineFamily<ShapeParam, Tableau>({
+/** Shapes inside lambda beyond which enumerateRange walks from the start instead of counting. */
+const MAX_SUBSHAPES = 200_000;
+
+/** The number of partitions mu inside lambda (mu_i <= lambda_i), or cap + 1 when it exceeds cap. */
+export function shapesInside(parts: readonly number[], cap: number): number {
+  // ways[b] = choices of mu_i, mu_{i+1}, ... with mu_i <= b, built from the last row up
+  let ways = new Array<number>((parts[0] ?? 0) + 1).fill(1);
+  for (let i = parts.length - 1; i >= 0; i--) {
+    const next = new Array<number>(ways.length).fill(0);
+    let run = 0;
+    for (let b = 0; b < ways.length; b++) {
+      if (b <= parts[i]) run = Math.min(run + ways[b], cap + 1);
+      next[b] = run;
+    }
+    ways = next;
+  }
+  return ways[ways.length - 1];
+}
+
+/**
+ * The number of standard fillings of lambda/mu (the entries m+1..n placed in the cells outside mu,
+ * rows and columns increasing), where mu = fill holds m cells: sum over the corners mu may grow by
+ * of the fillings after it; memoised by mu for one use.
+ */
+function skewFillings(parts: readonly number[], n: number): (fill: number[], m: number) => bigint {
+  const memo = new Map<string, bigint>();
+  const count = (fill: number[], m: number): bigint => {
+    if (m === n) return 1n;
+    const key = fill.join(',');
+    let v = memo.get(key);
+    if (v !== undefined) return v;
+    v = 0n;
+    for (let i = 0; i < parts.length; i++) {
+      if (fill[i] < parts[i] && (i === 0 || fill[i - 1] > fill[i])) {
+        fill[i]++;
+        v += count(fill, m + 1);
+        fill[i]--;
+      }
+    }
+    memo.set(key, v);
+    return v;
+  };
+  return count;
+}
+
+export const standardTableaux: Family<ShapeParam, Tableau> = defineFamily<ShapeParam, Tableau>({
   name: 'standardTableaux',
   params: [{ name: 'lambda', type: 'any' }],
   objectKind: 'tableau',
@@ -101,6 +147,48 @@ export const standardTableaux = defineFamily<ShapeParam, Tableau>({
       return false;
     };
     return place(1);
+  },
+  enumerateRange(p, lo, hi, visit) {
+    const { parts, n } = p;
+    // Subtrees are counted over the shapes inside lambda; where there are too many of them, walk
+    // from the start instead (such shapes have far too many tableaux for an exhaustive check).
+    if (shapesInside(parts, MAX_SUBSHAPES) > MAX_SUBSHAPES) return enumerateBySkipping((v) => standardTableaux.enumerate(p, v), lo, hi, visit);
+    const range = clampRange(lo, hi, hookLengthCount(parts));
+    if (!range) return false;
+    // The recursion of `enumerate`, passing over whole subtrees while objects remain to be skipped:
+    // with the entries so far filling the shape `fill`, the rest is a standard filling of lambda/fill.
+    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    const t = new Tableau(parts.map((l) => new Array<number>(l).fill(0)));
+    t.transient = true;
+    const fill = new Array<number>(parts.length).fill(0);
+    const completions = skewFillings(parts, n);
+    const place = (k: number): boolean => {
+      if (k > n) {
+        if (visit(t) === true) return (stopped = true);
+        return --left === 0;
+      }
+      for (let i = 0; i < parts.length; i++) {
+        if (fill[i] < parts[i] && (i === 0 || fill[i - 1] > fill[i])) {
+          if (skipping) {
+            fill[i]++;
+            const below = completions(fill, k);
+            fill[i]--;
+            if (below <= skip) {
+              skip -= below;
+              skipping = skip > 0n;
+              continue;
+            }
+          }
+          t.rows[i][fill[i]++] = k;
+          const stop = place(k + 1);
+          fill[i]--;
+          if (stop) return true;
+        }
+      }
+      return false;
+    };
+    place(1);
+    return stopped;
   },
   isMember({ parts }, obj) {
     return obj instanceof Tableau && sameShape(obj, parts) && obj.isStandard();

@@ -7,6 +7,7 @@ import type { Family, Shrunk } from '../family.js';
 import { defineFamily } from '../registry.js';
 import { sizeArg } from '../permutations/permutations.js';
 import { Word } from './word.js';
+import { clampRange } from '../common/ranges.js';
 
 export interface WordsParam {
   n: number;
@@ -16,6 +17,15 @@ export interface WordsParam {
 /** Simplicity order: length, then lexicographic. */
 export function compareWords(u: Word, v: Word): number {
   return u.length - v.length || lexCompareArrays(u.letters, v.letters);
+}
+
+/** Step a word over 1..k to the next one in lexicographic order; false after k k ... k. */
+function nextWord(a: number[], k: number): boolean {
+  let i = a.length - 1;
+  while (i >= 0 && a[i] === k) a[i--] = 1;
+  if (i < 0) return false;
+  a[i]++;
+  return true;
 }
 
 export const words: Family<WordsParam, Word> = defineFamily<WordsParam, Word>({
@@ -42,10 +52,26 @@ export const words: Family<WordsParam, Word> = defineFamily<WordsParam, Word>({
     const a = w.letters;
     for (;;) {
       if (visit(w) === true) return true;
-      let i = n - 1;
-      while (i >= 0 && a[i] === k) a[i--] = 1;
-      if (i < 0) return false;
-      a[i]++;
+      if (!nextWord(a, k)) return false;
+    }
+  },
+  enumerateRange({ n, k }, lo, hi, visit) {
+    const range = clampRange(lo, hi, BigInt(k) ** BigInt(n));
+    if (!range) return false;
+    // The word of rank r: its letters less one are the n base-k digits of r, the first the most significant.
+    const w = new Word(new Array<number>(n).fill(1));
+    w.transient = true;
+    const a = w.letters;
+    const base = BigInt(k);
+    let r = range.first;
+    for (let i = n - 1; i >= 0 && r > 0n; i--) {
+      a[i] = Number(r % base) + 1;
+      r /= base;
+    }
+    for (let left = range.length; ; ) {
+      if (visit(w) === true) return true;
+      if (--left === 0) return false;
+      nextWord(a, k);
     }
   },
   isMember({ n, k }, obj: Structured) {

@@ -13,6 +13,35 @@ import type { ExprText } from './yaml-reader.js';
 
 const COMPARISONS = new Set(['==', '!=', '<', '<=', '>', '>=']);
 
+/**
+ * The size binding's exhaustive range may hold at most this many sizes: each size is a piece of
+ * work with its own ledger line, and a range of millions of sizes is a slip (a huge bound) that
+ * would exhaust memory before anything ran. Large values are for `sample:`.
+ */
+export const MAX_EXHAUSTIVE_SIZES = 100_000;
+
+/** Refuse a size range with more than MAX_EXHAUSTIVE_SIZES values, when its bounds are constants. */
+function checkSizeRange(name: string, lo: Fn, hi: Fn, e: ExprText): void {
+  let a: unknown, b: unknown;
+  try {
+    const frame = new Array(0);
+    a = lo(frame);
+    b = hi(frame);
+  } catch {
+    return; // the bounds depend on other bindings, or fail: the runner reports that with the case
+  }
+  const isInt = (v: unknown): v is number | bigint => typeof v === 'bigint' || Number.isSafeInteger(v);
+  if (!isInt(a) || !isInt(b)) return; // not integers: reported by the runner with its own message
+  const span = BigInt(b) - BigInt(a) + 1n;
+  if (span > BigInt(MAX_EXHAUSTIVE_SIZES))
+    throw new InputError(
+      `the range of ${name} (${e.text}) has ${span.toLocaleString('en-US')} sizes; ` +
+        `an exhaustive range may have at most ${MAX_EXHAUSTIVE_SIZES.toLocaleString('en-US')}. Check large sizes with "sample:" instead`,
+      e.pos,
+      e.text,
+    );
+}
+
 function parse(e: ExprText): Expr {
   return parseExpression(e.text, e.origin);
 }
@@ -70,7 +99,11 @@ export function compileConjecture(spec: ConjectureSpec): CompiledConjecture {
     }
     if (source.kind === 'range') {
       type = 'integer';
-      if (sizeIndex < 0) sizeIndex = bindings.length;
+      if (sizeIndex < 0) {
+        sizeIndex = bindings.length;
+        // The raw bounds (the source's own closures refuse a bigint bound with a vaguer message).
+        if (ast.type === 'range') checkSizeRange(b.name, compiler.compile(ast.lo).fn, compiler.compile(ast.hi).fn, b.source);
+      }
     }
     const slot = compiler.declareSlot(b.name, type);
     bindings.push({ name: b.name, slot, pos: b.pos, source, sample: null });

@@ -116,7 +116,21 @@ export class Compiler {
       this.defines.set(d.name, { decl: d, state: 'pending', body: null, frameSize: 0, type: 'any' });
     }
     // Check every definition now, used or not, so that its errors surface at load time.
-    for (const cell of this.defines.values()) this.compileDefine(cell);
+    for (const cell of this.defines.values()) this.shallow(cell.decl.body, () => this.compileDefine(cell));
+  }
+
+  /**
+   * Run a compile step, turning a stack overflow into an InputError at e. The parser bounds each
+   * tree's depth, but definitions calling definitions are compiled one inside the other.
+   */
+  private shallow<T>(e: Expr, f: () => T): T {
+    try {
+      return f();
+    } catch (err) {
+      if (err instanceof RangeError && /call stack/i.test(err.message))
+        throw this.err('the expression is too deeply nested to compile (definitions that use definitions nest too)', e);
+      throw err;
+    }
   }
 
   /** Declare a top-level name (a `for:` binding or a `let:`) in order; returns its frame slot. */
@@ -146,12 +160,12 @@ export class Compiler {
   }
 
   compile(e: Expr): Compiled {
-    return this.expr(e);
+    return this.shallow(e, () => this.expr(e));
   }
 
   /** A `for:` source: a range a..b, a family call, or a list (or a measure's support). */
   compileSource(e: Expr): CompiledSource {
-    const plan = this.sourcePlan(e);
+    const plan = this.shallow(e, () => this.sourcePlan(e));
     switch (plan.kind) {
       case 'range':
         return { kind: 'range', lo: plan.lo, hi: plan.hi, elementType: 'integer' };

@@ -32,10 +32,11 @@ import type { Value } from '../../values/value.js';
 import { Compiler } from './compiler.js';
 import { textOrigin } from './origin.js';
 import { parseExpression } from './parser.js';
+import { located } from './runtime.js';
 
 export type { Expr, Generator, Origin, SourceText, Reducer, BinaryOp } from './ast.js';
 export { exprEquals, stripPositions, REDUCERS, isReducer } from './ast.js';
-export { parseExpression, parseDefineHeader, MAX_NESTING } from './parser.js';
+export { parseExpression, parseDefineHeader, MAX_NESTING, MAX_DEPTH } from './parser.js';
 export { printExpression } from './printer.js';
 export { textOrigin, sourcePos } from './origin.js';
 export { Compiler, MAX_CALL_DEPTH, type Compiled, type CompiledSource, type DefineDecl, type CompilerOptions, type Fn, type Frame } from './compiler.js';
@@ -53,6 +54,12 @@ export function evaluate(text: string, lets: Array<[string, string]> = [], indet
   }
   const main = c.compile(parseExpression(text, textOrigin('<expression>', text)));
   const frame = new Array<Value>(c.frameSize());
-  for (const [slot, fn] of steps) frame[slot] = own(fn(frame));
-  return main.fn(frame);
+  try {
+    for (const [slot, fn] of steps) frame[slot] = own(fn(frame));
+    return main.fn(frame);
+  } catch (e) {
+    // Only a stack overflow outside library calls is left to catch here (those calls catch their own).
+    if (e instanceof RangeError && /call stack/i.test(e.message)) throw located(e, undefined);
+    throw e;
+  }
 }

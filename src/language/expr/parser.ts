@@ -21,6 +21,14 @@ import { inputError } from './origin.js';
 /** Deeper nesting than this is refused at once (it is never written by hand). */
 export const MAX_NESTING = 200;
 
+/**
+ * A syntax tree deeper than this is refused after parsing. Nesting is bounded by MAX_NESTING, but
+ * a chain such as 1 + 1 + ... + 1 or L[1][1]...[1] is parsed in a loop and makes a tree one level
+ * deeper per operator; compiling and evaluating such a tree recurse once per level, so without
+ * this bound a few thousand operators in a row would overflow the stack.
+ */
+export const MAX_DEPTH = 1000;
+
 type NoSrc<E> = E extends unknown ? Omit<E, 'src'> : never;
 
 const COMPARE_OPS = new Set(['==', '!=', '<', '<=', '>', '>=']);
@@ -411,10 +419,61 @@ class Parser {
   }
 }
 
+/** The children of a node, in no particular order. */
+function children(e: Expr): Expr[] {
+  switch (e.type) {
+    case 'int':
+    case 'string':
+    case 'bool':
+    case 'name':
+      return [];
+    case 'list':
+      return e.items;
+    case 'range':
+      return [e.lo, e.hi];
+    case 'binary':
+      return [e.left, e.right];
+    case 'unary':
+      return [e.operand];
+    case 'if':
+      return [e.cond, e.then, e.else];
+    case 'lambda':
+      return [e.body];
+    case 'call':
+      return e.args;
+    case 'index':
+      return [e.target, e.index];
+    case 'comprehension': {
+      const out: Expr[] = [];
+      for (const g of e.generators) out.push(g.source, ...(g.where ? [g.where] : []));
+      if (e.body) out.push(e.body);
+      return out;
+    }
+  }
+}
+
+/** Refuse a tree deeper than MAX_DEPTH (walked with an explicit stack, so the check itself cannot overflow). */
+function checkDepth(root: Expr, src: SourceText): void {
+  const stack: Array<[Expr, number]> = [[root, 1]];
+  while (stack.length) {
+    const [e, d] = stack.pop()!;
+    if (d > MAX_DEPTH) {
+      throw inputError(
+        `the expression is nested more than ${MAX_DEPTH} levels deep (each operator of a chain such as a + b + c, ` +
+          'and each index of L[i][j], counts as a level)',
+        src, root.start, root.end, 'split it into parts with let:',
+      );
+    }
+    for (const c of children(e)) stack.push([c, d + 1]);
+  }
+}
+
 /** Parse one expression. Throws InputError (with pos, snippet, suggestion) on bad syntax. */
 export function parseExpression(text: string, origin: Origin): Expr {
   const src: SourceText = { text, origin };
-  return new Parser(src, tokenize(src)).parseAll();
+  const e = new Parser(src, tokenize(src)).parseAll();
+  checkDepth(e, src);
+  return e;
 }
 
 const DEFINE_HEADER = /^\s*([A-Za-z_][A-Za-z0-9_]*)\s*(?:\(\s*([^)]*)\))?\s*$/;
