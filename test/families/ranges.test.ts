@@ -10,6 +10,7 @@ import '../../src/families/index.js';
 import { allFamilies, getFamily } from '../../src/families/registry.js';
 import type { Family } from '../../src/families/family.js';
 import type { Structured } from '../../src/values/structured.js';
+import { enumerateBySkipping } from '../../src/families/common/ranges.js';
 
 /** a, a+1, ..., b */
 const range = (a: number, b: number) => Array.from({ length: b - a + 1 }, (_, i) => a + i);
@@ -55,6 +56,7 @@ const small: Record<string, unknown[][]> = {
   standardTableaux: [[[]], [[1]], [[3]], [[2, 2]], [[3, 2]], [[3, 2, 1]], [[4, 2, 1]], [[1, 1, 1, 1]]],
   pipeDreams: [[[1]], [[2, 1]], [[1, 4, 3, 2]], [[3, 1, 4, 2]], [[4, 3, 2, 1]], [[1, 5, 4, 3, 2]]],
   reducedWords: [[[1]], [[2, 1]], [[3, 1, 2]], [[3, 2, 1]], [[4, 3, 2, 1]], [[2, 4, 1, 5, 3]]],
+  asms: [[0], [1], [2], [3], [4], [5]],
 };
 
 /** Larger parameters: enough objects that only sampled pairs are compared. */
@@ -74,6 +76,7 @@ const medium: Record<string, unknown[][]> = {
   standardTableaux: [[[4, 3, 2, 1]], [[5, 4, 2]]],
   pipeDreams: [[[1, 6, 5, 4, 3, 2]]],
   reducedWords: [[[5, 4, 3, 2, 1]]],
+  asms: [[6]],
 };
 
 const ranged = allFamilies().filter((f) => typeof f.enumerateRange === 'function');
@@ -216,11 +219,9 @@ function columnFilling(shape: number[]): string {
   return rows.map((r) => r.join(',')).join('/');
 }
 
-/** The n x n anti-diagonal permutation matrix: each row takes the largest free column last. */
-function antiDiagonalKey(n: number): string {
-  const e: number[] = [];
-  for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) e.push(i + j === n - 1 ? 1 : 0);
-  return `${n}x${n}:${e.join(',')}`;
+/** The rows of the n x n permutation matrix of n, n-1, ..., 1 (ones on the anti-diagonal). */
+function antiDiagonal(n: number): number[][] {
+  return range(0, n - 1).map((i) => range(0, n - 1).map((j) => (i + j === n - 1 ? 1 : 0)));
 }
 
 const big: Record<string, Big[]> = {
@@ -249,9 +250,12 @@ const big: Record<string, Big[]> = {
   // U before D: the last Dyck path is (UD)^n
   dyckPaths: [{ args: [40], last: 'UD'.repeat(40) }],
   // each row empty first, then the free columns increasing: the last puts row i in column n+1-i
-  partialPermutations: [{ args: [20, 20], last: antiDiagonalKey(20) }],
+  partialPermutations: [{ args: [20, 20], last: `20x20:${antiDiagonal(20).flat().join(',')}` }],
   // entries placed in the lowest possible row last: the column filling
   standardTableaux: [{ args: [[8, 7, 6, 5, 4, 3, 2, 1]], last: columnFilling([8, 7, 6, 5, 4, 3, 2, 1]) }],
+  // every entry of the monotone triangle as large as it can be: row k is n-k+1..n, the
+  // permutation matrix of n, n-1, ..., 1
+  asms: [{ args: [13], last: antiDiagonal(13).map((r) => r.join(',')).join('/') }],
 };
 
 describe('enumerateRange with counts beyond 2^53', () => {
@@ -285,4 +289,44 @@ describe('enumerateRange with counts beyond 2^53', () => {
       }
     });
   }
+});
+
+describe('enumerateRange where counting subtrees would cost too much', () => {
+  // These parameters fall back to walking from the start (enumerateBySkipping); the first objects
+  // still agree with the plain enumeration.
+  const cases: [string, unknown[]][] = [
+    ['asms', [15]],
+    ['reducedWords', [range(1, 10).reverse()]],
+    ['standardTableaux', [new Array(12).fill(12)]],
+  ];
+  for (const [name, args] of cases) {
+    it(`${name}(${JSON.stringify(args)}) visits the first objects like enumerate`, () => {
+      const f = getFamily(name)!;
+      const p = f.prepare(args as never);
+      const first = viaEnumerate(f, p, 30);
+      expect(viaRange(f, p, 0n, 30n).keys).toEqual(first.keys);
+      expect(viaRange(f, p, 7n, 19n).keys).toEqual(first.keys.slice(7, 19));
+      expect(viaRange(f, p, 7n, 19n).transient).toEqual(first.transient.slice(7, 19));
+      let k = 0;
+      expect(f.enumerateRange!(p, 3n, 30n, () => ++k === 4)).toBe(true);
+      expect(k).toBe(4);
+    });
+  }
+
+  it('enumerateBySkipping visits exactly [lo, hi) and reports a stop', () => {
+    const each = (visit: (x: number) => boolean | void) => {
+      for (let i = 0; i < 10; i++) if (visit(i) === true) return true;
+      return false;
+    };
+    for (let lo = -1; lo <= 11; lo++) {
+      for (let hi = lo; hi <= 12; hi++) {
+        const seen: number[] = [];
+        expect(enumerateBySkipping(each, BigInt(lo), BigInt(hi), (x) => void seen.push(x))).toBe(false);
+        expect(seen).toEqual(range(Math.max(lo, 0), Math.min(hi, 10) - 1));
+      }
+    }
+    const seen: number[] = [];
+    expect(enumerateBySkipping(each, 2n, 9n, (x) => seen.push(x) === 3)).toBe(true);
+    expect(seen).toEqual([2, 3, 4]);
+  });
 });

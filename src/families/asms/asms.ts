@@ -3,7 +3,8 @@
 // OEIS A005130); sampled exactly by coupling from the past.
 
 import { defineFamily } from '../registry.js';
-import type { Shrunk } from '../family.js';
+import type { Family, Shrunk } from '../family.js';
+import { clampRange, enumerateBySkipping } from '../common/ranges.js';
 import { factorialBig, sizeArg, type SizeParam } from '../permutations/permutations.js';
 import type * as fc from 'fast-check';
 import { FamilyArbitrary } from '../common/arbitrary.js';
@@ -61,6 +62,61 @@ export function randomTriangle(n: number, rng: fc.Random): number[] {
   }
 }
 
+/** The largest n for which asms(n).enumerateRange counts subtrees (at most 2^n rows are memoised). */
+const MAX_COUNTED_N = 14;
+
+const aboveMemo = new Map<string, bigint>();
+
+/**
+ * The number of monotone triangles whose last row is `row` (strictly increasing): one for a row of
+ * length at most 1, else the sum over the rows r interlacing it (row[j] <= r[j] <= row[j+1], r
+ * strictly increasing) of the triangles on r. It depends on the row only, so it is kept for every n.
+ */
+export function trianglesAbove(row: readonly number[]): bigint {
+  const k = row.length;
+  if (k <= 1) return 1n;
+  const key = row.join(',');
+  const hit = aboveMemo.get(key);
+  if (hit !== undefined) return hit;
+  let total = 0n;
+  const r = new Array<number>(k - 1);
+  const go = (j: number): void => {
+    if (j === k - 1) {
+      total += trianglesAbove(r);
+      return;
+    }
+    for (let v = Math.max(row[j], j > 0 ? r[j - 1] + 1 : 0); v <= row[j + 1]; v++) {
+      r[j] = v;
+      go(j + 1);
+    }
+  };
+  go(0);
+  aboveMemo.set(key, total);
+  return total;
+}
+
+/**
+ * With rows k+1..n of triangle t set and entries 1..i of row k: the number of ways to finish, the
+ * sum over the ways to finish row k (between the entries of row k+1, increasing) of trianglesAbove.
+ */
+function restOfRow(t: readonly number[], k: number, i: number): bigint {
+  const row = new Array<number>(k);
+  for (let j = 1; j <= i; j++) row[j - 1] = t[at(k, j)];
+  let total = 0n;
+  const go = (j: number): void => {
+    if (j > k) {
+      total += trianglesAbove(row);
+      return;
+    }
+    for (let v = Math.max(t[at(k + 1, j)], row[j - 2] + 1); v <= t[at(k + 1, j + 1)]; v++) {
+      row[j - 1] = v;
+      go(j + 1);
+    }
+  };
+  go(i + 1);
+  return total;
+}
+
 /** Same n, strictly simpler: one step of the triangle chain that lowers the simplicity order. */
 function* simplify(a: Asm): Generator<Asm> {
   const n = a.n;
@@ -96,7 +152,7 @@ function* deleteLoneOnes(a: Asm): Generator<Asm> {
   }
 }
 
-export const asms = defineFamily<SizeParam, Asm>({
+export const asms: Family<SizeParam, Asm> = defineFamily<SizeParam, Asm>({
   name: 'asms',
   params: [{ name: 'n', type: 'integer' }],
   objectKind: 'asm',
@@ -132,6 +188,46 @@ export const asms = defineFamily<SizeParam, Asm>({
       return false;
     };
     return fill(n - 1, 1);
+  },
+  enumerateRange(p, lo, hi, visit) {
+    const { n } = p;
+    // Counting subtrees goes through every increasing row over 1..n; past MAX_COUNTED_N (far beyond
+    // exhaustive checks) walk from the start instead.
+    if (n > MAX_COUNTED_N) return enumerateBySkipping((v) => asms.enumerate(p, v), lo, hi, visit);
+    const range = clampRange(lo, hi, asmCount(n));
+    if (!range) return false;
+    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    const a = new Asm(emptyRows(n));
+    a.transient = true;
+    if (n === 0) return visit(a) === true;
+    const t = bottomTriangle(n);
+    // The recursion of `enumerate`, passing over whole subtrees while objects remain to be skipped:
+    // once entry (k, i) is set, the rest is counted by restOfRow.
+    const fill = (k: number, i: number): boolean => {
+      if (k === 0) {
+        triangleToAsm(t, n, a.rows);
+        if (visit(a) === true) return (stopped = true);
+        return --left === 0;
+      }
+      if (i > k) return fill(k - 1, 1);
+      const lo = Math.max(t[at(k + 1, i)], i > 1 ? t[at(k, i - 1)] + 1 : 0);
+      const hi = t[at(k + 1, i + 1)];
+      for (let v = lo; v <= hi; v++) {
+        t[at(k, i)] = v;
+        if (skipping) {
+          const below = restOfRow(t, k, i);
+          if (below <= skip) {
+            skip -= below;
+            skipping = skip > 0n;
+            continue;
+          }
+        }
+        if (fill(k, i + 1)) return true;
+      }
+      return false;
+    };
+    fill(n - 1, 1);
+    return stopped;
   },
   isMember({ n }, obj) {
     return obj instanceof Asm && obj.n === n;
