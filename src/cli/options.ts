@@ -26,6 +26,13 @@ export function parseCount(text: string, option: string): number {
   return Number(text);
 }
 
+/** "--let NAME=EXPR" -> [name, expression text]. */
+export function parseLetOption(text: string): [string, string] {
+  const m = /^\s*([A-Za-z_][A-Za-z0-9_]*)\s*=(.*)$/s.exec(text);
+  if (!m) throw new InputError(`--let takes NAME=EXPR (for example --let m=n+1), not "${text}"`);
+  return [m[1], m[2]];
+}
+
 export function collect(value: string, previous: string[] = []): string[] {
   return [...previous, value];
 }

@@ -82,7 +82,9 @@ export function pow(a: Value, e: Value): Value {
   if (typeof e === 'bigint') {
     if (a === 1 || a === 0) return a;
     if (a === -1) return e % 2n === 0n ? 1 : -1;
-    fail(`the exponent ${e} is too large`);
+    const digits = (e < 0n ? -e : e).toString();
+    // A tower such as 2^2^2^2^2^2 has an exponent of thousands of digits: name its size instead.
+    fail(digits.length > 40 ? `the exponent (${e < 0n ? 'minus ' : ''}a number of ${digits.length} digits) is too large` : `the exponent ${e} is too large`);
   }
   if (isScalar(a)) return spow(a, e);
   if (isPolynomial(a)) {

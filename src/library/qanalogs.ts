@@ -11,6 +11,15 @@ import { defineFunction } from './registry.js';
 
 const topic = 'polynomials';
 const Q_MAX = 2000;
+/**
+ * Bounds that keep every call within about a second (found by fuzzing: qfactorial(1000, q),
+ * qbinomial(400, 200, q) and qint(4000000, 2) each ran for minutes). [n]_q! has degree
+ * n(n-1)/2 and is built in about n^3/6 steps; [n choose k]_q has degree k(n-k), built in about
+ * k times that; [n]_q has n terms, and evaluating it at a number of size q takes about n^2 log q.
+ */
+const QFACTORIAL_MAX = 300;
+const QBINOMIAL_DEGREE_MAX = 40_000;
+const QINT_MAX = 100_000;
 
 /** Coefficients of [n]_q = 1 + q + ... + q^{n-1}. */
 export function qintCoefficients(n: number): Int[] {
@@ -34,26 +43,30 @@ export function qfactorialCoefficients(n: number): Int[] {
   return c;
 }
 
-/** Coefficients of the Gaussian binomial [n choose k]_q, by [n,k] = [n-1,k-1] + q^k [n-1,k]. */
+/**
+ * Coefficients of the Gaussian binomial [n choose k]_q, by the product formula
+ * prod_{i=1..k} (1 - q^{n-k+i}) / (1 - q^i): multiplying by 1 - q^a is a shifted difference and
+ * dividing exactly by 1 - q^i a running sum with stride i, so after step i the degree is
+ * i(n-k) (Andrews, The Theory of Partitions, Thm 3.1 and (3.3.1)).
+ */
 export function qbinomialCoefficients(n: number, k: number): Int[] {
   if (k < 0 || k > n) return [];
   k = Math.min(k, n - k);
-  // row[j] holds [m choose j]_q for the current m, j = 0..k.
-  let row: Int[][] = [[1]];
-  for (let m = 1; m <= n; m++) {
-    const next: Int[][] = [];
-    for (let j = 0; j <= Math.min(m, k); j++) {
-      const a = j >= 1 ? row[j - 1] ?? [] : [];
-      const b = j <= m - 1 ? row[j] ?? [] : [];
-      const len = Math.max(a.length, b.length + j);
-      const out: Int[] = new Array(len).fill(0);
-      for (let i = 0; i < a.length; i++) out[i] = iadd(out[i], a[i]);
-      for (let i = 0; i < b.length; i++) out[i + j] = iadd(out[i + j], b[i]);
-      next.push(out);
+  let c: Int[] = [1];
+  for (let i = 1; i <= k; i++) {
+    const a = n - k + i;
+    // times (1 - q^a)
+    const m: Int[] = new Array(c.length + a).fill(0);
+    for (let j = 0; j < c.length; j++) {
+      m[j] = iadd(m[j], c[j]);
+      m[j + a] = isub(m[j + a], c[j]);
     }
-    row = next;
+    // divided by (1 - q^i): d[j] = m[j] + d[j - i]; the quotient has degree (c.length - 1) + a - i
+    const d: Int[] = new Array(c.length + a - i).fill(0);
+    for (let j = 0; j < d.length; j++) d[j] = j >= i ? iadd(m[j], d[j - i]) : m[j];
+    c = d;
   }
-  return row[k];
+  return c;
 }
 
 const qParam = { name: 'q', type: 'scalarOrPolynomial' };
@@ -67,7 +80,7 @@ defineFunction({
   example: 'qint(4, q)',
   exampleValue: 'q^3 + q^2 + q + 1',
   source: 'G. E. Andrews, The Theory of Partitions (1976), ch. 3',
-  impl: (n, q) => evaluateCoefficients(qintCoefficients(smallIntArg('qint(n, q)', 'n', n, 0, Q_MAX * Q_MAX)), q as PolyLike),
+  impl: (n, q) => evaluateCoefficients(qintCoefficients(smallIntArg('qint(n, q)', 'n', n, 0, QINT_MAX)), q as PolyLike),
 });
 
 defineFunction({
@@ -79,7 +92,7 @@ defineFunction({
   example: 'qfactorial(3, q)',
   exampleValue: 'q^3 + 2*q^2 + 2*q + 1',
   source: 'OEIS A008302 (Mahonian numbers); R. P. Stanley, Enumerative Combinatorics I, 2nd ed., Cor. 1.3.13',
-  impl: (n, q) => evaluateCoefficients(qfactorialCoefficients(smallIntArg('qfactorial(n, q)', 'n', n, 0, Q_MAX)), q as PolyLike),
+  impl: (n, q) => evaluateCoefficients(qfactorialCoefficients(smallIntArg('qfactorial(n, q)', 'n', n, 0, QFACTORIAL_MAX)), q as PolyLike),
 });
 
 defineFunction({
@@ -96,6 +109,8 @@ defineFunction({
     const kk = k as Int;
     if (typeof kk === 'bigint' || kk < 0 || kk > nn) return 0;
     if (nn > Q_MAX) fail(`qbinomial(n, k, q) is limited to n <= ${Q_MAX}`);
+    if (kk * (nn - kk) > QBINOMIAL_DEGREE_MAX)
+      fail(`qbinomial(n, k, q) is limited to degree k(n - k) <= ${QBINOMIAL_DEGREE_MAX}, got ${kk}(${nn} - ${kk}) = ${kk * (nn - kk)}`);
     return evaluateCoefficients(qbinomialCoefficients(nn, kk), q as PolyLike);
   },
 });

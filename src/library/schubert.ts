@@ -14,6 +14,7 @@ import { schurPolynomial } from '../algebra/schur.js';
 import { isRealRootedCoefficients } from '../algebra/sturm.js';
 import { indexedVarId, varBase, varIndex } from '../algebra/variables.js';
 import type { Permutation } from '../families/permutations/permutation.js';
+import { hookContentCount } from '../families/tableaux/shapes.js';
 import type { Structured } from '../values/structured.js';
 import type { Value } from '../values/value.js';
 import { smallIntArg } from './integerArgs.js';
@@ -89,6 +90,24 @@ defineFunction({
   impl: (w, x) => grothendieckPolynomial(permArg('grothendieck(w, x)', w), indexedBaseArg('grothendieck(w, x)', 'x', x)),
 });
 
+/** More terms than this would take many seconds (fuzzing found schur(partition([3, 1]), x, 64): 766,416 terms, 25 s). */
+const SCHUR_TERMS_MAX = 100_000;
+
+/**
+ * Refuse an s_lambda(x_1..x_m) with more than SCHUR_TERMS_MAX terms. Its monomials number at most
+ * C(m + d - 1, d) for d = |lambda| (all monomials of degree d) and at most s_lambda(1^m), the
+ * number of semistandard tableaux (each monomial has a positive coefficient).
+ */
+function refuseHugeSchur(parts: readonly number[], m: number): void {
+  if (parts.length > m) return; // the polynomial is 0
+  const d = parts.reduce((a, b) => a + b, 0);
+  let binom = 1n; // C(m + d - 1, m - 1), built up exactly
+  for (let i = 1; i < m && binom <= BigInt(SCHUR_TERMS_MAX); i++) binom = (binom * BigInt(d + i)) / BigInt(i);
+  if (binom <= BigInt(SCHUR_TERMS_MAX)) return;
+  if (d <= 5000 && hookContentCount(parts, m) <= BigInt(SCHUR_TERMS_MAX)) return;
+  fail(`schur(lambda, x, m) would have more than ${SCHUR_TERMS_MAX.toLocaleString('en-US')} terms for lambda = [${parts.join(', ')}] and m = ${m}`);
+}
+
 defineFunction({
   name: 'schur',
   topic,
@@ -106,6 +125,7 @@ defineFunction({
   impl: (lambda, x, m) => {
     const call = 'schur(lambda, x, m)';
     const mm = smallIntArg(call, 'm', m, 0, 64);
+    refuseHugeSchur((lambda as Structured & { parts: number[] }).parts, mm);
     return schurPolynomial((lambda as Structured & { parts: number[] }).parts, indexedBaseArg(call, 'x', x), mm);
   },
 });

@@ -10,6 +10,7 @@ import '../../src/families/index.js';
 import '../../src/library/index.js';
 import { InputError } from '../../src/base/errors.js';
 import { evaluate, MAX_DEPTH, parseExpression, textOrigin } from '../../src/language/expr/index.js';
+import { qbinomialCoefficients } from '../../src/library/qanalogs.js';
 import { valueToText } from '../../src/values/operations.js';
 import { damage, expressionText, gen, INDETERMINATES, LETS } from './expression-texts.js';
 import { expectCleanError, timed } from './outcome.js';
@@ -84,6 +85,48 @@ describe('found by fuzzing', () => {
     // Chains up to the limit still work.
     expect(evaluate(Array(MAX_DEPTH).fill('1').join(' + '))).toBe(MAX_DEPTH);
     expect(() => parseExpression(Array(MAX_DEPTH).fill('x').join(' * '), textOrigin('f', ''))).not.toThrow();
+  });
+
+  test('family arguments of the wrong kind are shown in the notation of the language', () => {
+    expect(errorOf('count(permutations(q^2 + 1))').message).toBe('n must be a nonnegative integer, got q^2 + 1');
+    expect(errorOf('count(pipeDreams([q, 1]))').message).toBe('[q, 1] is not a permutation of 1..2');
+    expect(errorOf('count(reducedWords(q))').message).toBe('w must be a permutation, got q');
+  });
+
+  test('q-analogues and Schur polynomials refuse sizes that would run for minutes', () => {
+    for (const [text, limit] of [
+      ['qfactorial(1000, q)', 'n <= 300'],
+      ['qbinomial(402, 201, q)', 'k(n - k) <= 40000'],
+      ['qint(4000000, 2)', 'n <= 100000'],
+      ['schur(partition([3, 1]), x, 64)', 'more than 100,000 terms'],
+    ]) {
+      const t0 = performance.now();
+      expect(errorOf(text).message).toContain(limit);
+      expect(performance.now() - t0).toBeLessThan(500);
+    }
+    // Just inside the limits, still quick.
+    expect(valueToText(evaluate('degree(qbinomial(400, 200, q), q)', [], ['q']))).toBe('40000');
+    expect(valueToText(evaluate('len(terms(schur(partition([1, 1, 1, 1, 1, 1, 1, 1]), x, 8)))', [], ['x']))).toBe('1');
+  });
+
+  test('the product formula for Gaussian binomials agrees with the q-Pascal rule', () => {
+    // Brute force second algorithm: [n, k] = [n-1, k-1] + q^k [n-1, k] (Andrews, Theory of Partitions, (3.3.4)).
+    const pascal = (n: number, k: number): number[] => {
+      if (k < 0 || k > n) return [];
+      if (k === 0 || k === n) return [1];
+      const a = pascal(n - 1, k - 1), b = pascal(n - 1, k);
+      const out = new Array(Math.max(a.length, b.length + k)).fill(0);
+      a.forEach((c, i) => (out[i] += c));
+      b.forEach((c, i) => (out[i + k] += c));
+      return out;
+    };
+    for (let n = 0; n <= 11; n++)
+      for (let k = 0; k <= n; k++) expect(qbinomialCoefficients(n, k).map(Number), `[${n}, ${k}]`).toEqual(pascal(n, k));
+  });
+
+  test('an exponent of thousands of digits is described by its length, not printed', () => {
+    expect(errorOf('2^2^2^2^2^2').message).toBe('the exponent (a number of 19729 digits) is too large');
+    expect(errorOf('2^(10^30)').message).toBe('the exponent 1000000000000000000000000000000 is too large');
   });
 
   test('promotion of the empty tableau is the empty tableau', () => {

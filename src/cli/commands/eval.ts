@@ -1,13 +1,12 @@
 // hunch eval EXPR [--let NAME=EXPR ...]: evaluate one expression, print its value and a picture.
 
-import { InputError } from '../../base/errors.js';
 import '../../families/index.js';
 import '../../library/index.js';
 import { evaluate } from '../../language/expr/index.js';
 import { drawValue } from '../../reports/pictures/index.js';
 import { encodeValue, valueToText } from '../../values/operations.js';
 import { EXIT } from '../errors.js';
-import { collect } from '../options.js';
+import { collect, parseLetOption } from '../options.js';
 import type { AddCommand } from './index.js';
 
 export const addEvalCommand: AddCommand = (program, t, setExit) => {
@@ -20,11 +19,7 @@ export const addEvalCommand: AddCommand = (program, t, setExit) => {
     .option('--json', 'print the value in the record encoding')
     .option('--ascii', 'plain ASCII pictures')
     .action((expr: string, flags: { let?: string[]; indeterminates?: string; json?: boolean }) => {
-      const lets: Array<[string, string]> = (flags.let ?? []).map((l) => {
-        const m = /^\s*([A-Za-z_][A-Za-z0-9_]*)\s*=(.*)$/s.exec(l);
-        if (!m) throw new InputError(`--let takes NAME=EXPR, not "${l}"`);
-        return [m[1], m[2]];
-      });
+      const lets: Array<[string, string]> = (flags.let ?? []).map(parseLetOption);
       const vars = flags.indeterminates ? flags.indeterminates.split(',').map((s) => s.trim()).filter(Boolean) : [];
       const v = evaluate(expr, lets, vars);
       if (flags.json) t.out(JSON.stringify(encodeValue(v)) + '\n');

@@ -1,5 +1,6 @@
 // hunch table EXPR --over NAME=A..B: tabulate an expression and say what it notices.
 
+import { InputError } from '../../base/errors.js';
 import '../../families/index.js';
 import '../../library/index.js';
 import { evaluate } from '../../language/expr/index.js';
@@ -7,8 +8,11 @@ import { detectProperties } from '../../reports/sequence-properties.js';
 import { encodeValue, valueToText } from '../../values/operations.js';
 import type { Value } from '../../values/value.js';
 import { EXIT } from '../errors.js';
-import { collect, parseRangeOption } from '../options.js';
+import { collect, parseLetOption, parseRangeOption } from '../options.js';
 import type { AddCommand } from './index.js';
+
+/** More rows than this is a slip in --over (a table of millions of lines helps nobody, and would fill memory). */
+export const MAX_TABLE_ROWS = 10_000;
 
 export const addTableCommand: AddCommand = (program, t, setExit) => {
   program
@@ -22,10 +26,11 @@ export const addTableCommand: AddCommand = (program, t, setExit) => {
     .action((expr: string, flags: { over: string; let?: string[]; indeterminates?: string; json?: boolean }) => {
       const [name, lo, hi] = parseRangeOption(flags.over, '--over');
       const vars = flags.indeterminates ? flags.indeterminates.split(',').map((s) => s.trim()).filter(Boolean) : [];
-      const extra: Array<[string, string]> = (flags.let ?? []).map((l) => {
-        const i = l.indexOf('=');
-        return [l.slice(0, i).trim(), l.slice(i + 1)];
-      });
+      const extra: Array<[string, string]> = (flags.let ?? []).map(parseLetOption);
+      if (hi - lo + 1 > MAX_TABLE_ROWS)
+        throw new InputError(`--over ${flags.over} has ${(hi - lo + 1).toLocaleString('en-US')} rows; a table may have at most ${MAX_TABLE_ROWS.toLocaleString('en-US')}`);
+      const clash = extra.find(([n]) => n === name);
+      if (clash) throw new InputError(`--let ${name}=... names the variable of --over ${flags.over}; give it another name`);
       const rows: Array<[number, Value]> = [];
       for (let v = lo; v <= hi; v++) rows.push([v, evaluate(expr, [[name, String(v)], ...extra], vars)]);
       const props = detectProperties(rows.map((r) => r[1]));

@@ -2,8 +2,10 @@
 // the language; the array is 0-based.
 
 import { fail } from '../../base/errors.js';
+import { valueToText } from '../../values/operations.js';
 import { registerDecoder } from '../../values/decode.js';
 import type { Structured } from '../../values/structured.js';
+import type { Value } from '../../values/value.js';
 
 export class Permutation implements Structured {
   readonly kind = 'permutation';
@@ -26,7 +28,7 @@ export class Permutation implements Structured {
     const seen = new Uint8Array(n + 1);
     for (const v of values) {
       if (!Number.isInteger(v) || v < 1 || v > n || seen[v]) {
-        fail(`[${values.join(', ')}] is not a permutation of 1..${n}`);
+        fail(`${valueToText(values as Value)} is not a permutation of 1..${n}`);
       }
       seen[v] = 1;
     }

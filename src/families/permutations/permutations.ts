@@ -1,6 +1,7 @@
 // permutations(n): all of S_n in lexicographic order (LIBRARY.md §1).
 
 import { fail } from '../../base/errors.js';
+import { valueToText } from '../../values/operations.js';
 import { isInt } from '../../numbers/integer.js';
 import { defineFamily } from '../registry.js';
 import type { Value } from '../../values/value.js';
@@ -15,7 +16,7 @@ export interface SizeParam {
 
 /** Reads a size argument: a nonnegative integer small enough to enumerate or sample. */
 export function sizeArg(v: Value, what = 'n', max = 1_000_000): number {
-  if (!isInt(v) || typeof v === 'bigint' || v < 0) fail(`${what} must be a nonnegative integer, got ${String(v)}`);
+  if (!isInt(v) || typeof v === 'bigint' || v < 0) fail(`${what} must be a nonnegative integer, got ${valueToText(v)}`);
   if (v > max) fail(`${what} = ${v} is larger than this family supports (${max})`);
   return v;
 }

@@ -4,6 +4,7 @@
 // exchanged). Counted by R(w) = sum over left descents i of R(s_i w), R(id) = 1 (memoised).
 
 import { fail } from '../../base/errors.js';
+import { valueToText } from '../../values/operations.js';
 import { Permutation, inversions } from '../permutations/permutation.js';
 import type { Value } from '../../values/value.js';
 
@@ -64,5 +65,5 @@ export function isReducedWordOf(letters: readonly number[], w: readonly number[]
 export function permutationArg(v: Value, what = 'w'): number[] {
   if (v instanceof Permutation) return v.a;
   if (Array.isArray(v)) return Permutation.from(v as number[]).a;
-  fail(`${what} must be a permutation, got ${String(v)}`);
+  fail(`${what} must be a permutation, got ${valueToText(v)}`);
 }
