@@ -205,8 +205,13 @@ function bad(file: string, line: number, what: string, text: string): InputError
     `line ${line} of the ledger is not a valid record: ${what}. The ledger was damaged or edited by hand; ` +
       'correct or delete that line (hunch never rewrites a ledger it cannot read).',
     { file, line, column: 1 },
-    text.length > 120 ? text.slice(0, 117) + '...' : text,
+    printable(text.length > 120 ? text.slice(0, 117) + '...' : text),
   );
+}
+
+/** A damaged line as it may be shown on a terminal: control and undecodable bytes escaped. */
+function printable(text: string): string {
+  return text.replace(/[\u0000-\u001f\u007f-\u009f\ufffd]/g, (c) => (c === '\ufffd' ? '?' : `\\x${c.charCodeAt(0).toString(16).padStart(2, '0')}`));
 }
 
 const isCount = (x: unknown) => typeof x === 'number' && Number.isSafeInteger(x) && x >= 0;

@@ -3,6 +3,7 @@
 // size whole.
 
 import { existsSync } from 'node:fs';
+import { InputError } from '../base/errors.js';
 import { resolve } from 'node:path';
 import type { ChalkInstance } from 'chalk';
 import { writeFileAtomic } from './atomic-write.js';
@@ -90,6 +91,8 @@ export function mergeLedgers(paths: readonly string[], out: string | null): Merg
   if (out && existsSync(out) && !inputs.some((p) => resolve(p) === resolve(out))) inputs.push(out);
   const warnings: string[] = [];
   const lists = inputs.map((p) => {
+    // A ledger named on the command line must exist: a misspelt name is a mistake, not an empty ledger.
+    if (paths.includes(p) && !existsSync(p)) throw new InputError(`no such ledger: ${p}`);
     const c = readLedger(p);
     warnings.push(...c.warnings);
     return c.records;

@@ -1,7 +1,7 @@
 // A run of `hunch check`: load, compile and check the requested conjectures one after another.
 // The same code runs inside the worker thread the CLI starts and in-process for the library API.
 
-import { InputError } from '../base/errors.js';
+import { EvalError, InputError } from '../base/errors.js';
 import { nearest } from '../base/suggest.js';
 import type { CompiledConjecture } from '../language/conjecture/compiled.js';
 import { compileConjecture } from '../language/conjecture/compile-conjecture.js';
@@ -65,7 +65,9 @@ function refuseHugeSizes(cc: CompiledConjecture, req: RunRequest): void {
   try {
     sizes = o ? [o[1]] : sizesOf(cc).slice(-1);
   } catch (e) {
-    throw new InputError(`the range of ${b.name} must be a range of integers that does not depend on other bindings`, b.pos, b.name);
+    if (e instanceof InputError) throw e;
+    const why = e instanceof EvalError ? ` (${e.message})` : '';
+    throw new InputError(`the range of ${b.name} must be a range of integers that does not depend on other bindings${why}`, b.pos, b.name);
   }
   for (const size of sizes) {
     const planned = plannedCases(cc, new Map([[cc.sizeIndex, size]]), true);
