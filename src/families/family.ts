@@ -41,7 +41,7 @@ export interface Family<P = unknown, T extends Structured = Structured> {
    */
   enumerate(p: P, visit: Visit<T>): boolean;
   /**
-   * Optional (issue 7): visit only the objects with indices lo..hi-1 of `enumerate`'s order, in that
+   * Optional: visit only the objects with indices lo..hi-1 of `enumerate`'s order, in that
    * order, without walking the ones before (unranking). Parallel and sharded checks cut a size into
    * such ranges; a family without it is cut by enumerating from the start and skipping.
    */

@@ -1,4 +1,4 @@
-// The options of `hunch check` for shards and resumed runs (issue 7): --shard I/K and --resume.
+// The options of `hunch check` for shards and resumed runs: --shard I/K and --resume.
 
 import { InputError } from '../../base/errors.js';
 import type { CompiledConjecture } from '../../language/conjecture/compiled.js';

@@ -7,7 +7,7 @@ import '../../families/index.js';
 import '../../library/index.js';
 import { prepareRun, type RunRequest } from '../../runner/session.js';
 import { agreesWithExpectation, type ConjectureResult } from '../../runner/result.js';
-// issue 7 (parallel helper): the worker pool, shards and resume.
+// The worker pool, shards and resumed runs.
 import { startCheckRun, workerCount } from '../../runner/parallel/run-check.js';
 import { heldRecordsForResume, shardFlag } from './check-parallel-flags.js';
 import { formatResult, formatSummary } from '../../reports/human.js';
@@ -87,7 +87,7 @@ function buildRequest(paths: string[], f: CheckFlags): RunRequest {
 
 export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal): Promise<number> {
   const req = buildRequest(paths, flags);
-  // issue 7: --workers K (default HUNCH_WORKERS, else every core), --shard I/K.
+  // --workers K (default HUNCH_WORKERS, else every core), --shard I/K.
   const workers = workerCount(flags.workers === undefined ? undefined : parseCount(flags.workers, '--workers'));
   req.shard = shardFlag(flags.shard);
   // The project (hunch.yaml, its plugins, the canonical hash) is opened in this thread and again in
@@ -99,7 +99,7 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   const compiled = prepareRun(req);
   const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger });
   req.regression = recorder.regressionCases(compiled);
-  if (flags.resume) req.resume = heldRecordsForResume(flags.ledger, project.config.ledger, compiled); // issue 7
+  if (flags.resume) req.resume = heldRecordsForResume(flags.ledger, project.config.ledger, compiled);
 
   const started = performance.now();
   const style = { color: t.color, unicode: t.unicode };
@@ -108,7 +108,7 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   const flag = new Int32Array(new SharedArrayBuffer(4));
   let interrupts = 0;
 
-  // issue 7: one worker (--workers 1) or a pool sharing every size; either way off this thread.
+  // One worker (--workers 1) or a pool sharing every size; either way off this thread.
   const run = startCheckRun(compiled, req, workers, flag, {
     onProgress: (done, total, label) => progress.update(done, total, label),
     onPiece: (id, piece) => recorder.piece(id, piece),

@@ -1,4 +1,4 @@
-// Helpers for Family.enumerateRange (issue 7: a slice of a size is visited without walking the
+// Helpers for Family.enumerateRange (a slice of a size is visited without walking the
 // objects before it).
 //
 // The families use one of two methods. Those with a successor function (next permutation, next
