@@ -19,6 +19,8 @@ export const functions = [
     params: [{ name: 'w', type: 'permutation' }],
     returns: 'integer',
     description: 'the number of alternating runs (maximal increasing or decreasing stretches) of w',
+    example: 'alternatingRuns(perm([1, 3, 2, 4]))',
+    exampleValue: '3',
     impl: alternatingRuns,
   },
 ];

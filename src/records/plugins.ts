@@ -7,7 +7,7 @@
 //       params: [{ name: 'w', type: 'permutation' }],   // or just ['permutation']
 //       returns: 'integer',
 //       description: 'The number of peaks of w.',
-//       example: 'peakCount(permutation([1, 3, 2]))', exampleValue: '1',   // optional
+//       example: 'peakCount(perm([1, 3, 2]))', exampleValue: '1',   // optional
 //       source: 'definition',                                              // optional
 //       impl: (w) => ...,   // receives evaluated values, returns a value of the language
 //     },

@@ -6,6 +6,7 @@ import { evaluate } from '../../language/expr/index.js';
 import { drawValue } from '../../reports/pictures/index.js';
 import { encodeValue, valueToText } from '../../values/operations.js';
 import { EXIT } from '../errors.js';
+import { openProject } from '../../records/open-project.js';
 import { collect, parseLetOption } from '../options.js';
 import type { AddCommand } from './index.js';
 
@@ -18,7 +19,8 @@ export const addEvalCommand: AddCommand = (program, t, setExit) => {
     .option('--indeterminates <NAMES>', 'polynomial variables, comma-separated (e.g. q,x)')
     .option('--json', 'print the value in the record encoding')
     .option('--ascii', 'plain ASCII pictures')
-    .action((expr: string, flags: { let?: string[]; indeterminates?: string; json?: boolean }) => {
+    .action(async (expr: string, flags: { let?: string[]; indeterminates?: string; json?: boolean }) => {
+      await openProject(); // the project's plugins are part of the language
       const lets: Array<[string, string]> = (flags.let ?? []).map(parseLetOption);
       const vars = flags.indeterminates ? flags.indeterminates.split(',').map((s) => s.trim()).filter(Boolean) : [];
       const v = evaluate(expr, lets, vars);

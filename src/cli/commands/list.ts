@@ -78,7 +78,8 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
             topic = f.topic;
             t.out(`\n${c.bold(`Functions: ${topic}`)}\n`);
           }
-          t.out(`  ${c.cyan(signatureOf(f))}\n    ${f.description}\n    example: ${f.example}  ${c.dim('=')} ${f.exampleValue}\n    source: ${c.dim(f.source)}\n`);
+          const example = f.example ? `    example: ${f.example}${f.exampleValue ? `  ${c.dim('=')} ${f.exampleValue}` : ''}\n` : '';
+          t.out(`  ${c.cyan(signatureOf(f))}\n    ${f.description}\n${example}    source: ${c.dim(f.source)}\n`);
         }
       }
       setExit(EXIT.ok);

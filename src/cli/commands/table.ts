@@ -8,6 +8,7 @@ import { detectProperties } from '../../reports/sequence-properties.js';
 import { encodeValue, valueToText } from '../../values/operations.js';
 import type { Value } from '../../values/value.js';
 import { EXIT } from '../errors.js';
+import { openProject } from '../../records/open-project.js';
 import { collect, parseLetOption, parseRangeOption } from '../options.js';
 import type { AddCommand } from './index.js';
 
@@ -23,7 +24,8 @@ export const addTableCommand: AddCommand = (program, t, setExit) => {
     .option('--let <NAME=EXPR>', 'a named value the expression may use (repeatable; may use NAME)', collect)
     .option('--indeterminates <NAMES>', 'polynomial variables, comma-separated (e.g. q,x)')
     .option('--json', 'as JSON')
-    .action((expr: string, flags: { over: string; let?: string[]; indeterminates?: string; json?: boolean }) => {
+    .action(async (expr: string, flags: { over: string; let?: string[]; indeterminates?: string; json?: boolean }) => {
+      await openProject(); // the project's plugins are part of the language
       const [name, lo, hi] = parseRangeOption(flags.over, '--over');
       const vars = flags.indeterminates ? flags.indeterminates.split(',').map((s) => s.trim()).filter(Boolean) : [];
       const extra: Array<[string, string]> = (flags.let ?? []).map(parseLetOption);
