@@ -34,3 +34,16 @@ export function isNoncrossing(p: readonly number[]): boolean {
   }
   return true;
 }
+
+/** Every distinct matching obtained by deleting one arc of p and standardising (n-1 arcs). */
+export function* arcDeletions(p: readonly number[]): Generator<number[]> {
+  const seen = new Set<string>();
+  for (let a = 1; a <= p.length; a++) {
+    if (p[a - 1] < a) continue;
+    const q = deleteArc(p, a);
+    const k = q.join(',');
+    if (seen.has(k)) continue;
+    seen.add(k);
+    yield q;
+  }
+}

@@ -6,7 +6,7 @@ import type { Family, Shrunk } from '../family.js';
 import { defineFamily } from '../registry.js';
 import { sizeArg, type SizeParam } from '../permutations/permutations.js';
 import { Matching, matchingCrossings, matchingNestings } from './matching.js';
-import { deleteArc, isPerfectMatching } from './arcs.js';
+import { arcDeletions, isPerfectMatching } from './arcs.js';
 import { clampRange } from '../common/ranges.js';
 
 /** (2n-1)!! = 1·3·5···(2n-1) (OEIS A001147). */
@@ -143,15 +143,7 @@ export const matchings: Family<SizeParam, Matching> = defineFamily<SizeParam, Ma
 /** Delete an arc and standardise (to n-1 arcs); then exchange the partners of two neighbouring points when that is simpler. */
 function* shrinkMatching(n: number, m: Matching): Generator<Shrunk<SizeParam, Matching>> {
   const p = m.p;
-  const seen = new Set<string>();
-  for (let a = 1; a <= 2 * n; a++) {
-    if (p[a - 1] < a) continue;
-    const q = deleteArc(p, a);
-    const k = q.join(',');
-    if (seen.has(k)) continue;
-    seen.add(k);
-    yield { params: { n: n - 1 }, size: n - 1, obj: new Matching(q) };
-  }
+  for (const q of arcDeletions(p)) yield { params: { n: n - 1 }, size: n - 1, obj: new Matching(q) };
   for (let i = 1; i < 2 * n; i++) {
     if (p[i - 1] === i + 1) continue;
     const q = p.slice();

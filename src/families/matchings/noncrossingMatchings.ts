@@ -7,7 +7,7 @@ import type { Family, Shrunk } from '../family.js';
 import { defineFamily } from '../registry.js';
 import { sizeArg, type SizeParam } from '../permutations/permutations.js';
 import { Matching, matchingNestings } from './matching.js';
-import { deleteArc, isNoncrossing, isPerfectMatching } from './arcs.js';
+import { arcDeletions, isNoncrossing, isPerfectMatching } from './arcs.js';
 import { clampRange } from '../common/ranges.js';
 import { ballotPaths } from '../dyckPaths/dyckPaths.js';
 
@@ -164,13 +164,5 @@ export const noncrossingMatchings: Family<SizeParam, Matching> = defineFamily<Si
 /** Delete an arc and standardise (still noncrossing, n-1 arcs). */
 function* shrinkNoncrossing(n: number, m: Matching): Generator<Shrunk<SizeParam, Matching>> {
   const p = m.p;
-  const seen = new Set<string>();
-  for (let a = 1; a <= 2 * n; a++) {
-    if (p[a - 1] < a) continue;
-    const q = deleteArc(p, a);
-    const k = q.join(',');
-    if (seen.has(k)) continue;
-    seen.add(k);
-    yield { params: { n: n - 1 }, size: n - 1, obj: new Matching(q) };
-  }
+  for (const q of arcDeletions(p)) yield { params: { n: n - 1 }, size: n - 1, obj: new Matching(q) };
 }

@@ -15,7 +15,7 @@ import { Permutation } from './permutation.js';
 import { closedFormCount } from './avoiderCounts.js';
 import { avoidsAll, containsPattern, patternArg } from './patterns.js';
 import { comparePermutations, sizeArg } from './permutations.js';
-import { deleteEntry } from './standardise.js';
+import { descentSwaps, entryDeletions } from './standardise.js';
 
 export interface AvoidersParam {
   n: number;
@@ -165,21 +165,7 @@ function* shrinkAvoider(p: AvoidersParam, w: Permutation): Generator<Shrunk<Avoi
   const a = w.a;
   if (n > 0) {
     const smaller = { ...p, n: n - 1 };
-    const seen = new Set<string>();
-    for (let i = 0; i < n; i++) {
-      const b = deleteEntry(a, i);
-      const k = b.join(',');
-      if (seen.has(k)) continue;
-      seen.add(k);
-      yield { params: smaller, size: n - 1, obj: new Permutation(b) };
-    }
+    for (const b of entryDeletions(a)) yield { params: smaller, size: n - 1, obj: new Permutation(b) };
   }
-  for (let i = 0; i + 1 < n; i++) {
-    if (a[i] > a[i + 1]) {
-      const b = a.slice();
-      b[i] = a[i + 1];
-      b[i + 1] = a[i];
-      if (avoidsAll(b, n, pats)) yield { params: p, obj: new Permutation(b) };
-    }
-  }
+  for (const b of descentSwaps(a)) if (avoidsAll(b, n, pats)) yield { params: p, obj: new Permutation(b) };
 }

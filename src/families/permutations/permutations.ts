@@ -8,7 +8,7 @@ import type { Value } from '../../values/value.js';
 import { Permutation, inversions, lexCompare, nextPermutation } from './permutation.js';
 import { FamilyArbitrary, fisherYates } from '../common/arbitrary.js';
 import type { Family, Shrunk } from '../family.js';
-import { deleteEntry, removeFromCycle } from './standardise.js';
+import { descentSwaps, entryDeletions, removeFromCycle } from './standardise.js';
 
 export interface SizeParam {
   n: number;
@@ -101,13 +101,7 @@ export function* shrinkPermutation(n: number, w: Permutation): Generator<Shrunk<
   if (n > 0) {
     const seen = new Set<string>();
     const smaller = { n: n - 1 };
-    for (let i = 0; i < n; i++) {
-      const b = deleteEntry(a, i);
-      const k = b.join(',');
-      if (seen.has(k)) continue;
-      seen.add(k);
-      yield { params: smaller, size: n - 1, obj: new Permutation(b) };
-    }
+    for (const b of entryDeletions(a, seen)) yield { params: smaller, size: n - 1, obj: new Permutation(b) };
     // Also remove a point from its cycle (its preimage now maps to its image) and standardise:
     // this keeps the cycle type but for one shorter cycle, which one-line deletions do not, so
     // claims about cycles shrink well too.
@@ -119,12 +113,5 @@ export function* shrinkPermutation(n: number, w: Permutation): Generator<Shrunk<
       yield { params: smaller, size: n - 1, obj: new Permutation(b) };
     }
   }
-  for (let i = 0; i + 1 < n; i++) {
-    if (a[i] > a[i + 1]) {
-      const b = a.slice();
-      b[i] = a[i + 1];
-      b[i + 1] = a[i];
-      yield { params: { n }, obj: new Permutation(b) };
-    }
-  }
+  for (const b of descentSwaps(a)) yield { params: { n }, obj: new Permutation(b) };
 }

@@ -39,3 +39,29 @@ export function removeFromCycle(a: readonly number[], x: number): number[] {
   }
   return out;
 }
+
+/**
+ * Every distinct one-line deletion of a (an entry removed, the rest standardised); `seen` lets a
+ * caller share deduplication with other steps of the same size.
+ */
+export function* entryDeletions(a: readonly number[], seen = new Set<string>()): Generator<number[]> {
+  for (let i = 0; i < a.length; i++) {
+    const b = deleteEntry(a, i);
+    const k = b.join(',');
+    if (seen.has(k)) continue;
+    seen.add(k);
+    yield b;
+  }
+}
+
+/** a with one adjacent descent a[i] > a[i+1] swapped: one inversion fewer, same size. */
+export function* descentSwaps(a: readonly number[]): Generator<number[]> {
+  for (let i = 0; i + 1 < a.length; i++) {
+    if (a[i] > a[i + 1]) {
+      const b = a.slice();
+      b[i] = a[i + 1];
+      b[i + 1] = a[i];
+      yield b;
+    }
+  }
+}

@@ -53,7 +53,12 @@ export function parseDefines(spec: ConjectureSpec): DefineDecl[] {
   });
 }
 
-/** A stand-in until the records layer provides the canonical hash. */
+/**
+ * How a compiled conjecture gets its hash. The records layer installs the canonical one
+ * (records/hash.ts, with plugin file hashes) when a project is opened; the language cannot import
+ * it (records sit above it), so it is injected. The default here only serves code that compiles
+ * without opening a project (some unit tests).
+ */
 export type HashFunction = (spec: ConjectureSpec) => string;
 let hashFunction: HashFunction = (spec) =>
   createHash('sha256').update(JSON.stringify([spec.document, spec.defineDocuments])).digest('hex');
