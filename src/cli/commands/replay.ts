@@ -33,7 +33,7 @@ export const addReplayCommand: AddCommand = (program, t, setExit) => {
       // hunch.yaml can bring plugins in.
       const project = await openCommandProject(t, dirname(file), { plugins: false, allowPlugins: flags.allowPlugins, quiet: true });
       const r = replayCounterexample(file, project);
-      const code = r.verdict === 'refutes' ? EXIT.ok : r.verdict === 'needs-plugins' ? EXIT.invalid : EXIT.contradicted;
+      const code = r.verdict === 'refutes' ? EXIT.ok : r.verdict === 'needs-plugins' || r.verdict === 'not-a-case' ? EXIT.invalid : EXIT.contradicted;
       if (flags.json) {
         t.out(JSON.stringify({ ...r, file: undefined, conjecture: r.file.conjecture, hash: r.file.hash }, null, 2) + '\n');
         setExit(code);
@@ -72,8 +72,8 @@ export const addReplayCommand: AddCommand = (program, t, setExit) => {
         case 'holds':
           t.out(`${c.red('no longer refutes')} ${id}: the claim holds for this case\n${caseText}\n`);
           break;
-        case 'excluded':
-          t.out(`${c.red('no longer refutes')} ${id}: "where" now excludes this case\n${caseText}\n`);
+        case 'not-a-case':
+          t.err(`${c.red('error:')} ${file}: not a case of this conjecture (${r.error}), so it refutes nothing\n${caseText}\n`);
           break;
         case 'error':
           t.out(`${c.red('no longer refutes')} ${id}: the case cannot be evaluated: ${r.error}\n${caseText}\n`);
