@@ -16,3 +16,5 @@ import { addSlurmCommand } from './slurm.js';
 export type AddCommand = (program: Command, t: Terminal, setExit: (code: number) => void) => void;
 
 export const commands: AddCommand[] = [addCheckCommand, addEvalCommand, addTableCommand, addListCommand, addStatusCommand, addReplayCommand, addMergeCommand, addInitCommand, addSlurmCommand];
+import { addSampleCommand } from './sample.js';
+commands.push(addSampleCommand);
