@@ -18,3 +18,4 @@ import './schubert.js';
 import './markov.js';
 import './moves.js';
 import './dyckPaths.js';
+import './charge.js';
