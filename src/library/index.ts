@@ -19,3 +19,4 @@ import './markov.js';
 import './moves.js';
 import './dyckPaths.js';
 import './charge.js';
+import './setPartitions.js';
