@@ -72,7 +72,7 @@ function closedFormGuess(fit: QuasiPolynomialFit, seq: Sequence): Guess {
   const realDegree = Math.max(...fit.pieces.map((p) => p.length - 1));
   return {
     kind: poly ? 'polynomial' : 'quasi-polynomial',
-    title: poly ? `polynomial in n of degree ${realDegree}` : `quasi-polynomial of period ${fit.period}, degree ${realDegree}`,
+    title: poly ? (realDegree === 0 ? 'constant' : `polynomial in n of degree ${realDegree}`) : `quasi-polynomial of period ${fit.period}, degree ${realDegree}`,
     formula: `a(n) == ${formula}`,
     notes: [],
     unknowns: fit.period * (fit.degree + 1),
