@@ -169,3 +169,6 @@ export class ConjectureTestFailure extends Error {
     this.name = 'ConjectureTestFailure';
   }
 }
+export { guessExpression, guessTerms, type GuessResult } from './guess.js';
+export { guessSequence } from '../algebra/guessing/index.js';
+export type { Guess, GuessReport, Evidence as GuessEvidence, Attempt as GuessAttempt } from '../algebra/guessing/index.js';

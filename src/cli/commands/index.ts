@@ -14,6 +14,7 @@ import { addInitCommand } from './init.js';
 import { addSlurmCommand } from './slurm.js';
 import { addTrustCommand } from './trust.js';
 import { addSampleCommand } from './sample.js';
+import { addGuessCommand } from './guess.js';
 
 /** Adds a command; the action reports its exit code through setExit. */
 export type AddCommand = (program: Command, t: Terminal, setExit: (code: number) => void) => void;
@@ -30,4 +31,5 @@ export const commands: AddCommand[] = [
   addSlurmCommand,
   addTrustCommand,
   addSampleCommand,
+  addGuessCommand,
 ];
