@@ -137,7 +137,8 @@ describe('comprehensions', () => {
     expect(e.pos).toMatchObject({ line: 1, column: 5 });
   });
   test('several generators need a body except for count', () => {
-    expect(() => ev('sum(i in 1..2, j in 1..2)')).toThrow(/needs ": expression"/);
+    expect(() => ev('sum(i in 1..2, j in 1..2)')).toThrow(/needs a body/);
+    expect(errorOf(() => ev('sum(i in 1..2, j in 1..2)')).suggestion).toBe('sum(E for i in ..., j in ...)');
     expect(ev('count(i in 1..2, j in 1..3)')).toBe(6);
   });
 });
