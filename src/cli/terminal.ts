@@ -23,11 +23,32 @@ export function canShowUnicode(): boolean {
   return /utf-?8/i.test(lang) || process.platform === 'win32' || lang === '';
 }
 
+// A reader that went away (\`hunch check | head -1\`) closes the pipe: output stops quietly while the
+// command finishes its work and its records.
+const closed = { out: false, err: false };
+let watching = false;
+function watchClosedPipes(): void {
+  if (watching) return;
+  watching = true;
+  for (const [name, stream] of [['out', process.stdout], ['err', process.stderr]] as const)
+    stream.on('error', (e: NodeJS.ErrnoException) => {
+      if (e.code === 'EPIPE' || e.code === 'ERR_STREAM_DESTROYED') closed[name] = true;
+      else throw e;
+    });
+}
+
+function write(name: 'out' | 'err', s: string): void {
+  const stream = name === 'out' ? process.stdout : process.stderr;
+  if (closed[name] || stream.destroyed) return;
+  stream.write(s);
+}
+
 export function makeTerminal(opts: { ascii?: boolean } = {}): Terminal {
+  watchClosedPipes();
   const color = new Chalk({ level: wantsColor(process.stdout) ? 1 : 0 });
   return {
-    out: (s) => process.stdout.write(s),
-    err: (s) => process.stderr.write(s),
+    out: (s) => write('out', s),
+    err: (s) => write('err', s),
     color,
     isTTY: Boolean(process.stdout.isTTY),
     errIsTTY: Boolean(process.stderr.isTTY),

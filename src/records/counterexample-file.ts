@@ -209,7 +209,7 @@ export function writeCounterexampleFile(
       // unreadable: rewrite it below
     }
   }
-  writeFileAtomic(path, counterexampleText(counterexampleRecord(spec, result.hash, cx, shown, plugins), cx.text));
+  writeFileAtomic(path, counterexampleText(counterexampleRecord(spec, result.hash, cx, shown, plugins), cx.text), { within: root, what: 'the counterexample file' });
   return shown;
 }
 

@@ -90,5 +90,5 @@ export function junitXml(results: readonly ConjectureResult[]): string {
 }
 
 export function writeJUnitReport(path: string, results: readonly ConjectureResult[]): void {
-  writeFileAtomic(path, junitXml(results));
+  writeFileAtomic(path, junitXml(results), { what: 'the JUnit report', makeFolder: false });
 }

@@ -1,7 +1,7 @@
 // Runs the hostile corpus (hostile/corpus.ts): each input ends with its exit code and message,
 // never a stack trace or an internal error, and leaves behind nothing it should not write.
 
-import { existsSync, mkdirSync, rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, existsSync, mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import { dirname, isAbsolute, join } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import { corpus } from './hostile/corpus.js';
@@ -33,7 +33,9 @@ describe('the hostile corpus', { timeout: 120_000 }, () => {
       const absent = typeof c.absent === 'function' ? c.absent(dir) : (c.absent ?? []);
       for (const p of absent) expect(existsSync(isAbsolute(p) ? p : join(dir, p)), `${p} must not exist`).toBe(false);
     } finally {
+      chmodSync(dir, 0o755);
       rmSync(dir, { recursive: true, force: true });
+      rmSync(`${dir}-outside`, { recursive: true, force: true });
     }
   });
 });
