@@ -2,6 +2,7 @@
 // pictures unless --ascii or the terminal cannot show them.
 
 import { Chalk, type ChalkInstance } from 'chalk';
+import { escapeControl } from '../base/escape.js';
 
 export interface Terminal {
   out: (s: string) => void;
@@ -37,10 +38,22 @@ function watchClosedPipes(): void {
     });
 }
 
+// No control byte from input reaches the terminal: everything written is escaped (\xNN) except
+// newline and tab, and, on a terminal, the colour and line-clearing sequences hunch itself emits.
+const OWN_SEQUENCE = /(\x1b\[[0-9;]*m|\r\x1b\[2K)/;
+
+export function terminalSafe(s: string, tty: boolean): string {
+  if (!tty) return escapeControl(s);
+  return s
+    .split(OWN_SEQUENCE)
+    .map((part, i) => (i % 2 === 1 ? part : escapeControl(part)))
+    .join('');
+}
+
 function write(name: 'out' | 'err', s: string): void {
   const stream = name === 'out' ? process.stdout : process.stderr;
   if (closed[name] || stream.destroyed) return;
-  stream.write(s);
+  stream.write(terminalSafe(s, Boolean(stream.isTTY)));
 }
 
 export function makeTerminal(opts: { ascii?: boolean } = {}): Terminal {

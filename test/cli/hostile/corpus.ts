@@ -26,6 +26,8 @@ export interface HostileCase {
   /** Paths (relative to the folder, or absolute) that must not exist afterwards. */
   absent?: string[] | ((dir: string) => string[]);
   env?: Record<string, string>;
+  /** Files (relative) that must exist afterwards and hold no raw control byte. */
+  clean?: string[];
   /** Skip when the test runs as root (permissions do not bind it). */
   notAsRoot?: boolean;
 }
@@ -191,5 +193,41 @@ export const corpus: HostileCase[] = [
     code: 2,
     stderr: ['cannot open the ledger'],
     notAsRoot: true,
+  },
+
+  // --- no raw control bytes reach the terminal or a written file ------------------------------
+  {
+    name: 'a statement with terminal escape sequences and a carriage return',
+    files: { 'a.yaml': FAILS.replace('expect: fails', 'statement: "clear \\e[2J\\rhidden \\e]0;title\\a and a\\nnew: line"\nexpect: fails') },
+    args: ['check', 'a.yaml'],
+    code: 0,
+    clean: ['counterexamples/maj-bounded.yaml'],
+  },
+  {
+    name: 'an escape sequence inside a claim',
+    files: { 'a.yaml': 'conjecture: esc\nexpect: holds\nclaim: "1 == \\e[2J1"\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a.yaml:3:', '\\x1b'],
+  },
+  {
+    name: 'a file name with control bytes',
+    args: ['check', 'no\u001b[2Jsuch\r.yaml'],
+    code: 2,
+    stderr: ['no\\x1b[2Jsuch\\x0d.yaml'],
+  },
+  {
+    name: 'replay: a conjecture id with control bytes',
+    files: { 'x.yaml': forgedFile(TRUE_BOUND, { n: 2, w: { permutation: [2, 1] } }).replace(/inv-bounded/g, '"inv\\e[2Jbounded"') },
+    args: ['replay', 'x.yaml'],
+    code: 2,
+    stderr: ['\\x1b[2J'],
+  },
+  {
+    name: 'a --junit report of a statement and a message with control bytes',
+    files: { 'a.yaml': FAILS.replace('expect: fails', 'statement: "bell \\a here"\nexpect: holds') },
+    args: ['check', 'a.yaml', '--junit', 'report.xml'],
+    code: 1,
+    clean: ['report.xml', 'counterexamples/maj-bounded.yaml'],
   },
 ];
