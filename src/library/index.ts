@@ -17,3 +17,6 @@ import './matrices.js';
 import './schubert.js';
 import './markov.js';
 import './moves.js';
+import './ideals.js';
+import './idealsGroebner.js';
+import './idealsInvariants.js';

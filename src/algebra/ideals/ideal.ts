@@ -18,7 +18,7 @@ import { groebnerBasis, termOrder, type GroebnerOptions, type TermOrder } from '
 import { leadingTerm } from '../groebner/ideals.js';
 import { checkPrime } from '../groebner/primeField.js';
 import { MonomialIdeal } from '../monomialIdeals/monomialIdeal.js';
-import { isPolynomial, polyText, type PolyLike } from '../polynomial.js';
+import { fromTerms, isPolynomial, polyText, type PolyLike } from '../polynomial.js';
 import { parsePolynomialText } from '../polynomialText.js';
 import { rankOf, varId, varName } from '../variables.js';
 
@@ -52,6 +52,17 @@ export class Ideal implements Structured {
     for (const g of kept) if (isPolynomial(g)) for (const id of g.vars) ids.add(id);
     const ring = Int32Array.from([...ids].sort((a, b) => rankOf(a) - rankOf(b)));
     return new Ideal(kept, ring, prime);
+  }
+
+  /** The ideal a monomial ideal generates (its minimal generators), on the same ring. */
+  static fromMonomialIdeal(M: MonomialIdeal, prime?: number): Ideal {
+    const gens = M.gens.map((g) => {
+      const terms: [Int32Array, Scalar][] = [[g, 1]];
+      return fromTerms(Array.from(M.vars), terms);
+    });
+    const I = new Ideal(gens, M.vars, prime);
+    I.monomial = M;
+    return I;
   }
 
   get nv(): number {
