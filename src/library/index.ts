@@ -20,3 +20,6 @@ import './moves.js';
 import './ideals.js';
 import './idealsGroebner.js';
 import './idealsInvariants.js';
+import './dyckPaths.js';
+import './charge.js';
+import './setPartitions.js';
