@@ -67,7 +67,7 @@ export function kPolynomialTerms(M: MonomialIdeal, weights: readonly Int32Array[
   };
   const rec = (gens: Exponents[], shift: Int32Array, sign: number, factors: Int32Array[]) => {
     if (++steps > maxSteps) fail(`the Hilbert series computation passed its bound of ${maxSteps.toLocaleString('en-US')} steps`);
-    if ((steps & 1023) === 0 && opts.shouldStop?.()) fail('the Hilbert series computation was stopped');
+    if ((steps & 1023) === 1 && opts.shouldStop?.()) fail('the Hilbert series computation was stopped');
     if (gens.length === 0) return leaf(shift, sign, factors);
     const nv = gens[0].length;
     if (gens.some((g) => g.every((e) => e === 0))) return; // the unit ideal contributes 0

@@ -26,7 +26,7 @@ export function minimalCovers(M: MonomialIdeal, opts: HilbertOptions = {}): numb
   const chosen = new Uint8Array(M.nv);
   const rec = (i: number) => {
     if (++steps > maxSteps) fail(`the search for the facets passed its bound of ${maxSteps.toLocaleString('en-US')} steps`);
-    if ((steps & 1023) === 0 && opts.shouldStop?.()) fail('the search for the facets was stopped');
+    if ((steps & 1023) === 1 && opts.shouldStop?.()) fail('the search for the facets was stopped');
     while (i < supports.length && supports[i].some((v) => chosen[v])) i++;
     if (i === supports.length) {
       const c: number[] = [];
