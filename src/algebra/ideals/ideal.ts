@@ -18,7 +18,7 @@ import { groebnerBasis, termOrder, type GroebnerOptions, type TermOrder } from '
 import { leadingTerm } from '../groebner/ideals.js';
 import { checkPrime } from '../groebner/primeField.js';
 import { MonomialIdeal } from '../monomialIdeals/monomialIdeal.js';
-import { fromTerms, isPolynomial, polyText, type PolyLike } from '../polynomial.js';
+import { fromTerms, isPolynomial, polyText, psub, type PolyLike } from '../polynomial.js';
 import { parsePolynomialText } from '../polynomialText.js';
 import { rankOf, varId, varName } from '../variables.js';
 
@@ -157,20 +157,20 @@ export class Ideal implements Structured {
     return { ideal: body };
   }
 
-  /** The generators with their leading terms for `order` (grevlex by default), for pictures. */
-  leadingTerms(order: TermOrder = this.grevlex()): { text: string; leading: string; rest: string }[] {
+  /**
+   * Each generator split into its leading term for `order` (grevlex by default) and the rest, as
+   * texts: { leading: '-2*z[1,1]', rest: '+ z[1,2] - 3' } (rest '' for a monomial). For pictures.
+   */
+  leadingTerms(order: TermOrder = this.grevlex()): { leading: string; rest: string }[] {
     return this.gens.map((g) => {
-      const text = polyText(g);
       const lt = leadingTerm(g, order);
-      if (!lt || !isPolynomial(g)) return { text, leading: text, rest: '' };
-      const f: string[] = [];
-      lt.exps.forEach((e, v) => {
-        if (e > 0) f.push(e === 1 ? varName(order.varIds[v]) : `${varName(order.varIds[v])}^${e}`);
-      });
-      const c = lt.coef;
-      const mono = f.join('*');
-      const leading = c === 1 ? mono : c === -1 ? `-${mono}` : `${c.toString()}*${mono}`;
-      return { text, leading, rest: text };
+      if (!lt || !isPolynomial(g)) return { leading: polyText(g), rest: '' };
+      const row = Array.from(order.varIds, (_, v) => lt.exps[v]);
+      const ltPoly = fromTerms(Array.from(order.varIds), [[row, lt.coef]]);
+      const rest = psub(g, ltPoly);
+      const restText = polyText(rest);
+      const tail = isZeroPoly(rest) ? '' : restText.startsWith('-') ? `- ${restText.slice(1)}` : `+ ${restText}`;
+      return { leading: polyText(ltPoly), rest: tail };
     });
   }
 }

@@ -110,6 +110,7 @@ export function kPolynomialTerms(M: MonomialIdeal, weights: readonly Int32Array[
 
 /** The standard grading's numerator: coefficients c_0..c_D of K(t) = sum c_d t^d (all weights 1). */
 export function hilbertNumeratorCoefficients(M: MonomialIdeal, opts: HilbertOptions = {}): Int[] {
+  if (M.nv === 0) return M.isUnit() ? [] : [1]; // the ring is the field itself
   const ones = Array.from({ length: M.nv }, () => Int32Array.of(1));
   const terms = kPolynomialTerms(M, ones, opts);
   let top = -1;
