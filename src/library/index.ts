@@ -17,3 +17,4 @@ import './matrices.js';
 import './schubert.js';
 import './markov.js';
 import './moves.js';
+import './symmetric.js';

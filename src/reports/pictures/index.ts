@@ -14,6 +14,7 @@ import { drawPermutation } from './permutation.js';
 import { drawPipeDream } from './pipeDream.js';
 import { drawSetPartition } from './setPartition.js';
 import { drawSubset, drawWord } from './strips.js';
+import { drawSymmetric } from './symmetric.js';
 import { drawComposition, drawPartition, drawTableau } from './youngDiagrams.js';
 
 export interface PictureOptions {
@@ -82,6 +83,8 @@ function draw(v: Value, g: Glyphs): string | null {
       return drawPipeDream(o.crosses, g, typeof o.n === 'number' ? o.n : 0); // crosses: [row, column][]
     case 'matrix':
       return drawMatrix(o.rows, o.cols, o.entries, g); // rows, cols: numbers; entries: row-major scalars (partialPermutations are matrices)
+    case 'symmetric':
+      return drawSymmetric(o.terms, g); // terms: { parts, coef }[] in the Schur basis
     default:
       return null;
   }
