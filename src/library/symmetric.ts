@@ -166,7 +166,7 @@ defineFunction({
   ],
   returns: SYM,
   description:
-    'the plethysm f[g] through power sums: p_k[g] replaces each p_j in g by p_{jk} and each indeterminate q of the coefficients by q^k (degree of f times degree of g at most 18)',
+    'the plethysm f[g] through power sums: p_k[g] replaces each p_j in g by p_{jk} and each indeterminate q of the coefficients by q^k (degree of f times degree of g at most 12)',
   example: 'plethysm(completeSym(2), completeSym(2))',
   exampleValue: 'schurSym([4]) + schurSym([2, 2])',
   source: `${MACDONALD_I}, I.8 (and I.8 Ex. 6 for h_2[h_n])`,
