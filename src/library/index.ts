@@ -18,3 +18,4 @@ import './schubert.js';
 import './markov.js';
 import './moves.js';
 import './symmetric.js';
+import './symmetricMacdonald.js';
