@@ -23,3 +23,5 @@ import './idealsInvariants.js';
 import './dyckPaths.js';
 import './charge.js';
 import './setPartitions.js';
+import './symmetric.js';
+import './symmetricMacdonald.js';

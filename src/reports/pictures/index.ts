@@ -15,6 +15,7 @@ import { drawPermutation } from './permutation.js';
 import { drawPipeDream } from './pipeDream.js';
 import { drawSetPartition } from './setPartition.js';
 import { drawSubset, drawWord } from './strips.js';
+import { drawSymmetric } from './symmetric.js';
 import { drawComposition, drawPartition, drawTableau } from './youngDiagrams.js';
 
 export interface PictureOptions {
@@ -85,6 +86,8 @@ function draw(v: Value, g: Glyphs): string | null {
       return drawMatrix(o.rows, o.cols, o.entries, g); // rows, cols: numbers; entries: row-major scalars (partialPermutations are matrices)
     case 'ideal':
       return drawIdeal(o.gens, o.ring.length, o.prime, () => o.leadingTerms(), g); // gens, ring (ids), prime, leadingTerms()
+    case 'symmetric':
+      return drawSymmetric(o.terms, g); // terms: { parts, coef }[] in the Schur basis
     default:
       return null;
   }
