@@ -20,3 +20,5 @@ import './moves.js';
 import './dyckPaths.js';
 import './charge.js';
 import './setPartitions.js';
+import './sequences.js';
+import './kronecker.js';
