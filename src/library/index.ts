@@ -22,3 +22,5 @@ import './charge.js';
 import './setPartitions.js';
 import './sequences.js';
 import './kronecker.js';
+import './signedPermutations.js';
+import './paths.js';
