@@ -25,3 +25,7 @@ import './charge.js';
 import './setPartitions.js';
 import './symmetric.js';
 import './symmetricMacdonald.js';
+import './sequences.js';
+import './kronecker.js';
+import './signedPermutations.js';
+import './paths.js';
