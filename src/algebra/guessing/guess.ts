@@ -30,7 +30,9 @@ function directGuesses(seq: Sequence, light: boolean): { guesses: Guess[]; tried
   const tried: Attempt[] = [];
   const poly = guessPolynomial(seq);
   tried.push(...poly.tried);
-  if (poly.guess) return { guesses: [poly.guess], tried };
+  // A polynomial says it all; a quasi-polynomial may still have a simpler recurrence.
+  if (poly.guess?.kind === 'polynomial') return { guesses: [poly.guess], tried };
+  if (poly.guess) guesses.push(poly.guess);
   const rec = searchRecurrence(seq, light ? { maxOrder: 1 } : {});
   let cFinite = false;
   if (rec.fit) {

@@ -103,7 +103,8 @@ describe('closed forms', () => {
     const tri = { offset: 0, terms: terms(0, 10, (n) => BigInt((n * (n + 1)) / 2)) };
     expect(guessSequence(tri).guesses[0].formula).toBe('a(n) == (n^2 + n)/2');
     const floorHalf = { offset: 0, terms: terms(0, 12, (n) => BigInt(Math.floor(n / 2))) };
-    expect(guessSequence(floorHalf).guesses[0].formula).toBe('a(n) == if mod(n, 2) == 0 then n/2 else (n - 1)/2');
+    // The recurrence has 3 unknowns, the quasi-polynomial 4: both are offered, the recurrence first.
+    expect(guessSequence(floorHalf).guesses.map((g) => g.formula)).toEqual(['a(n + 3) == a(n + 2) + a(n + 1) - a(n)', 'a(n) == if mod(n, 2) == 0 then n/2 else (n - 1)/2']);
   });
 
   test('transforms: n! times a constant, and Motzkin numbers whose binomial transform is Catalan(n+1) (OEIS A001006, A000108)', () => {
