@@ -12,7 +12,8 @@ import { useBodyFirstWhenParsed } from '../../reports/tabulate.js';
 import { encodeValue, valueToText } from '../../values/operations.js';
 import type { Value } from '../../values/value.js';
 import { EXIT } from '../errors.js';
-import { openProject } from '../../records/open-project.js';
+import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
+import { explainSkippedPlugins } from '../../records/open-project.js';
 import { collect, parseLetOption, parseRangeOption } from '../options.js';
 import type { AddCommand } from './index.js';
 
@@ -28,8 +29,9 @@ export const addTableCommand: AddCommand = (program, t, setExit) => {
     .option('--let <NAME=EXPR>', 'a named value the expression may use (repeatable; may use NAME)', collect)
     .option('--indeterminates <NAMES>', 'polynomial variables, comma-separated (e.g. q,x)')
     .option('--json', 'as JSON')
-    .action(async (expr: string, flags: { over: string; let?: string[]; indeterminates?: string; json?: boolean }) => {
-      await openProject(); // the project's plugins are part of the language
+    .option('--allow-plugins', ALLOW_PLUGINS_HELP)
+    .action(async (expr: string, flags: { over: string; let?: string[]; indeterminates?: string; json?: boolean; allowPlugins?: boolean }) => {
+      const project = await openCommandProject(t, undefined, { allowPlugins: flags.allowPlugins }); // plugins are part of the language
       const [name, lo, hi] = parseRangeOption(flags.over, '--over');
       const vars = flags.indeterminates ? flags.indeterminates.split(',').map((s) => s.trim()).filter(Boolean) : [];
       const extra: Array<[string, string]> = (flags.let ?? []).map(parseLetOption);
@@ -38,7 +40,11 @@ export const addTableCommand: AddCommand = (program, t, setExit) => {
       const clash = extra.find(([n]) => n === name);
       if (clash) throw new InputError(`--let ${name}=... names the variable of --over ${flags.over}; give it another name`);
       const rows: Array<[number, Value]> = [];
-      for (let v = lo; v <= hi; v++) rows.push([v, evaluate(expr, [[name, String(v)], ...extra], vars)]);
+      try {
+        for (let v = lo; v <= hi; v++) rows.push([v, evaluate(expr, [[name, String(v)], ...extra], vars)]);
+      } catch (e) {
+        throw explainSkippedPlugins(e, project);
+      }
       const props = detectProperties(rows.map((r) => r[1]));
       // The simplest guess for a column of numbers (hunch guess shows them all, with --write).
       useBodyFirstWhenParsed();
