@@ -1,7 +1,6 @@
 // Evaluating one expression over a range of one variable, as `hunch table` and `hunch guess` do.
 
 import { EvalError, InputError } from '../base/errors.js';
-import { setBodyFirst } from '../algebra/guessing/index.js';
 import { evaluate } from '../language/expr/index.js';
 import { isScalar, type Scalar } from '../numbers/rational.js';
 import { valueToText } from '../values/operations.js';
@@ -29,12 +28,3 @@ export function scalarColumn(rows: Array<[number, Value]>, name: string, what: s
   });
 }
 
-/** Comprehensions in guesses take the body-first form when this build's parser reads it. */
-export function useBodyFirstWhenParsed(): void {
-  try {
-    evaluate('sum(k for k in 1..2)');
-    setBodyFirst(true);
-  } catch {
-    setBodyFirst(false);
-  }
-}

@@ -24,7 +24,7 @@ async function roundTrip(name: string, text: string): Promise<string[]> {
 
 describe('guessExpression', () => {
   test('ASM numbers found as a product that the language evaluates to prod_{k=0}^{n-1} (3k+1)!/(n+k)! (OEIS A005130; Zeilberger 1996)', async () => {
-    const direct = 'product(k in 0..n - 1: factorial(3*k + 1)/factorial(n + k))';
+    const direct = 'product(factorial(3*k + 1)/factorial(n + k) for k in 0..n - 1)';
     const r = guessExpression(direct, 'n', 1, 16);
     const g = r.guesses[0];
     expect(g.kind).toBe('product');

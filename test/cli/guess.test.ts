@@ -61,14 +61,14 @@ describe('hunch guess', () => {
   // Each written file holds on a range beyond the terms it was guessed from.
   const cases: Array<[string, string, string, number, string]> = [
     ['catalan', 'catalan(n)', 'n=0..12', 18, 'OEIS A000108'],
-    ['motzkin', 'sum(k in 0..n: binomial(n, 2*k)*catalan(k))', 'n=0..14', 20, 'OEIS A001006'],
-    ['delannoy', 'sum(k in 0..n: binomial(n, k)*binomial(n + k, k))', 'n=0..14', 20, 'OEIS A001850'],
-    ['franel', 'sum(k in 0..n: binomial(n, k)^3)', 'n=0..16', 22, 'OEIS A000172'],
-    ['apery', 'sum(k in 0..n: (binomial(n, k)*binomial(n + k, k))^2)', 'n=0..18', 24, 'OEIS A005259'],
-    ['baxter', 'sum(k in 1..n: binomial(n + 1, k - 1)*binomial(n + 1, k)*binomial(n + 1, k + 1))/(binomial(n + 1, 1)*binomial(n + 1, 2))', 'n=1..16', 22, 'OEIS A001181'],
+    ['motzkin', 'sum(binomial(n, 2*k)*catalan(k) for k in 0..n)', 'n=0..14', 20, 'OEIS A001006'],
+    ['delannoy', 'sum(binomial(n, k)*binomial(n + k, k) for k in 0..n)', 'n=0..14', 20, 'OEIS A001850'],
+    ['franel', 'sum(binomial(n, k)^3 for k in 0..n)', 'n=0..16', 22, 'OEIS A000172'],
+    ['apery', 'sum((binomial(n, k)*binomial(n + k, k))^2 for k in 0..n)', 'n=0..18', 24, 'OEIS A005259'],
+    ['baxter', 'sum(binomial(n + 1, k - 1)*binomial(n + 1, k)*binomial(n + 1, k + 1) for k in 1..n)/(binomial(n + 1, 1)*binomial(n + 1, 2))', 'n=1..16', 22, 'OEIS A001181'],
     ['fibonacci', 'fibonacci(n)', 'n=0..12', 30, 'OEIS A000045'],
-    ['pell', 'sum(k in 0..quo(n - 1, 2): binomial(n, 2*k + 1)*2^k)', 'n=0..12', 30, 'OEIS A000129'],
-    ['asm', 'product(k in 0..n - 1: factorial(3*k + 1)/factorial(n + k))', 'n=1..16', 22, 'OEIS A005130'],
+    ['pell', 'sum(binomial(n, 2*k + 1)*2^k for k in 0..quo(n - 1, 2))', 'n=0..12', 30, 'OEIS A000129'],
+    ['asm', 'product(factorial(3*k + 1)/factorial(n + k) for k in 0..n - 1)', 'n=1..16', 22, 'OEIS A005130'],
     ['separable', 'count(w in avoiders(n, "2413", "3142"))', 'n=1..10', 11, 'OEIS A006318'],
   ];
   for (const [name, expr, over, to, source] of cases)

@@ -7,4 +7,3 @@ export { fitAlgebraic, algebraicText, type AlgebraicFit } from './algebraic.js';
 export { fitQuasiPolynomial, type QuasiPolynomialFit } from './polynomialFit.js';
 export { factorialRatio, type FactorialForm } from './factorialForm.js';
 export { rationalRoots } from './roots.js';
-export { setBodyFirst } from './text.js';
