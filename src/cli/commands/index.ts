@@ -11,8 +11,10 @@ import { addMergeCommand } from './merge.js';
 import { addReplayCommand } from './replay.js';
 import { addStatusCommand } from './status.js';
 import { addSlurmCommand } from './slurm.js';
+import { addExportCommand } from './export.js';
+import { addReportCommand } from './report.js';
 
 /** Adds a command; the action reports its exit code through setExit. */
 export type AddCommand = (program: Command, t: Terminal, setExit: (code: number) => void) => void;
 
-export const commands: AddCommand[] = [addCheckCommand, addEvalCommand, addTableCommand, addListCommand, addStatusCommand, addReplayCommand, addMergeCommand, addInitCommand, addSlurmCommand];
+export const commands: AddCommand[] = [addCheckCommand, addEvalCommand, addTableCommand, addListCommand, addStatusCommand, addReplayCommand, addMergeCommand, addInitCommand, addSlurmCommand, addExportCommand, addReportCommand];
