@@ -16,9 +16,10 @@ export const addReportCommand: AddCommand = (program, t, setExit) => {
     .argument('[paths...]', 'files or folders of conjectures (default: the project\'s conjectures)')
     .option('-o, --output <FILE>', 'write the page to this file (default: standard output)')
     .option('--ledger <PATH>', 'the ledger to read (default: the project\'s)')
-    .action(async (paths: string[], flags: { output?: string; ledger?: string }) => {
+    .option('--title <TEXT>', 'the page\'s title (default: "Notebook" and the project folder\'s name)')
+    .action(async (paths: string[], flags: { output?: string; ledger?: string; title?: string }) => {
       const project = await openProject(paths[0] ?? process.cwd());
-      const { model, warnings } = loadNotebook(project, paths, { ledger: flags.ledger });
+      const { model, warnings } = loadNotebook(project, paths, { ledger: flags.ledger, title: flags.title });
       for (const w of warnings) t.err(`${t.color.yellow('warning:')} ${w}\n`);
       const page = reportPage(model);
       if (flags.output) {

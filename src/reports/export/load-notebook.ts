@@ -36,6 +36,7 @@ export interface NotebookOptions {
   /** Only this conjecture. */
   id?: string;
   ledger?: string;
+  title?: string;
 }
 
 export function loadNotebook(project: Project, paths: readonly string[], opts: NotebookOptions = {}): { model: NotebookModel; warnings: string[] } {
@@ -54,7 +55,7 @@ export function loadNotebook(project: Project, paths: readonly string[], opts: N
     return notebookEntry(s, specs[k].statement, ledger.records, cx);
   });
   const model: NotebookModel = {
-    title: `Notebook ${basename(project.root)}`,
+    title: opts.title ?? `Notebook ${basename(project.root)}`,
     generatedAt: new Date().toISOString().replace(/\.\d+Z$/, 'Z').replace('T', ' ').replace('Z', ' UTC'),
     tool: TOOL_VERSION,
     entries,

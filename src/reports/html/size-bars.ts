@@ -20,7 +20,7 @@ export const STATE_WORDS: Record<SizeState, string> = {
   unfinished: 'started, not finished (does not count)',
 };
 
-const CELL = 12, GAP = 2, HEIGHT = 14;
+const CELL = 7, GAP = 1, HEIGHT = 14;
 
 function cellRect(c: SizeCell, x: number): string {
   const dashed = c.state === 'sampled' || c.state === 'sample-failed' ? ' stroke="#8a5a00" stroke-dasharray="2 2"' : '';

@@ -9,11 +9,14 @@ h2 { font-size: 1.2rem; margin: 2rem 0 .5rem; border-top: 1px solid var(--rule);
 .meta, .note { color: var(--muted); font-size: .9rem; }
 .note { border-left: 3px solid var(--warn); padding: .25rem .75rem; background: #fff8ec; color: var(--ink); }
 .summary span { margin-right: 1.25rem; }
-table { border-collapse: collapse; width: 100%; font-size: .9rem; margin-top: 1rem; }
+table { border-collapse: collapse; width: 100%; font-size: .85rem; margin-top: 1rem; }
 th, td { text-align: left; vertical-align: top; padding: .35rem .5rem; border-bottom: 1px solid var(--rule); }
 th { font-weight: 600; background: #f5f5f7; }
 td.id code { font-weight: 600; }
-td.statement { max-width: 22rem; }
+td.statement { min-width: 16rem; }
+td.id { max-width: 13rem; word-break: break-word; }
+td.id .meta { font-size: .75rem; }
+td.exhaustive, td.sampled { min-width: 9rem; }
 .outcome { font-weight: 600; white-space: nowrap; }
 .agrees { color: var(--good); }
 .disagrees { color: var(--bad); }

@@ -39,7 +39,10 @@ export function matrixScene(rows: number, cols: number, entries: readonly string
   const b = new SceneBuilder();
   gridLines(b, cols, rows);
   for (let i = 0; i < rows; i++)
-    for (let j = 0; j < cols; j++) b.add({ t: 'text', x: j + 0.5, y: i + 0.5, s: entries[i * cols + j] });
+    for (let j = 0; j < cols; j++) {
+      const s = entries[i * cols + j];
+      b.add({ t: 'text', x: j + 0.5, y: i + 0.5, s, small: s.length > 2 });
+    }
   return b.build(`a ${rows} × ${cols} matrix`);
 }
 
