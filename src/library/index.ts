@@ -17,3 +17,6 @@ import './matrices.js';
 import './schubert.js';
 import './markov.js';
 import './moves.js';
+import './dyckPaths.js';
+import './charge.js';
+import './setPartitions.js';

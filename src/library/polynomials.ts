@@ -8,7 +8,7 @@ import {
   asMonomial, coefficientOf, coefficientsOf, degreeIn, renameVariables, substitute, termsOf, totalDegree,
   univariateCoefficients,
 } from '../algebra/polynomialOps.js';
-import { indexedVarId, varBase, varId, varIndex, varName } from '../algebra/variables.js';
+import { indexedName, isBareVar, varBase, varId, varIndex, varIndices, varName } from '../algebra/variables.js';
 import type { Value } from '../values/value.js';
 import { variableArg } from './polyArgs.js';
 import { defineFunction } from './registry.js';
@@ -104,7 +104,7 @@ defineFunction({
     const poly = p as PolyLike;
     const id = variableArg(call, 'var', v);
     const values = new Map<number, PolyLike>();
-    if (varIndex(id) !== null) {
+    if (!isBareVar(id)) {
       if (Array.isArray(value)) fail(`${call}: a list of values needs a bare indexed name (x), not ${varName(id)}`);
       values.set(id, value as PolyLike);
       return substitute(poly, values);
@@ -144,12 +144,9 @@ defineFunction({
     const poly = p as PolyLike;
     const ia = variableArg(call, 'a', a), ib = variableArg(call, 'b', b);
     const rename = new Map<number, number>();
-    if (varIndex(ia) === null && varIndex(ib) === null && ia !== ib) {
+    if (isBareVar(ia) && isBareVar(ib) && ia !== ib) {
       const ba = varBase(ia), bb = varBase(ib);
-      const partner = (id: number, to: string) => {
-        const i = varIndex(id);
-        return i === null ? varId(to) : indexedVarId(to, i);
-      };
+      const partner = (id: number, to: string) => varId(indexedName(to, varIndices(id)));
       for (const id of familyIn(poly, ba)) rename.set(id, partner(id, bb));
       for (const id of familyIn(poly, bb)) rename.set(id, partner(id, ba));
     } else {

@@ -70,5 +70,5 @@ export function createCheckRecorder(project: Project, compiled: CompiledConjectu
 /** A project opened without its plugins (for callers that cannot wait; plugins need openProject). */
 export function projectWithoutPlugins(start: string): Project {
   const root = findProjectRoot(start);
-  return { root, config: readProjectConfig(root), plugins: [] };
+  return { root, config: readProjectConfig(root), plugins: [], skipped: null };
 }

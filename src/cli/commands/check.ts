@@ -18,7 +18,8 @@ import { collect, parseCount, parseDuration, parseRangeOption } from '../options
 import type { Terminal } from '../terminal.js';
 import type { AddCommand } from './index.js';
 import { createCheckRecorder, type CheckRecorder } from '../../records/check-recorder.js';
-import { openProject } from '../../records/open-project.js';
+import { approvedPlugins, explainSkippedPlugins } from '../../records/open-project.js';
+import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
 
 interface CheckFlags {
   sizes?: string[];
@@ -35,6 +36,7 @@ interface CheckFlags {
   junit?: string;
   ascii?: boolean;
   resume?: boolean;
+  allowPlugins?: boolean;
 }
 
 export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
@@ -57,6 +59,7 @@ export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
     .option('--junit <FILE>', 'also write a JUnit XML report')
     .option('--id <ID>', 'only the conjecture with this id (repeatable)', collect)
     .option('--ascii', 'plain ASCII pictures')
+    .option('--allow-plugins', ALLOW_PLUGINS_HELP)
     .action(async (paths: string[], flags: CheckFlags) => setExit(await runCheck(paths, flags, t)));
 };
 
@@ -93,10 +96,16 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   // The project (hunch.yaml, its plugins, the canonical hash) is opened in this thread and again in
   // the worker. Everything is loaded and validated here first: a bad file exits 2 before anything
   // is recorded.
-  const project = await openProject(req.paths[0]);
+  const project = await openCommandProject(t, req.paths[0], { allowPlugins: flags.allowPlugins, quiet: flags.json });
   req.root = project.root;
+  req.plugins = approvedPlugins(project);
   if (req.paths.length === 0) req.paths = project.config.conjectures;
-  const compiled = prepareRun(req);
+  let compiled;
+  try {
+    compiled = prepareRun(req);
+  } catch (e) {
+    throw explainSkippedPlugins(e, project);
+  }
   const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger });
   req.regression = recorder.regressionCases(compiled);
   if (flags.resume) req.resume = heldRecordsForResume(flags.ledger, project.config.ledger, compiled);

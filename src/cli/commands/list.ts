@@ -9,7 +9,7 @@ import { allFunctions, signatureOf } from '../../library/registry.js';
 import { EXIT } from '../errors.js';
 import type { AddCommand } from './index.js';
 import { REDUCERS } from '../../language/expr/index.js';
-import { openProject } from '../../records/open-project.js';
+import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
 
 export const addListCommand: AddCommand = (program, t, setExit) => {
   program
@@ -17,8 +17,9 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
     .description('list the built-in families and functions with their signatures and sources')
     .argument('[what]', 'families, functions, a topic (permutations, polynomials, ...) or a name')
     .option('--json', 'as JSON')
-    .action(async (what: string | undefined, flags: { json?: boolean }) => {
-      await openProject(); // the project's plugins are listed too
+    .option('--allow-plugins', ALLOW_PLUGINS_HELP)
+    .action(async (what: string | undefined, flags: { json?: boolean; allowPlugins?: boolean }) => {
+      await openCommandProject(t, undefined, { allowPlugins: flags.allowPlugins }); // the project's plugins are listed too
       const fams = allFamilies();
       const fns = allFunctions();
       const topics = [...new Set(fns.map((f) => f.topic))].sort();
