@@ -7,7 +7,7 @@ import { InputError } from '../../base/errors.js';
 import '../../families/index.js';
 import '../../library/index.js';
 import { writeFileAtomic } from '../../records/atomic-write.js';
-import { openProject } from '../../records/open-project.js';
+import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
 import type { CounterexampleModel } from '../../reports/export/counterexample-model.js';
 import { counterexampleLatex, latexDocument, notebookLatex, type CoverageLines } from '../../reports/export/latex-export.js';
 import { loadCounterexample, loadNotebook } from '../../reports/export/load-notebook.js';
@@ -26,6 +26,7 @@ interface ExportFlags {
   id?: string;
   ledger?: string;
   output?: string;
+  allowPlugins?: boolean;
 }
 
 /** A counterexample file has these top-level keys; a conjecture file has `conjecture:` with `claim:`. */
@@ -80,12 +81,13 @@ export const addExportCommand: AddCommand = (program, t, setExit) => {
     .option('--id <ID>', 'only the conjecture with this id (for a conjecture file or folder)')
     .option('--ledger <PATH>', 'the ledger to read (default: the project\'s)')
     .option('-o, --output <FILE>', 'write to this file instead of standard output')
+    .option('--allow-plugins', ALLOW_PLUGINS_HELP)
     .action(async (file: string, flags: ExportFlags) => {
       const fmt = format(flags);
       if (flags.binding !== undefined && fmt !== 'svg') throw new InputError('--binding goes with --svg');
       let text: string;
       if (looksLikeCounterexample(file)) {
-        const project = await openProject(dirname(file));
+        const project = await openCommandProject(t, dirname(file), { allowPlugins: flags.allowPlugins });
         const m = loadCounterexample(file, project);
         let cover: CoverageLines | null = null;
         try {
@@ -99,7 +101,7 @@ export const addExportCommand: AddCommand = (program, t, setExit) => {
         else text = flags.document ? latexDocument(`Counterexample to ${m.id}`, [counterexampleLatex(m, cover)]) : counterexampleLatex(m, cover);
       } else {
         if (fmt === 'svg') throw new InputError(`--svg draws one picture: give it a counterexample file (counterexamples/<id>.yaml), not ${file}`);
-        const project = await openProject(file);
+        const project = await openCommandProject(t, file, { allowPlugins: flags.allowPlugins });
         const { model, warnings } = loadNotebook(project, [file], { id: flags.id, ledger: flags.ledger });
         for (const w of warnings) t.err(`${t.color.yellow('warning:')} ${w}\n`);
         text = notebookText(model, fmt, Boolean(flags.document));

@@ -3,7 +3,7 @@
 import '../../families/index.js';
 import '../../library/index.js';
 import { writeFileAtomic } from '../../records/atomic-write.js';
-import { openProject } from '../../records/open-project.js';
+import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
 import { loadNotebook } from '../../reports/export/load-notebook.js';
 import { reportPage } from '../../reports/html/report-page.js';
 import { EXIT } from '../errors.js';
@@ -15,10 +15,11 @@ export const addReportCommand: AddCommand = (program, t, setExit) => {
     .description('one self-contained HTML page of the notebook: outcomes, verified and sampled ranges, counterexamples drawn')
     .argument('[paths...]', 'files or folders of conjectures (default: the project\'s conjectures)')
     .option('-o, --output <FILE>', 'write the page to this file (default: standard output)')
+    .option('--allow-plugins', ALLOW_PLUGINS_HELP)
     .option('--ledger <PATH>', 'the ledger to read (default: the project\'s)')
     .option('--title <TEXT>', 'the page\'s title (default: "Notebook" and the project folder\'s name)')
-    .action(async (paths: string[], flags: { output?: string; ledger?: string; title?: string }) => {
-      const project = await openProject(paths[0] ?? process.cwd());
+    .action(async (paths: string[], flags: { output?: string; ledger?: string; title?: string; allowPlugins?: boolean }) => {
+      const project = await openCommandProject(t, paths[0], { allowPlugins: flags.allowPlugins });
       const { model, warnings } = loadNotebook(project, paths, { ledger: flags.ledger, title: flags.title });
       for (const w of warnings) t.err(`${t.color.yellow('warning:')} ${w}\n`);
       const page = reportPage(model);

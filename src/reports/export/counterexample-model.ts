@@ -83,8 +83,8 @@ function recheckWords(r: ReplayResult | null, error: string | null): { ok: boole
       return { ok: true, text: 're-checked by this export: the case still refutes the conjecture as written in the file' };
     case 'holds':
       return { ok: false, text: 're-checked by this export: the claim HOLDS for this case, so the file does not refute the conjecture' };
-    case 'excluded':
-      return { ok: false, text: 're-checked by this export: "where" excludes this case, so it is not a counterexample' };
+    case 'not-a-case':
+      return { ok: false, text: `re-checked by this export: not a case of this conjecture (${r.error ?? 'it is outside its families or ranges'}), so it is not a counterexample` };
     case 'needs-plugins':
       return { ok: false, text: `not re-checked: the conjecture uses plugin functions this project does not load (${r.missingPlugins.flatMap((p) => p.functions).join(', ')})` };
     default:

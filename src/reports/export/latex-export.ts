@@ -33,7 +33,7 @@ export interface CoverageLines {
 
 export function counterexampleLatex(m: CounterexampleModel, coverage: CoverageLines | null = null): string {
   const out = [
-    `% Exported by hunch ${TOOL_VERSION}: the counterexample to ${m.id}. Needs \\usepackage{tikz}.`,
+    `% Exported by hunch ${TOOL_VERSION}: the counterexample to ${m.id}. Needs \\usepackage{tikz, amssymb}.`,
     TIKZ_PREAMBLE,
     `\\paragraph{Counterexample to ${latexCode(m.id)}.} ${latexText(m.statement)}`,
     '\\begin{description}',
@@ -90,7 +90,7 @@ export function notebookLatex(n: NotebookModel): string {
 export function latexDocument(title: string, bodies: readonly string[]): string {
   return [
     '\\documentclass[11pt]{article}',
-    '\\usepackage{amsmath}',
+    '\\usepackage{amsmath, amssymb}',
     '\\usepackage{tikz}',
     '\\setlength{\\parindent}{0pt}',
     '\\setlength{\\emergencystretch}{3em}',

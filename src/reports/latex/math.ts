@@ -35,8 +35,31 @@ function escapeIdent(s: string): string {
   return s.replace(/_/g, '\\_');
 }
 
+/** Symmetric functions in their bases print as s_{(2,1)}, m_{(3)}, ... */
+const BASIS_LETTER: Record<string, string> = { schurSym: 's', monomialSym: 'm', elementarySym: 'e', completeSym: 'h', powerSym: 'p' };
+const BASIS_CALL = /\b(schurSym|monomialSym|elementarySym|completeSym|powerSym)\(\[([\d,\s]*)\]\)/g;
+
+/** An ideal's generators between angle brackets; over F_p with the prime as a subscript. */
+const IDEAL_CALL = /^ideal\(\[(.*)\](?:,\s*(\d+))?\)$/s;
+
 /** LaTeX math (without the surrounding $...$) for an expression text. */
 export function exprToLatex(text: string): string {
+  const ideal = IDEAL_CALL.exec(text.trim());
+  if (ideal) return `\\left\\langle ${exprToLatex(ideal[1])} \\right\\rangle${ideal[2] ? `_{\\mathbb{F}_{${ideal[2]}}}` : ''}`;
+  const parts = text.split(BASIS_CALL);
+  if (parts.length > 1) {
+    // split() with two groups: text, name, parts, text, name, parts, ...
+    let out = '';
+    for (let k = 0; k < parts.length; k += 3) {
+      out += parts[k] ? ` ${exprTokensToLatex(parts[k])} ` : '';
+      if (k + 1 < parts.length) out += `${BASIS_LETTER[parts[k + 1]]}_{(${parts[k + 2].replace(/\s+/g, '')})}`;
+    }
+    return out.replace(/\s+/g, ' ').trim();
+  }
+  return exprTokensToLatex(text);
+}
+
+function exprTokensToLatex(text: string): string {
   const toks = tokenize(text);
   let out = '';
   for (let i = 0; i < toks.length; i++) {

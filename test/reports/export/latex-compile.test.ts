@@ -77,7 +77,7 @@ describe.skipIf(!haveTex)('LaTeX exports compile with pdflatex', () => {
     expect(nb.counterexamples.length).toBeGreaterThanOrEqual(5);
     for (const f of nb.counterexamples) {
       const dir = work();
-      const out = runCli(['export', join('counterexamples', f), '--latex', '--document'], { cwd: nb.dir });
+      const out = runCli(['export', join('counterexamples', f), '--latex', '--document', '--allow-plugins'], { cwd: nb.dir });
       expect(out.code, out.stderr).toBe(0);
       expect(out.stdout).toContain('re-checked by this export: the case still refutes');
       writeFileSync(join(dir, 'x.tex'), out.stdout);
@@ -89,7 +89,7 @@ describe.skipIf(!haveTex)('LaTeX exports compile with pdflatex', () => {
 
   it('the notebook status as a whole document', () => {
     const dir = work();
-    const out = runCli(['export', 'conjectures', '--latex', '--document'], { cwd: nb.dir });
+    const out = runCli(['export', 'conjectures', '--latex', '--document', '--allow-plugins'], { cwd: nb.dir });
     expect(out.code, out.stderr).toBe(0);
     expect(out.stdout).toContain('evidence, not proof');
     writeFileSync(join(dir, 'status.tex'), out.stdout);

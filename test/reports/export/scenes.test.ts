@@ -57,5 +57,7 @@ describe('LaTeX text and mathematics', () => {
     expect(exprToLatex('perm([1, 3, 2])')).toBe('\\mathrm{perm}([1, 3, 2])');
     expect(exprToLatex('q^-1 + 2*t')).toBe('q^{-1} + 2 t');
     expect(exprToLatex('1234567')).toBe('1\\,234\\,567');
+    expect(exprToLatex('2*schurSym([2, 1]) + q*schurSym([3])')).toBe('2 s_{(2,1)} + q s_{(3)}');
+    expect(exprToLatex('ideal([x[1]^2 - x[2], x[1]*x[2]], 32003)')).toBe('\\left\\langle [x_{1}^{2} - x_{2}, x_{1} x_{2}] \\right\\rangle_{\\mathbb{F}_{32003}}'.replace('[', '').replace(']', ''));
   });
 });

@@ -32,7 +32,7 @@ describe.skipIf(!haveBrowser)('the report page in a real browser', () => {
   beforeAll(() => {
     nb = checkedNotebook();
     page = join(nb.dir, 'report.html');
-    const r = runCli(['report', '-o', page, '--title', "The working group's notebook"], { cwd: nb.dir });
+    const r = runCli(['report', '--allow-plugins', '-o', page, '--title', "The working group's notebook"], { cwd: nb.dir });
     if (r.code !== 0) throw new Error(r.stderr);
   }, 240_000);
   afterAll(() => nb?.dispose());
@@ -49,7 +49,7 @@ describe.skipIf(!haveBrowser)('the report page in a real browser', () => {
       await context.route('**/*', (route) => (route.request().url() === url ? route.continue() : route.abort()));
       await tab.goto(url, { waitUntil: 'load' });
 
-      const status = JSON.parse(runCli(['status', '--json'], { cwd: nb.dir }).stdout);
+      const status = JSON.parse(runCli(['status', '--json', '--allow-plugins'], { cwd: nb.dir }).stdout);
       const ids: string[] = status.conjectures.map((c: { id: string }) => c.id);
       const rows: string[] = await tab.$$eval('tr.conjecture', (trs) => trs.map((tr) => tr.getAttribute('data-id') ?? ''));
       expect(rows).toEqual(ids);
