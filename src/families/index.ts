@@ -17,3 +17,4 @@ import './asms/asms.js';
 import './reducedWords/reducedWords.js';
 import './pipeDreams/pipeDreams.js';
 import './partialPermutations/partialPermutations.js';
+import './setPartitions/noncrossingPartitions.js';

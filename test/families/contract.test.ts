@@ -46,6 +46,7 @@ const PARAMS: Record<string, Entry> = {
   words: { small: [[0, 2], [5, 3], [20, 4]], uniform: [[3, 3], [4, 2]] },
   partitions: { small: [[0], [8], [40]], uniform: [[8]] },
   setPartitions: { small: [[0], [6], [20]], uniform: [[5]] },
+  noncrossingPartitions: { small: [[0], [1], [6], [25]], uniform: [[5], [6]] },
   dyckPaths: { small: [[0], [5], [15]], uniform: [[5]] },
   standardTableaux: { small: [[[3, 2]], [[4, 3, 1]], [[6, 4, 4, 1]]], uniform: [[[3, 2, 1]]] },
   semistandardTableaux: { small: [[[2, 1], 3], [[3, 2], 4]], uniform: [[[2, 1], 3], [[2, 2], 3]] },

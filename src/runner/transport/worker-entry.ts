@@ -26,7 +26,7 @@ interface Unprepared {
 }
 
 async function main(): Promise<void> {
-  if (request.root) await openProjectAt(request.root);
+  if (request.root) await openProjectAt(request.root, request.plugins ?? []);
   const prepared: Array<PreparedConjecture | Unprepared> = prepareRun(request).map((c) => {
     try {
       return prepareConjecture(c, checkOptionsFor(request, c, decodeValue));
