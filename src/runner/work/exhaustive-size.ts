@@ -1,18 +1,17 @@
 // One size of the exhaustive phase as a set of slices: which slices this run must evaluate (its
 // shard, minus what a resumed ledger holds), and how the slices' outcomes make the size's piece, its
-// ledger records and its counterexample. The in-process runner and the worker pool share this, so
-// both give the same counts and the same simplest counterexample.
+// ledger records and its simplest failing case. The phase engine uses this for every executor, so
+// all give the same counts and the same simplest counterexample.
 
 import type { CompiledConjecture } from '../../language/conjecture/compiled.js';
 import type { Value } from '../../values/value.js';
 import { compareCases } from '../case-order.js';
-import { bindingTexts, encodeBindings, explainCase, frameFor, sizeOf } from '../case-report.js';
 import { plannedCases } from '../plan.js';
-import type { CheckedPiece, Counterexample } from '../result.js';
+import type { CheckedPiece, ErrorInfo } from '../result.js';
 import { countCases, hasCheapRanges } from './case-space.js';
 import type { HeldCounts, ResumeIndex } from './resume.js';
 import { shardText, sliceBounds, sliceCount, slicesOfShard, type Shard } from './slicing.js';
-import { sizeFixing, type CaseFault, type SliceOutcome } from './work-units.js';
+import { sizeFixing, type SliceOutcome } from './units.js';
 
 export interface SizePlan {
   size: number | null;
@@ -102,45 +101,25 @@ export interface SizeOutcome {
   piece: CheckedPiece;
   /** What to record in the ledger: the piece when complete, else one record per finished slice. */
   records: CheckedPiece[];
-  counterexample: Counterexample | null;
+  /** The simplest failing case of the size, with its encoded bindings. */
+  best: { values: Value[]; encoded: Record<string, unknown> | null } | null;
+  /** The size's failures when it was finished (null when the run stopped inside it). */
+  failuresAtSize: number | null;
   /** The first evaluation error in case order, if any (it makes the outcome `error`). */
-  fault: CaseFault | null;
+  fault: ErrorInfo | null;
   complete: boolean;
 }
 
-/** Turn a failing case into the counterexample of CLI.md. */
-export function exhaustiveCounterexample(cc: CompiledConjecture, best: Value[], failuresAtSize: number | null, encoded?: Record<string, unknown>): Counterexample {
-  const f = frameFor(cc, best);
-  const { values, sides } = explainCase(cc, f);
-  return {
-    phase: 'exhaustive',
-    size: sizeOf(cc, f),
-    bindings: encoded ?? encodeBindings(cc, f),
-    values,
-    sides,
-    failuresAtSize,
-    shrinkSteps: 0,
-    seed: null,
-    text: bindingTexts(cc, f),
-  };
-}
-
-/** Outcomes by unit; `encodedBest` gives the exact encoding of a unit's best case when it came from a worker. */
-export function finishSize(
-  cc: CompiledConjecture,
-  plan: SizePlan,
-  outcomes: Map<number, SliceOutcome>,
-  ms: number,
-  encodedBest?: Map<number, Record<string, unknown>>,
-): SizeOutcome {
+/** The slices' outcomes (by slice) make the size's piece, its records and its simplest failing case. */
+export function finishSize(cc: CompiledConjecture, plan: SizePlan, outcomes: Map<number, SliceOutcome>, ms: number): SizeOutcome {
   let cases = 0, failures = 0, skipped = 0;
   for (const h of plan.held.values()) {
     cases += h.cases;
     skipped += h.skipped;
   }
   let complete = true;
-  let fault: CaseFault | null = null;
-  let best: Value[] | null = null, bestUnit = -1;
+  let fault: ErrorInfo | null = null;
+  let best: SliceOutcome | null = null;
   for (const j of plan.units) {
     const o = outcomes.get(j);
     if (!o) {
@@ -152,10 +131,7 @@ export function finishSize(
     skipped += o.skipped;
     if (o.stopped) complete = false;
     if (o.fault && fault === null) fault = o.fault; // units are in case order: the first fault is the earliest
-    if (o.best && (best === null || compareCases(cc, o.best, best) < 0)) {
-      best = o.best;
-      bestUnit = j;
-    }
+    if (o.best && (best === null || compareCases(cc, o.best, best.best!) < 0)) best = o;
   }
   const piece: CheckedPiece = { phase: 'exhaustive', size: sizeRecord(cc, plan.size), cases, failures, skipped, ms };
   if (plan.shard) piece.shard = shardText(plan.shard);
@@ -173,7 +149,12 @@ export function finishSize(
       });
     }
   }
-  const counterexample =
-    best === null ? null : exhaustiveCounterexample(cc, best, complete ? failures : null, encodedBest?.get(bestUnit));
-  return { piece, records, counterexample, fault, complete };
+  return {
+    piece,
+    records,
+    best: best ? { values: best.best!, encoded: best.bestEncoded } : null,
+    failuresAtSize: complete ? failures : null,
+    fault,
+    complete,
+  };
 }

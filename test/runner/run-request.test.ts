@@ -1,4 +1,4 @@
-// prepareRun (src/runner/session.ts): load, compile and refuse, before anything runs, an exhaustive
+// prepareRun (src/runner/run-request.ts): load, compile and refuse, before anything runs, an exhaustive
 // size whose enumeration would take years (issue 2, "Bad input"), suggesting `sample`.
 
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -8,7 +8,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import '../../src/families/index.js';
 import '../../src/library/index.js';
 import { InputError } from '../../src/base/errors.js';
-import { prepareRun, type RunRequest } from '../../src/runner/session.js';
+import { prepareRun, type RunRequest } from '../../src/runner/run-request.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'hunch-session-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));

@@ -1,11 +1,13 @@
 // A fixed set of worker threads, one task at a time each. Every worker gets the whole run request
-// and compiles the conjectures itself; tasks name a conjecture by its index in the run.
+// and compiles the conjectures itself (src/runner/transport/worker-entry.ts); tasks name a
+// conjecture by its index in the run and carry one unit of work.
 
 import { Worker } from 'node:worker_threads';
-import type { RunRequest } from '../session.js';
-import type { PoolReply, PoolTask } from './messages.js';
+import type { RunRequest } from '../run-request.js';
+import type { UnitOutcome, WorkUnit } from '../work/units.js';
+import { outcomeFromWire, unitToWire, type PoolReply, type PoolTask, type WireOutcome } from './messages.js';
 
-type Pending = { resolve: (r: PoolReply) => void; reject: (e: Error) => void; progress?: (visited: number) => void };
+type Pending = { resolve: (r: WireOutcome) => void; reject: (e: Error) => void; progress?: (visited: number) => void };
 
 export class WorkerCrash extends Error {}
 
@@ -14,7 +16,7 @@ export class WorkerPool {
   private readonly pending = new Map<number, Pending>();
   private nextTask = 1;
   private closed = false;
-  /** Progress of a long exact solve inside a case (issue 6), for the progress line. */
+  /** Progress of a long exact solve inside a case (a stationary measure), for the progress line. */
   onSolve: ((fraction: number) => void) | null = null;
 
   constructor(
@@ -23,7 +25,7 @@ export class WorkerPool {
     readonly flag: Int32Array,
   ) {
     for (let i = 0; i < size; i++) {
-      const w = new Worker(new URL('./pool-worker.js', import.meta.url), { workerData: { request, flag }, resourceLimits: WORKER_LIMITS });
+      const w = new Worker(new URL('./worker-entry.js', import.meta.url), { workerData: { request, flag }, resourceLimits: WORKER_LIMITS });
       w.on('message', (m: PoolReply) => this.receive(m));
       w.on('error', (e) => this.failAll(e.message));
       w.on('exit', (code) => {
@@ -65,10 +67,10 @@ export class WorkerPool {
       else this.settle(m.task, null, new WorkerCrash(msg));
       return;
     }
-    this.settle(m.task, m, null);
+    this.settle(m.task, m.out, null);
   }
 
-  private settle(task: number, r: PoolReply | null, e: Error | null): void {
+  private settle(task: number, r: WireOutcome | null, e: Error | null): void {
     const p = this.pending.get(task);
     if (!p) return;
     this.pending.delete(task);
@@ -84,13 +86,14 @@ export class WorkerPool {
 
   crashed: string | null = null;
 
-  /** Run a task on the worker of `lane` (lanes beyond the pool's size share workers in turn). */
-  run<T extends PoolReply>(lane: number, task: DistributiveOmit<PoolTask, 'task'>, progress?: (visited: number) => void): Promise<T> {
+  /** Run a unit of conjecture `conj` on the worker of `lane` (lanes beyond the pool's size share workers in turn). */
+  runUnit(lane: number, conj: number, unit: WorkUnit, deadline: number | null, progress?: (visited: number) => void): Promise<UnitOutcome> {
     if (this.crashed) return Promise.reject(new WorkerCrash(this.crashed));
-    const id = this.nextTask++;
-    return new Promise<T>((resolve, reject) => {
-      this.pending.set(id, { resolve: resolve as (r: PoolReply) => void, reject, progress });
-      this.workers[lane % this.workers.length].postMessage({ ...task, task: id });
+    const task = this.nextTask++;
+    return new Promise<UnitOutcome>((resolve, reject) => {
+      this.pending.set(task, { resolve: (w) => resolve(outcomeFromWire(w)), reject, progress });
+      const message: PoolTask = { task, conj, unit: unitToWire(unit), deadline };
+      this.workers[lane % this.workers.length].postMessage(message);
     });
   }
 
@@ -100,8 +103,6 @@ export class WorkerPool {
     await Promise.all(this.workers.map((w) => w.terminate()));
   }
 }
-
-type DistributiveOmit<T, K extends PropertyKey> = T extends unknown ? Omit<T, K> : never;
 
 /**
  * Worker threads get a larger young generation: the hot loop allocates small short-lived values

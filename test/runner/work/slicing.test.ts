@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
   chunkCount, chunkQuota, chunksOfShard, parseShardOption, sliceBounds, sliceCount, slicesOfShard,
-} from '../../../src/runner/parallel/slicing.js';
+} from '../../../src/runner/work/slicing.js';
 
 describe('slices and shards', () => {
   it('slices cover 0..n-1 without overlap', () => {

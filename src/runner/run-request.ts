@@ -1,5 +1,6 @@
-// A run of `hunch check`: load, compile and check the requested conjectures one after another.
-// The same code runs inside the worker thread the CLI starts and in-process for the library API.
+// A run of `hunch check` as plain data (it crosses to every worker thread), and what both the main
+// thread and each worker do with it: load and compile the requested conjectures, refuse sizes that
+// would take years, and derive each conjecture's check options.
 
 import { EvalError, InputError } from '../base/errors.js';
 import { nearest } from '../base/suggest.js';
@@ -7,13 +8,11 @@ import type { CompiledConjecture } from '../language/conjecture/compiled.js';
 import { compileConjecture } from '../language/conjecture/compile-conjecture.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
 import { loadConjectures } from '../language/conjecture/project.js';
-import { checkConjecture, CheckOptions, sizesOf } from './check.js';
-import type { RunHooks } from './hooks.js';
-import { MAX_EXHAUSTIVE_CASES, plannedCases } from './plan.js';
-import type { CheckedPiece, ConjectureResult } from './result.js';
 import type { Value } from '../values/value.js';
-import type { HeldRecord } from './parallel/resume.js';
-import type { Shard } from './parallel/slicing.js';
+import { sizesOf, type CheckOptions } from './check-options.js';
+import { MAX_EXHAUSTIVE_CASES, plannedCases } from './plan.js';
+import type { HeldRecord } from './work/resume.js';
+import type { Shard } from './work/slicing.js';
 
 /** Everything a run needs, in a form that can cross to a worker thread (plain data). */
 export interface RunRequest {
@@ -96,36 +95,4 @@ export function checkOptionsFor(req: RunRequest, cc: CompiledConjecture, decode:
     shard: req.shard ?? null,
     resume: req.resume ? req.resume.filter((r) => r.id === cc.spec.id) : null,
   };
-}
-
-export interface SessionEvents {
-  onStart?(cc: CompiledConjecture): void;
-  onPiece?(cc: CompiledConjecture, piece: CheckedPiece): void;
-  onResult(cc: CompiledConjecture, r: ConjectureResult): void;
-  onProgress?(done: number, total: number | null, label: string): void;
-  /** The interrupt flag (Ctrl-C in the main thread). */
-  interrupted(): boolean;
-}
-
-export function runSession(
-  compiled: CompiledConjecture[],
-  req: RunRequest,
-  ev: SessionEvents,
-  decode: (x: unknown) => Value,
-): ConjectureResult[] {
-  const results: ConjectureResult[] = [];
-  for (const cc of compiled) {
-    if (ev.interrupted()) break;
-    ev.onStart?.(cc);
-    const deadline = req.budgetMs === null ? Infinity : performance.now() + req.budgetMs;
-    const hooks: RunHooks = {
-      shouldStop: () => (ev.interrupted() ? 'interrupt' : performance.now() > deadline ? 'budget' : null),
-      onProgress: ev.onProgress,
-      onPiece: (p) => ev.onPiece?.(cc, p),
-    };
-    const r = checkConjecture(cc, checkOptionsFor(req, cc, decode), hooks);
-    results.push(r);
-    ev.onResult(cc, r);
-  }
-  return results;
 }

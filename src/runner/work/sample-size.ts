@@ -3,14 +3,10 @@
 // in chunk order is the one shrunk; counts stop there too, whatever ran after it.
 
 import type { CompiledConjecture } from '../../language/conjecture/compiled.js';
-import type { Value } from '../../values/value.js';
-import { bindingTexts, encodeBindings, explainCase, frameFor, sizeOf } from '../case-report.js';
-import type { RunHooks } from '../hooks.js';
-import type { CheckedPiece, Counterexample } from '../result.js';
-import { shrinkCase } from '../shrink.js';
+import type { CheckedPiece, ErrorInfo } from '../result.js';
 import type { HeldCounts, ResumeIndex } from './resume.js';
 import { chunkCount, chunkQuota, chunksOfShard, shardText, type Shard } from './slicing.js';
-import type { CaseFault, ChunkOutcome } from './work-units.js';
+import type { ChunkOutcome } from './units.js';
 
 export interface SamplePlan {
   size: number;
@@ -54,14 +50,14 @@ export interface SampleSizeOutcome {
   complete: boolean;
   /** The chunk whose failure is the one to shrink (the first in chunk order). */
   failingChunk: number | null;
-  fault: CaseFault | null;
+  fault: ErrorInfo | null;
 }
 
 export function finishSampleSize(cc: CompiledConjecture, plan: SamplePlan, outcomes: Map<number, ChunkOutcome>, ms: number, seed: string): SampleSizeOutcome {
   let cases = 0, failures = 0, skipped = 0;
   let complete = true;
   let failingChunk: number | null = null;
-  let fault: CaseFault | null = null;
+  let fault: ErrorInfo | null = null;
   for (const c of plan.units) {
     const o = outcomes.get(c);
     if (!o) {
@@ -76,7 +72,7 @@ export function finishSampleSize(cc: CompiledConjecture, plan: SamplePlan, outco
       fault = o.fault;
       break;
     }
-    if (o.failing) {
+    if (o.failed) {
       failingChunk = c;
       break;
     }
@@ -93,30 +89,4 @@ export function coveredSamplePiece(cc: CompiledConjecture, plan: SamplePlan, see
   const piece: CheckedPiece = { phase: 'sample', size: { [cc.bindings[cc.sizeIndex].name]: plan.size }, cases: c.cases, failures: 0, skipped: c.skipped, ms: 0, seed };
   if (plan.shard) piece.shard = shardText(plan.shard);
   return piece;
-}
-
-/** Shrink a sampled failing case and explain it (in-process, or in the worker that re-drew it). */
-export function sampleCounterexample(
-  cc: CompiledConjecture,
-  failing: Value[],
-  ranges: Map<string, [number, number]>,
-  seed: string,
-  hooks: RunHooks,
-): Counterexample {
-  const before = sizeOf(cc, frameFor(cc, failing));
-  const shrunk = shrinkCase(cc, failing, ranges, hooks);
-  const f = frameFor(cc, shrunk.bindings);
-  const { values, sides } = explainCase(cc, f);
-  return {
-    phase: 'sample',
-    size: sizeOf(cc, f),
-    bindings: encodeBindings(cc, f),
-    values,
-    sides,
-    failuresAtSize: null,
-    shrinkSteps: shrunk.steps,
-    seed,
-    shrunkFrom: before,
-    text: bindingTexts(cc, f),
-  };
 }

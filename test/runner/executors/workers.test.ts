@@ -91,7 +91,9 @@ describe('the worker pool', () => {
     const r1 = JSON.parse(first.stdout).results[0];
     expect(r1.outcome).toBe('incomplete');
     const ledger = readFileSync(join(dir, 'hunch-ledger.jsonl'), 'utf8').trim().split('\n').map((l) => JSON.parse(l));
-    const slices = ledger.filter((x) => x.size.n === 10 && x.shard);
+    // Where the budget ends depends on the machine's speed and load: look at the size it stopped in.
+    const stoppedIn = r1.checked.find((p: { partial?: boolean }) => p.partial).size.n;
+    const slices = ledger.filter((x) => x.size.n === stoppedIn && x.shard);
     expect(slices.length).toBeGreaterThan(0);
     const second = runCli(['check', 'big.yaml', '--resume', '--json', '--workers', '2'], { cwd: dir });
     const r2 = JSON.parse(second.stdout).results[0];

@@ -1,16 +1,14 @@
-// Starting the work of `hunch check` off the main thread, so that the main thread stays free for
-// Ctrl-C, the progress line and the records: one worker running the whole session (--workers 1,
-// the in-process runner) or a pool of K workers sharing every size (src/runner/parallel/).
+// Running `hunch check` off the main thread, so that the main thread stays free for Ctrl-C, the
+// progress line and the records: a pool of K worker threads (K = 1 with --workers 1) and the
+// pool executor, conjecture after conjecture.
 
 import { availableParallelism } from 'node:os';
-import { Worker } from 'node:worker_threads';
-import type { CompiledConjecture } from '../../language/conjecture/compiled.js';
-import { decodeValue } from '../../values/decode.js';
-import type { CheckedPiece, ConjectureResult } from '../result.js';
-import { checkOptionsFor, type RunRequest } from '../session.js';
-import type { WorkerMessage } from '../worker.js';
-import { checkConjectureParallel } from './check-parallel.js';
-import { WORKER_LIMITS, WorkerPool } from './pool.js';
+import type { CompiledConjecture } from '../language/conjecture/compiled.js';
+import { decodeValue } from '../values/decode.js';
+import { checkConjectureOnPool } from './pool-executor.js';
+import type { CheckedPiece, ConjectureResult } from './result.js';
+import { checkOptionsFor, type RunRequest } from './run-request.js';
+import { WorkerPool } from './transport/pool.js';
 
 export interface RunHandlers {
   onStart?(id: string): void;
@@ -41,44 +39,7 @@ export function startCheckRun(
   flag: Int32Array,
   h: RunHandlers,
 ): CheckRun {
-  return workers <= 1 ? singleWorker(req, flag, h) : pooled(compiled, req, workers, flag, h);
-}
-
-function singleWorker(req: RunRequest, flag: Int32Array, h: RunHandlers): CheckRun {
-  const worker = new Worker(new URL('../worker.js', import.meta.url), { workerData: { request: req, flag }, resourceLimits: WORKER_LIMITS });
-  let crash: string | null = null;
-  const finished = new Promise<string | null>((resolve) => {
-    worker.on('message', (m: WorkerMessage) => {
-      switch (m.type) {
-        case 'start':
-          h.onStart?.(m.id);
-          break;
-        case 'progress':
-          h.onProgress(m.done, m.total, m.label);
-          break;
-        case 'piece':
-          h.onPiece(m.id, m.piece as CheckedPiece);
-          break;
-        case 'result':
-          h.onResult(m.result as ConjectureResult);
-          break;
-        case 'crash':
-          crash = m.message + (process.env.HUNCH_DEBUG && m.stack ? `\n${m.stack}` : '');
-          break;
-        case 'done':
-          break;
-      }
-    });
-    worker.on('error', (e) => {
-      crash = e.message;
-    });
-    worker.on('exit', () => resolve(crash));
-  });
-  return { finished, kill: () => void worker.terminate() };
-}
-
-function pooled(compiled: CompiledConjecture[], req: RunRequest, workers: number, flag: Int32Array, h: RunHandlers): CheckRun {
-  const pool = new WorkerPool(workers, req, flag);
+  const pool = new WorkerPool(Math.max(1, workers), req, flag);
   pool.onSolve = (f) => h.onProgress(Math.round(f * 1000), 1000, 'solving for an exact stationary measure');
   let killed = false;
   const interrupted = () => Atomics.load(flag, 0) !== 0;
@@ -91,7 +52,7 @@ function pooled(compiled: CompiledConjecture[], req: RunRequest, workers: number
         const cc = compiled[index];
         h.onStart?.(cc.spec.id);
         const deadline = req.budgetMs === null ? null : Date.now() + req.budgetMs;
-        const r = await checkConjectureParallel(
+        const r = await checkConjectureOnPool(
           cc,
           checkOptionsFor(req, cc, decodeValue),
           {
