@@ -464,7 +464,7 @@ class Parser {
 }
 
 /** The children of a node, in no particular order. */
-function children(e: Expr): Expr[] {
+export function children(e: Expr): Expr[] {
   switch (e.type) {
     case 'int':
     case 'string':
