@@ -59,7 +59,8 @@ export type Expr =
   | (NodeBase & { type: 'if'; cond: Expr; then: Expr; else: Expr })
   | (NodeBase & { type: 'lambda'; params: string[]; body: Expr })
   | (NodeBase & { type: 'call'; callee: string; args: Expr[] })
-  | (NodeBase & { type: 'index'; target: Expr; index: Expr })
+  /** L[i]; z[i, j] (index2 set) only on a declared indeterminate: the variable z[i,j]. */
+  | (NodeBase & { type: 'index'; target: Expr; index: Expr; index2?: Expr })
   | (NodeBase & { type: 'comprehension'; reducer: Reducer; generators: Generator[]; body?: Expr });
 
 export type ExprOf<T extends Expr['type']> = Extract<Expr, { type: T }>;

@@ -8,6 +8,7 @@ import type { Value } from '../../values/value.js';
 import { drawDyckPath } from './dyckPath.js';
 import { glyphsFor, type Glyphs } from './glyphs.js';
 import { drawAsm, drawMatrix } from './grids.js';
+import { drawIdeal } from './ideal.js';
 import { sideBySide, width } from './layout.js';
 import { drawMatching } from './matching.js';
 import { drawPermutation } from './permutation.js';
@@ -82,6 +83,8 @@ function draw(v: Value, g: Glyphs): string | null {
       return drawPipeDream(o.crosses, g, typeof o.n === 'number' ? o.n : 0); // crosses: [row, column][]
     case 'matrix':
       return drawMatrix(o.rows, o.cols, o.entries, g); // rows, cols: numbers; entries: row-major scalars (partialPermutations are matrices)
+    case 'ideal':
+      return drawIdeal(o.gens, o.ring.length, o.prime, () => o.leadingTerms(), g); // gens, ring (ids), prime, leadingTerms()
     default:
       return null;
   }
