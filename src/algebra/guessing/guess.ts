@@ -9,7 +9,7 @@ import { guessPolynomial } from './polynomialFit.js';
 import { rationalGeneratingFunction, recurrenceGuess, searchRecurrence } from './recurrence.js';
 import { factor, ratPolyText, intPolyText } from './text.js';
 import { STANDARD_TRANSFORMS, byColumn, type Transform } from './transforms.js';
-import type { Attempt, ClaimPlan, Guess, GuessKind, GuessReport, Sequence } from './types.js';
+import { MIN_CONFIRMING_TERMS, type Attempt, type ClaimPlan, type Guess, type GuessKind, type GuessReport, type Sequence } from './types.js';
 
 export interface GuessOptions {
   /** Also try a(n)/c(n) for this column, whose function is called `name` in a conjecture. */
@@ -30,7 +30,9 @@ function directGuesses(seq: Sequence, light: boolean): { guesses: Guess[]; tried
   const tried: Attempt[] = [];
   const poly = guessPolynomial(seq);
   tried.push(...poly.tried);
-  if (poly.guess) return { guesses: [poly.guess], tried };
+  // A polynomial says it all; a quasi-polynomial may still have a simpler recurrence.
+  if (poly.guess?.kind === 'polynomial') return { guesses: [poly.guess], tried };
+  if (poly.guess) guesses.push(poly.guess);
   const rec = searchRecurrence(seq, light ? { maxOrder: 1 } : {});
   let cFinite = false;
   if (rec.fit) {
@@ -88,7 +90,7 @@ export function guessSequence(seq: Sequence, opts: GuessOptions = {}): GuessRepo
     const ts = [...STANDARD_TRANSFORMS, ...(opts.divisor ? [byColumn(opts.divisor.name, opts.divisor.column)] : [])];
     for (const t of ts) {
       const b = t.apply(seq);
-      if (!b) continue;
+      if (!b || b.terms.length < 1 + MIN_CONFIRMING_TERMS) continue;
       const inner = directGuesses(b, true);
       // Offered only when simpler than every direct guess and of another kind (differences of a polynomial say nothing new).
       const simpler = inner.guesses.filter((g) => g.unknowns < best && !guesses.some((d) => !d.transform && d.kind === g.kind));

@@ -66,11 +66,17 @@ function byXExponents(p: PolyLike, x: string, m: number, call: string): Map<stri
 
 export function fromPolynomialIn(p: PolyLike, x: string, m: number, call: string): SymLike {
   const terms = byXExponents(p, x, m, call);
-  // Symmetric: each coefficient equals that of the sorted exponent vector.
+  // Symmetric: unchanged by each adjacent transposition of x[i], x[i+1] (they generate S_m).
   for (const { e, coef } of terms.values()) {
-    const sorted = e.slice().sort((a, b) => b - a);
-    const other = terms.get(sorted.join(','));
-    if (!other || !pequals(other.coef, coef)) {
+    let ok = true;
+    for (let i = 0; i + 1 < m && ok; i++) {
+      if (e[i] === e[i + 1]) continue;
+      const f = e.slice();
+      [f[i], f[i + 1]] = [f[i + 1], f[i]];
+      const other = terms.get(f.join(','));
+      ok = other !== undefined && pequals(other.coef, coef);
+    }
+    if (!ok) {
       const mono = e.map((k, i) => (k === 0 ? '' : k === 1 ? `${x}[${i + 1}]` : `${x}[${i + 1}]^${k}`)).filter((s) => s).join('*') || '1';
       fail(`${call}: ${polyText(p)} is not symmetric in ${x}[1..${m}] (compare the coefficients of ${mono} and its rearrangements)`);
     }

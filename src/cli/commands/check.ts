@@ -13,7 +13,7 @@ import { heldRecordsForResume, shardFlag } from './check-parallel-flags.js';
 import { formatResult, formatSummary } from '../../reports/human.js';
 import { resultDocument } from '../../reports/json.js';
 import { ProgressLine } from '../../reports/progress.js';
-import { EXIT } from '../errors.js';
+import { EXIT, formatError } from '../errors.js';
 import { collect, parseCount, parseDuration, parseRangeOption } from '../options.js';
 import type { Terminal } from '../terminal.js';
 import type { AddCommand } from './index.js';
@@ -118,12 +118,25 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   let interrupts = 0;
 
   // One worker (--workers 1) or a pool sharing every size; either way off this thread.
+  // A record that cannot be written (a full disk, a file size limit) stops the run: what was
+  // recorded before stays, and the command ends with the reason (exit 2), never a crash.
+  let recordFailure: unknown = null;
+  const recording = <T>(f: () => T): T | null => {
+    if (recordFailure) return null;
+    try {
+      return f();
+    } catch (e) {
+      recordFailure = e;
+      Atomics.store(flag, 0, 1);
+      return null;
+    }
+  };
   const run = startCheckRun(compiled, req, workers, flag, {
     onProgress: (done, total, label) => progress.update(done, total, label),
-    onPiece: (id, piece) => recorder.piece(id, piece),
+    onPiece: (id, piece) => void recording(() => recorder.piece(id, piece)),
     onResult: (r) => {
       results.push(r);
-      const replay = recorder.result(r);
+      const replay = recording(() => recorder.result(r));
       progress.clear();
       if (!flags.json) t.out(formatResult(r, style, replay));
     },
@@ -146,6 +159,12 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
 
   if (crash) {
     t.err(`${t.color.red('internal error:')} ${crash}\nThis is a bug in hunch; finished work was recorded.\n`);
+    return EXIT.invalid;
+  }
+  if (recordFailure) {
+    recorder.close();
+    t.err(formatError(t, recordFailure));
+    t.err('Stopped: the records above could not be written; what was recorded before is kept.\n');
     return EXIT.invalid;
   }
   const interrupted = interrupts > 0;

@@ -11,7 +11,7 @@ import { openProject } from '../../records/open-project.js';
 import { writeFileAtomic } from '../../records/atomic-write.js';
 import { guessConjectureFile, type GuessOrigin } from '../../reports/guess-conjecture.js';
 import { formatGuesses, guessReportJson } from '../../reports/guesses.js';
-import { scalarColumn, tabulate, useBodyFirstWhenParsed } from '../../reports/tabulate.js';
+import { scalarColumn, tabulate } from '../../reports/tabulate.js';
 import { EXIT } from '../errors.js';
 import { collect, parseLetOption, parseRangeOption } from '../options.js';
 import { MAX_TABLE_ROWS } from './table.js';
@@ -72,7 +72,6 @@ export const addGuessCommand: AddCommand = (program, t, setExit) => {
     .option('--json', 'as JSON')
     .action(async (expr: string | undefined, flags: GuessFlags) => {
       await openProject(); // the project's plugins are part of the language
-      useBodyFirstWhenParsed();
       let origin: GuessOrigin;
       let terms: Scalar[];
       let divisorColumn: Scalar[] | undefined;

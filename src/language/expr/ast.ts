@@ -28,7 +28,7 @@ export type CompareOp = '==' | '!=' | '<' | '<=' | '>' | '>=';
 export type LogicOp = 'and' | 'or' | 'implies';
 export type BinaryOp = ArithOp | CompareOp | LogicOp;
 
-/** The reducers that take comprehensions: sum(i in 1..n: i^2), count(w in S where ...), ... */
+/** The reducers that take comprehensions: sum(i^2 for i in 1..n), count(w in S where ...), ... */
 export const REDUCERS = [
   'sum', 'product', 'count', 'all', 'any', 'min', 'max', 'list', 'set', 'concat', 'distribution',
 ] as const;
