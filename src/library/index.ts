@@ -19,3 +19,4 @@ import './markov.js';
 import './moves.js';
 import './symmetric.js';
 import './symmetricMacdonald.js';
+import './symmetricPolynomialBases.js';
