@@ -29,3 +29,4 @@ import './sequences.js';
 import './kronecker.js';
 import './signedPermutations.js';
 import './paths.js';
+import './symmetricPolynomialBases.js';
