@@ -24,3 +24,4 @@ import './sequences.js';
 import './kronecker.js';
 import './signedPermutations.js';
 import './paths.js';
+import './schubertCombinatorics.js';
