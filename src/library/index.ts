@@ -30,3 +30,4 @@ import './kronecker.js';
 import './signedPermutations.js';
 import './paths.js';
 import './symmetricPolynomialBases.js';
+import './schubertCombinatorics.js';
