@@ -58,6 +58,18 @@ describe('hunch guess', () => {
     expect(t.stderr).toContain('must lie beyond');
   }, 60_000);
 
+  test('--divide-by: the quotient by another column is guessed too, and its conjecture holds further (involutions, OEIS A000085)', () => {
+    const file = join(dir, 'quotient.yaml');
+    const g = runCli(['guess', 'count(w in involutions(n))*factorial(2*n)', '--over', 'n=0..12', '--divide-by', 'factorial(2*n)', '--write', file, '--to', '14', '--pick', '1']);
+    expect(g.code).toBe(0);
+    expect(g.stdout).toContain('c(n) = factorial(2*n)');
+    expect(g.stdout).toContain('b(n + 2) == b(n + 1) + (n + 1)*b(n)');
+    expect(g.stdout).toContain('where b(n) = a(n)/c(n)');
+    const c = runCli(['check', file, '--workers', '1'], { cwd: dir, timeout: 180_000 });
+    expect(c.stdout).toMatch(/holds/);
+    expect(c.code).toBe(0);
+  }, 300_000);
+
   // Each written file holds on a range beyond the terms it was guessed from.
   const cases: Array<[string, string, string, number, string]> = [
     ['catalan', 'catalan(n)', 'n=0..12', 18, 'OEIS A000108'],

@@ -87,15 +87,19 @@ export function guessSequence(seq: Sequence, opts: GuessOptions = {}): GuessRepo
   const { guesses, tried } = directGuesses(seq, false);
   if (opts.transforms !== false) {
     const best = guesses.length ? Math.min(...guesses.map((g) => g.unknowns)) : Infinity;
-    const ts = [...STANDARD_TRANSFORMS, ...(opts.divisor ? [byColumn(opts.divisor.name, opts.divisor.column)] : [])];
-    for (const t of ts) {
+    // The standard transforms look for closed forms; all classes are tried on them only when nothing
+    // fits the sequence itself, and always on the quotient by a column the user gave.
+    const nothingDirect = guesses.length === 0;
+    const ts: Array<[Transform, boolean]> = STANDARD_TRANSFORMS.map((t) => [t, !nothingDirect]);
+    if (opts.divisor) ts.push([byColumn(opts.divisor.name, opts.divisor.column), false]);
+    for (const [t, light] of ts) {
       const b = t.apply(seq);
       if (!b || b.terms.length < 1 + MIN_CONFIRMING_TERMS) continue;
-      const inner = directGuesses(b, true);
+      const inner = directGuesses(b, light);
       // Offered only when simpler than every direct guess and of another kind (differences of a polynomial say nothing new).
       const simpler = inner.guesses.filter((g) => g.unknowns < best && !guesses.some((d) => !d.transform && d.kind === g.kind));
       guesses.push(...simpler.map((g) => transformed(t, seq, g)));
-      if (guesses.length === 0) tried.push({ guessClass: `after the transform b(n) = ${t.label}: polynomials, C-finite and hypergeometric`, extent: '', terms: b.terms.length });
+      if (guesses.length === 0) tried.push({ guessClass: `after the transform b(n) = ${t.label}`, extent: light ? 'polynomials, C-finite and hypergeometric' : 'every class above', terms: b.terms.length });
     }
   }
   guesses.sort(rank);

@@ -115,7 +115,8 @@ export const addGuessCommand: AddCommand = (program, t, setExit) => {
       if (flags.json) {
         t.out(JSON.stringify({ ...(origin.expr !== undefined ? { expr: origin.expr, over: origin.variable } : {}), ...guessReportJson(report), ...(written ? { written } : {}) }, null, 2) + '\n');
       } else {
-        const header = origin.expr !== undefined ? `a(${origin.variable}) = ${origin.expr}, ${origin.variable} = ${origin.lo}..${origin.hi}` : 'the terms given';
+        const divisor = origin.divisor !== undefined ? `, c(${origin.variable}) = ${origin.divisor}` : '';
+        const header = origin.expr !== undefined ? `a(${origin.variable}) = ${origin.expr}${divisor}, ${origin.variable} = ${origin.lo}..${origin.hi}` : 'the terms given';
         t.out(formatGuesses(report, header, t.color.dim));
         if (written)
           t.out(`\nWrote ${written.ids.length} conjecture${written.ids.length === 1 ? '' : 's'} (${written.ids.join(', ')}) to ${written.file}, to be checked up to n = ${written.to}: hunch check ${written.file}\n`);
