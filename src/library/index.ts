@@ -25,3 +25,5 @@ import './kronecker.js';
 import './signedPermutations.js';
 import './paths.js';
 import './schubertCombinatorics.js';
+import './insertion.js';
+import './quasisymmetric.js';
