@@ -1,8 +1,8 @@
 // Matrices (LIBRARY.md §2): construction, determinant, rank, transpose, characteristic
 // polynomial. Products and sums are the operators * + - (src/library/operators.ts).
 
-import { charpoly, determinant, Matrix, rank, transpose } from '../algebra/matrix.js';
-import type { PolyLike } from '../algebra/polynomial.js';
+import { charpoly, matrixDeterminant, Matrix, rank, transpose } from '../algebra/matrix.js';
+import { isPolynomial, type PolyLike } from '../algebra/polynomial.js';
 import { fail } from '../base/errors.js';
 import { isScalar } from '../numbers/rational.js';
 import { valueToText } from '../values/operations.js';
@@ -16,7 +16,7 @@ function matrixRows(rows: Value): unknown[][] {
   if (Array.isArray(rows))
     for (const row of rows)
       if (Array.isArray(row))
-        for (const x of row) if (!isScalar(x)) fail(`a matrix entry must be a number, not ${valueToText(x)}`);
+        for (const x of row) if (!isScalar(x) && !isPolynomial(x)) fail(`a matrix entry must be a number or a polynomial, not ${valueToText(x)}`);
   return rows as unknown[][];
 }
 
@@ -27,7 +27,7 @@ defineFunction({
   topic,
   params: [{ name: 'rows', type: 'list' }],
   returns: 'matrix',
-  description: 'the matrix with these rows (lists of equal length of exact numbers)',
+  description: 'the matrix with these rows (lists of equal length of exact numbers or polynomials)',
   example: 'matrix([[1, 2], [3, 4]])',
   exampleValue: 'matrix([[1, 2], [3, 4]])',
   source: 'definition',
@@ -38,12 +38,12 @@ defineFunction({
   name: 'det',
   topic,
   params: [{ name: 'M', type: 'matrix' }],
-  returns: 'number',
-  description: 'the determinant of a square matrix, exactly (fraction-free Bareiss elimination)',
+  returns: 'scalarOrPolynomial',
+  description: 'the determinant of a square matrix, exactly (fraction-free Bareiss elimination for numbers, expansion along rows for polynomial entries)',
   example: 'det(matrix([[2, 1, 0], [1, 2, 1], [0, 1, 2]]))',
   exampleValue: '4',
   source: 'E. H. Bareiss, Sylvester\'s identity and multistep integer-preserving Gaussian elimination, Math. Comp. 22 (1968); tested on Hilbert (OEIS A005249) and Vandermonde matrices',
-  impl: (m) => determinant(m as Matrix),
+  impl: (m) => matrixDeterminant(m as Matrix),
 });
 
 defineFunction({

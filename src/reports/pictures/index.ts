@@ -8,6 +8,7 @@ import type { Value } from '../../values/value.js';
 import { drawDyckPath } from './dyckPath.js';
 import { glyphsFor, type Glyphs } from './glyphs.js';
 import { drawAsm, drawMatrix } from './grids.js';
+import { drawIdeal } from './ideal.js';
 import { sideBySide, width } from './layout.js';
 import { drawMatching } from './matching.js';
 import { drawPermutation } from './permutation.js';
@@ -17,6 +18,7 @@ import { drawSignedPermutation } from './signedPermutation.js';
 import { drawMotzkinPath } from './motzkinPath.js';
 import { drawParkingFunction } from './parkingFunction.js';
 import { drawSubset, drawWord } from './strips.js';
+import { drawSymmetric } from './symmetric.js';
 import { drawComposition, drawPartition, drawTableau } from './youngDiagrams.js';
 
 export interface PictureOptions {
@@ -91,6 +93,10 @@ function draw(v: Value, g: Glyphs): string | null {
       return drawPipeDream(o.crosses, g, typeof o.n === 'number' ? o.n : 0); // crosses: [row, column][]
     case 'matrix':
       return drawMatrix(o.rows, o.cols, o.entries, g); // rows, cols: numbers; entries: row-major scalars (partialPermutations are matrices)
+    case 'ideal':
+      return drawIdeal(o.gens, o.ring.length, o.prime, () => o.leadingTerms(), g); // gens, ring (ids), prime, leadingTerms()
+    case 'symmetric':
+      return drawSymmetric(o.terms, g); // terms: { parts, coef }[] in the Schur basis
     default:
       return null;
   }
