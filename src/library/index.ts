@@ -31,3 +31,5 @@ import './signedPermutations.js';
 import './paths.js';
 import './symmetricPolynomialBases.js';
 import './schubertCombinatorics.js';
+import './insertion.js';
+import './quasisymmetric.js';
