@@ -13,6 +13,7 @@ import { guessConjectureFile, type GuessOrigin } from '../../reports/guess-conje
 import { formatGuesses, guessReportJson } from '../../reports/guesses.js';
 import { scalarColumn, tabulate } from '../../reports/tabulate.js';
 import { EXIT } from '../errors.js';
+import { encodeValue } from '../../values/operations.js';
 import { collect, parseLetOption, parseRangeOption } from '../options.js';
 import type { AddCommand } from './index.js';
 
@@ -113,7 +114,8 @@ export const addGuessCommand: AddCommand = (program, t, setExit) => {
         written = { file: flags.write, ids: picks.map((k) => `${prefix}-${k}`), to: origin.expr !== undefined ? to : origin.hi };
       }
       if (flags.json) {
-        t.out(JSON.stringify({ ...(origin.expr !== undefined ? { expr: origin.expr, over: origin.variable } : {}), ...guessReportJson(report), ...(written ? { written } : {}) }, null, 2) + '\n');
+        const head = origin.expr !== undefined ? { expr: origin.expr, over: origin.variable, ...(origin.divisor !== undefined ? { divideBy: origin.divisor } : {}) } : {};
+        t.out(JSON.stringify({ ...head, values: terms.map((x) => encodeValue(x)), ...guessReportJson(report), ...(written ? { written } : {}) }, null, 2) + '\n');
       } else {
         const divisor = origin.divisor !== undefined ? `, c(${origin.variable}) = ${origin.divisor}` : '';
         const header = origin.expr !== undefined ? `a(${origin.variable}) = ${origin.expr}${divisor}, ${origin.variable} = ${origin.lo}..${origin.hi}` : 'the terms given';
