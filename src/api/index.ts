@@ -20,7 +20,7 @@ import { agreesWithExpectation, type ConjectureResult } from '../runner/result.j
 import { formatResult } from '../reports/human.js';
 import { readRegressionCase } from '../records/counterexample-file.js';
 import { LedgerWriter } from '../records/ledger.js';
-import { openProject, type Project } from '../records/open-project.js';
+import { explainSkippedPlugins, openProject, type Project } from '../records/open-project.js';
 import { TOOL_VERSION } from '../version.js';
 
 export type { CompiledConjecture, ConjectureSpec, ConjectureResult, CheckOptions, Project };
@@ -34,6 +34,8 @@ export const version = TOOL_VERSION;
 export interface LoadOptions {
   /** Only these ids. */
   ids?: string[];
+  /** Run the project's plugins even when the project is not on the user's allow list (`hunch trust`). */
+  allowPlugins?: boolean;
 }
 
 /** A loaded conjecture: the spec as written and its compiled form, ready to check. */
@@ -50,10 +52,16 @@ export interface Conjecture {
  */
 export async function load(paths: string | string[], opts: LoadOptions = {}): Promise<Conjecture[]> {
   const list = typeof paths === 'string' ? [paths] : paths;
-  const project = await openProject(list[0] ?? process.cwd());
+  const project = await openProject(list[0] ?? process.cwd(), { allowPlugins: opts.allowPlugins });
   let specs = loadConjectures(list.length ? list : project.config.conjectures);
   if (opts.ids) specs = specs.filter((s) => opts.ids!.includes(s.id));
-  return specs.map((spec) => ({ id: spec.id, spec, compiled: compileConjecture(spec), project }));
+  return specs.map((spec) => {
+    try {
+      return { id: spec.id, spec, compiled: compileConjecture(spec), project };
+    } catch (e) {
+      throw explainSkippedPlugins(e, project);
+    }
+  });
 }
 
 export interface ApiCheckOptions extends CheckOptions {
@@ -104,6 +112,8 @@ export interface TestFunctions {
 export interface ConjectureTestOptions extends ApiCheckOptions {
   /** Per-test timeout in ms (default 60 s). */
   timeout?: number;
+  /** Run the project's plugins even when the project is not on the user's allow list (`hunch trust`). */
+  allowPlugins?: boolean;
 }
 
 function globalTestFunctions(): TestFunctions | null {
@@ -131,12 +141,13 @@ export function defineConjectureTests(pathOrFolder: string, fns?: TestFunctions,
       t.test(
         spec.id,
         async () => {
-          project ??= openProject(pathOrFolder);
+          project ??= openProject(pathOrFolder, { allowPlugins: options.allowPlugins });
           const p = await project;
           let compiled: CompiledConjecture;
           try {
             compiled = compileConjecture(spec);
-          } catch (e) {
+          } catch (err) {
+            const e = explainSkippedPlugins(err, p);
             if (!(e instanceof InputError)) throw e;
             const at = e.pos ? `${e.pos.file}:${e.pos.line}:${e.pos.column}: ` : '';
             throw new Error(`${at}${e.message}${e.snippet && !e.message.includes(e.snippet) ? `\n    ${e.snippet}` : ''}`);
@@ -158,3 +169,6 @@ export class ConjectureTestFailure extends Error {
     this.name = 'ConjectureTestFailure';
   }
 }
+export { guessExpression, guessTerms, type GuessResult } from './guess.js';
+export { guessSequence } from '../algebra/guessing/index.js';
+export type { Guess, GuessReport, Evidence as GuessEvidence, Attempt as GuessAttempt } from '../algebra/guessing/index.js';

@@ -3,8 +3,9 @@
 // starts with the next most common case (scalars) and ends with a type error that names both
 // operands' types.
 //
-//   + - * /   numbers, polynomials (a constant result is a number), matrices (+ - *, scalar * M),
-//             symmetric functions (a ring over numbers and polynomials; / by a number or polynomial)
+//   + - * /   numbers, polynomials (a constant result is a number), matrices of numbers or
+//             polynomials (+ - *, c * M for a number or polynomial c), symmetric functions (a ring
+//             over numbers and polynomials; / by a number or polynomial)
 //   *         on permutations composes: (u*v)[i] == u[v[i]]
 //   ^         integer exponent; w^-1 is the inverse of a permutation; p^k needs k >= 0
 //   == !=     structural (values/operations.ts valueEquals)
@@ -66,8 +67,8 @@ export function mul(a: Value, b: Value): Value {
   if (a instanceof Permutation && b instanceof Permutation) return compose(a, b);
   if (isMatrixValue(a)) {
     if (isMatrixValue(b)) return matrixMul(a, b);
-    if (isScalar(b)) return matrixScale(b, a);
-  } else if (isMatrixValue(b) && isScalar(a)) return matrixScale(a, b);
+    if (isPolyLike(b)) return matrixScale(b, a);
+  } else if (isMatrixValue(b) && isPolyLike(a)) return matrixScale(a, b);
   if (isSymLike(a) && isSymLike(b)) return symMul(a, b);
   return typeError('*', a, b);
 }

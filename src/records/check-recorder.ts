@@ -4,7 +4,8 @@
 
 import type { CompiledConjecture } from '../language/conjecture/compiled.js';
 import type { CheckedPiece, ConjectureResult } from '../runner/result.js';
-import { readRegressionEncoded, writeCounterexampleFile } from './counterexample-file.js';
+import { counterexamplePath, readRegressionEncoded, writeCounterexampleFile } from './counterexample-file.js';
+import { checkWritablePath } from './atomic-write.js';
 import { writeJUnitReport } from './junit.js';
 import { LedgerWriter } from './ledger.js';
 import type { Project } from './open-project.js';
@@ -34,7 +35,12 @@ export interface RecorderOptions {
 export function createCheckRecorder(project: Project, compiled: CompiledConjecture[], opts: RecorderOptions): CheckRecorder {
   const byId = new Map(compiled.map((cc) => [cc.spec.id, cc]));
   const ledgerPath = opts.ledger === false ? null : typeof opts.ledger === 'string' ? opts.ledger : project.config.ledger;
-  const writer = ledgerPath ? new LedgerWriter(ledgerPath) : null;
+  // The project's ledger must really lie inside the project; one the user named on the command line may lie anywhere.
+  const writer = ledgerPath ? new LedgerWriter(ledgerPath, undefined, typeof opts.ledger === 'string' ? undefined : project.root) : null;
+  // A counterexample file that would be written through a link or outside the project.
+  if (opts.counterexamples !== false)
+    for (const cc of compiled) checkWritablePath(counterexamplePath(project.root, cc.spec.id), { within: project.root, what: 'the counterexample file' });
+  writer?.open(); // a ledger that cannot be written is reported before any work is done
   const warnings: string[] = [];
   return {
     warnings,
@@ -70,5 +76,5 @@ export function createCheckRecorder(project: Project, compiled: CompiledConjectu
 /** A project opened without its plugins (for callers that cannot wait; plugins need openProject). */
 export function projectWithoutPlugins(start: string): Project {
   const root = findProjectRoot(start);
-  return { root, config: readProjectConfig(root), plugins: [] };
+  return { root, config: readProjectConfig(root), plugins: [], skipped: null };
 }

@@ -7,6 +7,7 @@ import { readFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { Document, isMap, isScalar, isSeq, parseAllDocuments, stringify, visit } from 'yaml';
 import { InputError } from '../base/errors.js';
+import { escapeControl } from '../base/escape.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
 import type { ConjectureResult, Counterexample } from '../runner/result.js';
 import { decodeValue } from '../values/decode.js';
@@ -118,7 +119,8 @@ function header(f: CounterexampleFile, texts: Record<string, string>): string {
     `    ${f.replay}`,
     ...(f.plugins.length ? ['', `It uses functions from plugins: ${f.plugins.map((p) => `${p.file} (${p.functions.join(', ')})`).join('; ')}.`] : []),
   ];
-  return lines.map((l) => (l ? `# ${l}` : '#')).join('\n') + '\n';
+  // Every header line is one comment line: text from input (the statement) keeps no newline or control byte.
+  return lines.map((l) => (l ? `# ${escapeControl(l, true)}` : '#')).join('\n') + '\n';
 }
 
 function sizeText(size: Record<string, number>): string {
@@ -209,7 +211,7 @@ export function writeCounterexampleFile(
       // unreadable: rewrite it below
     }
   }
-  writeFileAtomic(path, counterexampleText(counterexampleRecord(spec, result.hash, cx, shown, plugins), cx.text));
+  writeFileAtomic(path, counterexampleText(counterexampleRecord(spec, result.hash, cx, shown, plugins), cx.text), { within: root, what: 'the counterexample file' });
   return shown;
 }
 

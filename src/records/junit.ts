@@ -6,11 +6,12 @@ import { agreesWithExpectation } from '../runner/result.js';
 import { decodeValue } from '../values/decode.js';
 import { valueToText } from '../values/operations.js';
 import { writeFileAtomic } from './atomic-write.js';
+import { escapeControl } from '../base/escape.js';
 import { groupDigits } from './coverage.js';
 
-/** Escape text for XML content and attributes; characters XML 1.0 cannot hold are dropped. */
+/** Escape text for XML content and attributes; control characters are shown as \xNN, others XML 1.0 cannot hold are dropped. */
 export function xmlEscape(s: string): string {
-  return s
+  return escapeControl(s)
     .replace(/[^\x09\x0a\x0d\x20-\ud7ff\ue000-\ufffd\u{10000}-\u{10ffff}]/gu, '')
     .replace(/&/g, '&amp;')
     .replace(/</g, '&lt;')
@@ -90,5 +91,5 @@ export function junitXml(results: readonly ConjectureResult[]): string {
 }
 
 export function writeJUnitReport(path: string, results: readonly ConjectureResult[]): void {
-  writeFileAtomic(path, junitXml(results));
+  writeFileAtomic(path, junitXml(results), { what: 'the JUnit report', makeFolder: false });
 }

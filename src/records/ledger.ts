@@ -7,7 +7,8 @@
 // killed between records leaves only whole lines; a torn line (a crash inside the kernel write, a
 // full disk, a network filesystem) is recognised when reading, reported and ignored.
 
-import { closeSync, fstatSync, openSync, readFileSync, readSync, writeSync } from 'node:fs';
+import { closeSync, constants, fstatSync, openSync, readFileSync, readSync, writeSync } from 'node:fs';
+import { checkWritablePath } from './atomic-write.js';
 import { hostname } from 'node:os';
 import { randomBytes } from 'node:crypto';
 import { InputError } from '../base/errors.js';
@@ -120,16 +121,31 @@ export class LedgerWriter {
   constructor(
     readonly path: string,
     ctx?: RunContext,
+    /** The project root the ledger must lie in (links resolved), when it comes from hunch.yaml. */
+    readonly within?: string,
   ) {
     this.ctx = ctx ?? newRunContext();
   }
 
-  private open(): number {
+  /**
+   * Open (creating) the ledger now, so that a ledger hunch cannot write is reported before any work
+   * is done. A link is never followed: the ledger is appended to only as the file it names.
+   */
+  open(): number {
     if (this.fd !== null) return this.fd;
+    checkWritablePath(this.path, { within: this.within, what: 'the ledger' });
     try {
-      this.fd = openSync(this.path, 'a+'); // O_APPEND | O_CREAT, readable for the tail check below
+      // O_APPEND | O_CREAT, readable for the tail check below; O_NOFOLLOW: a link is refused.
+      this.fd = openSync(this.path, constants.O_APPEND | constants.O_CREAT | constants.O_RDWR | constants.O_NOFOLLOW, 0o644);
     } catch (e) {
-      throw new InputError(`cannot open the ledger ${this.path} for writing: ${(e as Error).message}`);
+      const code = (e as NodeJS.ErrnoException).code;
+      const why = code === 'ELOOP' ? 'it is a symbolic link, and hunch never writes through a link' : code === 'EISDIR' ? 'it is a folder' : (e as Error).message;
+      throw new InputError(`cannot open the ledger ${this.path} for writing: ${why}`);
+    }
+    if (!fstatSync(this.fd).isFile()) {
+      closeSync(this.fd);
+      this.fd = null;
+      throw new InputError(`cannot use ${this.path} as the ledger: it is not a regular file`);
     }
     return this.fd;
   }

@@ -98,7 +98,7 @@ export function mergeLedgers(paths: readonly string[], out: string | null): Merg
     return c.records;
   });
   const { records, duplicates } = mergeRecords(lists);
-  if (out) writeFileAtomic(out, records.map((r) => recordLine(r) + '\n').join(''));
+  if (out) writeFileAtomic(out, records.map((r) => recordLine(r) + '\n').join(''), { what: 'the merged ledger' });
   return { records, inputs: inputs.map((p, i) => ({ path: p, records: lists[i].length })), duplicates, coverage: coverageOf(records), warnings };
 }
 

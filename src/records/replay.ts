@@ -11,13 +11,16 @@ import { loadConjectures } from '../language/conjecture/project.js';
 import { getFunction } from '../library/registry.js';
 import { bindingTexts, explainCase, frameFor } from '../runner/case-report.js';
 import { evaluateCase, SKIPPED } from '../runner/evaluate-case.js';
+import { notACaseReason } from '../runner/case-validity.js';
+import { sampleSettingsOf } from '../runner/check.js';
 import { decodeValue } from '../values/decode.js';
 import { canonicalForm, conjectureHash } from './hash.js';
 import { conjectureText, readCounterexampleFile, type CounterexampleFile, type PluginNeed } from './counterexample-file.js';
 import { pluginHashes } from './plugins.js';
 import type { Project } from './open-project.js';
 
-export type ReplayVerdict = 'refutes' | 'holds' | 'excluded' | 'error' | 'needs-plugins';
+/** 'not-a-case': the bindings are not a case of the conjecture (not in their families or ranges, or excluded by where). */
+export type ReplayVerdict = 'refutes' | 'holds' | 'not-a-case' | 'error' | 'needs-plugins';
 
 export interface ReplayResult {
   file: CounterexampleFile;
@@ -26,7 +29,7 @@ export interface ReplayResult {
   bindings: Record<string, string>;
   values: Record<string, unknown>;
   sides: [unknown, unknown] | null;
-  /** When the verdict is 'error'. */
+  /** When the verdict is 'error' or 'not-a-case': why. */
   error: string | null;
   /** Plugins the file needs that the local project does not provide. */
   missingPlugins: PluginNeed[];
@@ -111,9 +114,12 @@ export function replayCounterexample(path: string, project: Project | null): Rep
   }
   const frame = frameFor(cc, vals);
   base.bindings = bindingTexts(cc, frame);
+  // The file's case is believed only once it is shown to be a case of the conjecture.
+  const why = notACaseReason(cc, vals, sampleSettingsOf(cc, {}).ranges);
+  if (why) return { ...base, verdict: 'not-a-case', error: why };
   try {
     const r = evaluateCase(cc, frame);
-    if (r === SKIPPED) return { ...base, verdict: 'excluded' };
+    if (r === SKIPPED) return { ...base, verdict: 'not-a-case', error: '"where" excludes it' };
     const { values, sides } = explainCase(cc, frameFor(cc, vals));
     return { ...base, values, sides, verdict: r === 0 ? 'refutes' : 'holds' };
   } catch (e) {

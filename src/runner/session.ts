@@ -27,6 +27,8 @@ export interface RunRequest {
   budgetMs: number | null;
   /** The project root: a worker thread opens the project there (plugins, the canonical hash). */
   root: string | null;
+  /** The plugin files the main thread was allowed to load (path, sha256); a worker loads exactly these. */
+  plugins?: Array<{ path: string; sha256: string }>;
   /** Encoded regression cases by conjecture id (from counterexample files). */
   regression: Record<string, unknown[]>;
   /** --shard I/K (absent or null: the whole). */

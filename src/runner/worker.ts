@@ -23,7 +23,7 @@ const { request, flag } = workerData as { request: RunRequest; flag: Int32Array 
 const post = (m: WorkerMessage) => parentPort!.postMessage(m);
 
 try {
-  if (request.root) await openProjectAt(request.root);
+  if (request.root) await openProjectAt(request.root, request.plugins ?? []);
   const compiled = prepareRun(request);
   let lastProgress = 0;
   // A long exact solve inside one case (a stationary measure) reports how far it has got.

@@ -35,9 +35,9 @@ describe('the bundled notebook', () => {
 
   test('the plugin example works, and editing the plugin makes its conjectures stale', () => {
     const dir = copyNotebook();
-    const r = runCli(['check', 'conjectures/alternating-runs.yaml'], { cwd: dir });
+    const r = runCli(['check', 'conjectures/alternating-runs.yaml', '--allow-plugins'], { cwd: dir });
     expect(r.code, r.stderr + r.stdout).toBe(0);
-    let st = runCli(['status', '--json'], { cwd: dir });
+    let st = runCli(['status', '--json', '--allow-plugins'], { cwd: dir });
     expect(st.code, st.stderr).toBe(0);
     expect(st.stdout).toContain('alternating-runs-reverse');
     const before = JSON.parse(st.stdout);
@@ -45,14 +45,14 @@ describe('the bundled notebook', () => {
     expect(JSON.stringify(entry(before) ?? before)).not.toMatch(/"stale":\s*[1-9]/);
 
     appendFileSync(join(dir, 'conjectures', 'plugins', 'runs.mjs'), '\n// an edit\n');
-    st = runCli(['status'], { cwd: dir });
+    st = runCli(['status', '--allow-plugins'], { cwd: dir });
     expect(st.code, st.stderr).toBe(0);
     expect(st.stdout + st.stderr).toMatch(/alternating-runs-reverse: \d+ stale records/);
   });
 
   test('the whole notebook comes out as its expectations say', () => {
     const dir = copyNotebook();
-    const r = runCli(['check', '--json'], { cwd: dir, timeout: 120_000 });
+    const r = runCli(['check', '--json', '--allow-plugins'], { cwd: dir, timeout: 120_000 });
     expect(r.code, r.stderr).toBe(0);
     const doc = JSON.parse(r.stdout);
     expect(doc.results.length).toBeGreaterThanOrEqual(10);
@@ -62,5 +62,5 @@ describe('the bundled notebook', () => {
     }
     expect(doc.results.some((x: any) => x.expect === 'fails')).toBe(true);
     expect(doc.results.some((x: any) => x.expect === 'holds')).toBe(true);
-  });
+  }, 120_000);
 });

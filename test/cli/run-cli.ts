@@ -1,7 +1,7 @@
 // Running the built command line (dist/, made by `npm test`'s tsc step) as a user would.
 
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 
@@ -14,11 +14,17 @@ export interface CliResult {
   stderr: string;
 }
 
+// The per-user allow list of trusted projects (hunch trust) lives in a temporary folder for the
+// tests, never in the real home; it is removed when the test process exits.
+export const TEST_CONFIG_DIR = mkdtempSync(join(tmpdir(), 'hunch-config-'));
+process.env.HUNCH_CONFIG_DIR = TEST_CONFIG_DIR; // in-process code of the tests too
+process.on('exit', () => rmSync(TEST_CONFIG_DIR, { recursive: true, force: true }));
+
 export function runCli(args: string[], opts: { cwd?: string; env?: Record<string, string>; timeout?: number } = {}): CliResult {
   const r = spawnSync(process.execPath, [BIN, ...args], {
     cwd: opts.cwd ?? ROOT,
     encoding: 'utf8',
-    env: { ...process.env, NO_COLOR: '1', ...opts.env },
+    env: { ...process.env, NO_COLOR: '1', HUNCH_CONFIG_DIR: TEST_CONFIG_DIR, ...opts.env },
     timeout: opts.timeout ?? 60_000,
   });
   return { code: r.status, stdout: r.stdout, stderr: r.stderr };

@@ -58,22 +58,22 @@ describe('project config', () => {
 describe('plugins', () => {
   test('a plugin registers its functions; its file hash enters only the conjectures that use it, and editing it makes them stale', async () => {
     const d = project();
-    const cs = await load(join(d, 'conjectures'));
+    const cs = await load(join(d, 'conjectures'), { allowPlugins: true });
     expect(getFunction('twiceOf')?.topic).toBe('plugins');
     expect(pluginHashes().twiceOf).toMatch(/^[0-9a-f]{64}$/);
     for (const c of cs) expect(check(c, { ledger: true }).outcome).toBe('holds');
 
-    const before = JSON.parse(runCli(['status', '--json'], { cwd: d }).stdout);
+    const before = JSON.parse(runCli(['status', '--json', '--allow-plugins'], { cwd: d }).stdout);
     expect(before.conjectures.map((c: any) => c.exhaustive.length)).toEqual([5, 5]);
 
     writeFileSync(join(d, 'plugins', 'twice.mjs'), PLUGIN('// a comment changes the file'));
-    const after = JSON.parse(runCli(['status', '--json'], { cwd: d }).stdout);
+    const after = JSON.parse(runCli(['status', '--json', '--allow-plugins'], { cwd: d }).stdout);
     const [uses, not] = after.conjectures;
     expect(uses.exhaustive).toEqual([]);
     expect(uses.stale.records).toBe(5);
     expect(not.exhaustive).toHaveLength(5);
     expect(not.stale).toBeNull();
-  });
+  }, 60_000);
 
   test('bad plugins are clear errors', async () => {
     const d = mkdtempSync(join(tmpdir(), 'hunch-plugin-'));

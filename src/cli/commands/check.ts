@@ -13,12 +13,13 @@ import { heldRecordsForResume, shardFlag } from './check-parallel-flags.js';
 import { formatResult, formatSummary } from '../../reports/human.js';
 import { resultDocument } from '../../reports/json.js';
 import { ProgressLine } from '../../reports/progress.js';
-import { EXIT } from '../errors.js';
+import { EXIT, formatError } from '../errors.js';
 import { collect, parseCount, parseDuration, parseRangeOption } from '../options.js';
 import type { Terminal } from '../terminal.js';
 import type { AddCommand } from './index.js';
 import { createCheckRecorder, type CheckRecorder } from '../../records/check-recorder.js';
-import { openProject } from '../../records/open-project.js';
+import { approvedPlugins, explainSkippedPlugins } from '../../records/open-project.js';
+import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
 
 interface CheckFlags {
   sizes?: string[];
@@ -35,6 +36,7 @@ interface CheckFlags {
   junit?: string;
   ascii?: boolean;
   resume?: boolean;
+  allowPlugins?: boolean;
 }
 
 export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
@@ -57,6 +59,7 @@ export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
     .option('--junit <FILE>', 'also write a JUnit XML report')
     .option('--id <ID>', 'only the conjecture with this id (repeatable)', collect)
     .option('--ascii', 'plain ASCII pictures')
+    .option('--allow-plugins', ALLOW_PLUGINS_HELP)
     .action(async (paths: string[], flags: CheckFlags) => setExit(await runCheck(paths, flags, t)));
 };
 
@@ -93,10 +96,16 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   // The project (hunch.yaml, its plugins, the canonical hash) is opened in this thread and again in
   // the worker. Everything is loaded and validated here first: a bad file exits 2 before anything
   // is recorded.
-  const project = await openProject(req.paths[0]);
+  const project = await openCommandProject(t, req.paths[0], { allowPlugins: flags.allowPlugins, quiet: flags.json });
   req.root = project.root;
+  req.plugins = approvedPlugins(project);
   if (req.paths.length === 0) req.paths = project.config.conjectures;
-  const compiled = prepareRun(req);
+  let compiled;
+  try {
+    compiled = prepareRun(req);
+  } catch (e) {
+    throw explainSkippedPlugins(e, project);
+  }
   const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger });
   req.regression = recorder.regressionCases(compiled);
   if (flags.resume) req.resume = heldRecordsForResume(flags.ledger, project.config.ledger, compiled);
@@ -109,12 +118,25 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   let interrupts = 0;
 
   // One worker (--workers 1) or a pool sharing every size; either way off this thread.
+  // A record that cannot be written (a full disk, a file size limit) stops the run: what was
+  // recorded before stays, and the command ends with the reason (exit 2), never a crash.
+  let recordFailure: unknown = null;
+  const recording = <T>(f: () => T): T | null => {
+    if (recordFailure) return null;
+    try {
+      return f();
+    } catch (e) {
+      recordFailure = e;
+      Atomics.store(flag, 0, 1);
+      return null;
+    }
+  };
   const run = startCheckRun(compiled, req, workers, flag, {
     onProgress: (done, total, label) => progress.update(done, total, label),
-    onPiece: (id, piece) => recorder.piece(id, piece),
+    onPiece: (id, piece) => void recording(() => recorder.piece(id, piece)),
     onResult: (r) => {
       results.push(r);
-      const replay = recorder.result(r);
+      const replay = recording(() => recorder.result(r));
       progress.clear();
       if (!flags.json) t.out(formatResult(r, style, replay));
     },
@@ -137,6 +159,12 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
 
   if (crash) {
     t.err(`${t.color.red('internal error:')} ${crash}\nThis is a bug in hunch; finished work was recorded.\n`);
+    return EXIT.invalid;
+  }
+  if (recordFailure) {
+    recorder.close();
+    t.err(formatError(t, recordFailure));
+    t.err('Stopped: the records above could not be written; what was recorded before is kept.\n');
     return EXIT.invalid;
   }
   const interrupted = interrupts > 0;

@@ -6,7 +6,8 @@ import { evaluate } from '../../language/expr/index.js';
 import { drawValue } from '../../reports/pictures/index.js';
 import { encodeValue, valueToText } from '../../values/operations.js';
 import { EXIT } from '../errors.js';
-import { openProject } from '../../records/open-project.js';
+import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
+import { explainSkippedPlugins } from '../../records/open-project.js';
 import { collect, parseLetOption } from '../options.js';
 import type { AddCommand } from './index.js';
 
@@ -19,11 +20,17 @@ export const addEvalCommand: AddCommand = (program, t, setExit) => {
     .option('--indeterminates <NAMES>', 'polynomial variables, comma-separated (e.g. q,x)')
     .option('--json', 'print the value in the record encoding')
     .option('--ascii', 'plain ASCII pictures')
-    .action(async (expr: string, flags: { let?: string[]; indeterminates?: string; json?: boolean }) => {
-      await openProject(); // the project's plugins are part of the language
+    .option('--allow-plugins', ALLOW_PLUGINS_HELP)
+    .action(async (expr: string, flags: { let?: string[]; indeterminates?: string; json?: boolean; allowPlugins?: boolean }) => {
+      const project = await openCommandProject(t, undefined, { allowPlugins: flags.allowPlugins }); // plugins are part of the language
       const lets: Array<[string, string]> = (flags.let ?? []).map(parseLetOption);
       const vars = flags.indeterminates ? flags.indeterminates.split(',').map((s) => s.trim()).filter(Boolean) : [];
-      const v = evaluate(expr, lets, vars);
+      let v;
+      try {
+        v = evaluate(expr, lets, vars);
+      } catch (e) {
+        throw explainSkippedPlugins(e, project);
+      }
       if (flags.json) t.out(JSON.stringify(encodeValue(v)) + '\n');
       else {
         t.out(valueToText(v) + '\n');

@@ -9,7 +9,7 @@ import { allFunctions, signatureOf } from '../../library/registry.js';
 import { EXIT } from '../errors.js';
 import type { AddCommand } from './index.js';
 import { REDUCERS } from '../../language/expr/index.js';
-import { openProject } from '../../records/open-project.js';
+import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
 
 export const addListCommand: AddCommand = (program, t, setExit) => {
   program
@@ -17,8 +17,9 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
     .description('list the built-in families and functions with their signatures and sources')
     .argument('[what]', 'families, functions, a topic (permutations, polynomials, ...) or a name')
     .option('--json', 'as JSON')
-    .action(async (what: string | undefined, flags: { json?: boolean }) => {
-      await openProject(); // the project's plugins are listed too
+    .option('--allow-plugins', ALLOW_PLUGINS_HELP)
+    .action(async (what: string | undefined, flags: { json?: boolean; allowPlugins?: boolean }) => {
+      await openCommandProject(t, undefined, { allowPlugins: flags.allowPlugins }); // the project's plugins are listed too
       const fams = allFamilies();
       const fns = allFunctions();
       const topics = [...new Set(fns.map((f) => f.topic))].sort();
@@ -63,7 +64,7 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
       if (showForms) {
         t.out(c.bold('Language forms') + ' (comprehensions; each also reduces a plain list: sum([1,2,3]))\n');
         t.out(`  ${REDUCERS.join(', ')}\n`);
-        t.out('    e.g. sum(i in 1..n: i^2), count(w in permutations(n) where des(w) == 1), all(x in L: x > 0)\n\n');
+        t.out('    e.g. sum(i^2 for i in 1..n), count(w in permutations(n) where des(w) == 1), all(x > 0 for x in L)\n\n');
       }
       if (selF.length) {
         t.out(c.bold('Families') + '\n');

@@ -7,7 +7,7 @@ import '../../families/index.js';
 import '../../library/index.js';
 import { decodeValue } from '../../values/decode.js';
 import { valueToText } from '../../values/operations.js';
-import { openProject } from '../../records/open-project.js';
+import { openCommandProject } from '../project.js';
 import { replayCounterexample } from '../../records/replay.js';
 import { EXIT } from '../errors.js';
 import type { AddCommand } from './index.js';
@@ -26,13 +26,14 @@ export const addReplayCommand: AddCommand = (program, t, setExit) => {
     .description('re-evaluate a counterexample file: exit 0 if it still refutes its conjecture, 1 if not')
     .argument('<file>', 'a counterexample file (counterexamples/<id>.yaml)')
     .option('--json', 'print the replay as JSON')
-    .action(async (file: string, flags: { json?: boolean }) => {
+    .option('--allow-plugins', "load the local project's plugins (replay never runs code otherwise)")
+    .action(async (file: string, flags: { json?: boolean; allowPlugins?: boolean }) => {
       const c = t.color;
       // The local project: the one holding the file, else the current folder's. Only its own
       // hunch.yaml can bring plugins in.
-      const project = await openProject(dirname(file));
+      const project = await openCommandProject(t, dirname(file), { plugins: false, allowPlugins: flags.allowPlugins, quiet: true });
       const r = replayCounterexample(file, project);
-      const code = r.verdict === 'refutes' ? EXIT.ok : r.verdict === 'needs-plugins' ? EXIT.invalid : EXIT.contradicted;
+      const code = r.verdict === 'refutes' ? EXIT.ok : r.verdict === 'needs-plugins' || r.verdict === 'not-a-case' ? EXIT.invalid : EXIT.contradicted;
       if (flags.json) {
         t.out(JSON.stringify({ ...r, file: undefined, conjecture: r.file.conjecture, hash: r.file.hash }, null, 2) + '\n');
         setExit(code);
@@ -43,8 +44,11 @@ export const addReplayCommand: AddCommand = (program, t, setExit) => {
         t.err(
           `${c.red('error:')} ${file} uses functions from plugins this project does not load, so it was not run:\n` +
             r.missingPlugins.map((p) => `    ${p.file} (sha256 ${p.sha256.slice(0, 12)}…): ${p.functions.join(', ')}\n`).join('') +
-            'Plugins are code and are loaded only from your own hunch.yaml: if you trust them, get the plugin files from\n' +
-            'whoever sent this file, list them under "plugins:" in hunch.yaml, and replay again.\n',
+            (project.skipped
+              ? `The project's plugins (${project.skipped.files.join(', ')}) were not loaded: replay runs no code unless given --allow-plugins.\n` +
+                'If you trust them, replay again with --allow-plugins.\n'
+              : 'Plugins are code and are loaded only from your own hunch.yaml: if you trust them, get the plugin files from\n' +
+                'whoever sent this file, list them under "plugins:" in hunch.yaml, and replay with --allow-plugins.\n'),
         );
         setExit(code);
         return;
@@ -68,8 +72,8 @@ export const addReplayCommand: AddCommand = (program, t, setExit) => {
         case 'holds':
           t.out(`${c.red('no longer refutes')} ${id}: the claim holds for this case\n${caseText}\n`);
           break;
-        case 'excluded':
-          t.out(`${c.red('no longer refutes')} ${id}: "where" now excludes this case\n${caseText}\n`);
+        case 'not-a-case':
+          t.err(`${c.red('error:')} ${file}: not a case of this conjecture (${r.error}), so it refutes nothing\n${caseText}\n`);
           break;
         case 'error':
           t.out(`${c.red('no longer refutes')} ${id}: the case cannot be evaluated: ${r.error}\n${caseText}\n`);

@@ -65,7 +65,7 @@ export const addSlurmCommand: AddCommand = (program, t, setExit) => {
       for (const s of f.sample ?? []) parseRangeOption(s, '--sample');
       if (f.count !== undefined) parseCount(f.count, '--count');
 
-      const project = await openProject(paths[0]);
+      const project = await openProject(paths[0], { plugins: false }); // only the root and config are needed
       const absPaths = (paths.length ? paths.map((p) => resolve(p)) : project.config.conjectures);
       const opts: string[] = [];
       for (const id of f.id ?? []) opts.push('--id', q(id));

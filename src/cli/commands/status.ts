@@ -5,7 +5,7 @@ import '../../library/index.js';
 import { loadConjectures } from '../../language/conjecture/project.js';
 import { conjectureHash } from '../../records/hash.js';
 import { readLedger } from '../../records/ledger.js';
-import { openProject } from '../../records/open-project.js';
+import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
 import { pluginHashes } from '../../records/plugins.js';
 import { computeStatus, formatStatus } from '../../records/status.js';
 import { TOOL_VERSION } from '../../version.js';
@@ -15,6 +15,7 @@ import type { AddCommand } from './index.js';
 interface StatusFlags {
   json?: boolean;
   ledger?: string;
+  allowPlugins?: boolean;
 }
 
 export const addStatusCommand: AddCommand = (program, t, setExit) => {
@@ -24,8 +25,9 @@ export const addStatusCommand: AddCommand = (program, t, setExit) => {
     .argument('[paths...]', 'files or folders of conjectures (default: conjectures/)')
     .option('--json', 'print the status as JSON')
     .option('--ledger <PATH>', 'the ledger to read (default: hunch-ledger.jsonl in the project root)')
+    .option('--allow-plugins', ALLOW_PLUGINS_HELP)
     .action(async (paths: string[], flags: StatusFlags) => {
-      const project = await openProject(paths[0] ?? process.cwd());
+      const project = await openCommandProject(t, paths[0], { allowPlugins: flags.allowPlugins });
       const specs = loadConjectures(paths.length ? paths : project.config.conjectures);
       const hashes = pluginHashes();
       const infos = specs.map((s) => ({ id: s.id, file: s.file, expect: s.expect, hash: conjectureHash(s, { pluginHashes: hashes }) }));

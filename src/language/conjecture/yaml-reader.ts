@@ -42,7 +42,7 @@ export class YamlFile {
         const line = this.lineText(p.line);
         // The commonest slip: a comprehension's ": " inside a plain YAML value starts a mapping.
         const hint = /\(.*: .*\)/.test(line)
-          ? '. A ": " inside an expression starts a YAML mapping: put the expression in quotes (\'...\') or write it as a block (claim: >-, then the expression on the next line)'
+          ? '. A ": " inside an expression starts a YAML mapping: write the comprehension body first, sum(q^inv(w) for w in S), which needs no quotes, or put the expression in quotes (\'...\')'
           : '';
         throw new InputError(`YAML syntax: ${firstLine.replace(/ at line \d+, column \d+:?$/, '')}${hint}`, p, line);
       }

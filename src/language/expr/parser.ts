@@ -304,9 +304,15 @@ class Parser {
       const open = this.next();
       this.enter();
       const index = this.expr();
+      // A second index, z[i, j], names a doubly indexed indeterminate (the compiler checks).
+      let index2: Expr | undefined;
+      if (this.is(',')) {
+        this.next();
+        index2 = this.expr();
+      }
       this.depth--;
       const close = this.expect(']', 'to close the index', open);
-      e = this.node({ type: 'index', target: e, index, start: e.start, end: close.end });
+      e = this.node(index2 ? { type: 'index', target: e, index, index2, start: e.start, end: close.end } : { type: 'index', target: e, index, start: e.start, end: close.end });
     }
     return e;
   }
@@ -486,7 +492,7 @@ function children(e: Expr): Expr[] {
     case 'call':
       return e.args;
     case 'index':
-      return [e.target, e.index];
+      return e.index2 ? [e.target, e.index, e.index2] : [e.target, e.index];
     case 'comprehension': {
       const out: Expr[] = [];
       for (const g of e.generators) out.push(g.source, ...(g.where ? [g.where] : []));

@@ -72,7 +72,7 @@ function print(e: Expr, m: Mode): string {
     case 'call':
       return `${e.callee}(${e.args.map((x) => at(x, 1, m)).join(', ')})`;
     case 'index':
-      return `${at(e.target, 11, m)}[${at(e.index, 1, m)}]`;
+      return `${at(e.target, 11, m)}[${at(e.index, 1, m)}${e.index2 ? `, ${at(e.index2, 1, m)}` : ''}]`;
     case 'comprehension': {
       const gens = e.generators.map((g) => `${g.name} in ${at(g.source, 1, m)}${g.where ? ` where ${at(g.where, 1, m)}` : ''}`).join(', ');
       if (!e.body) return `${e.reducer}(${gens})`;

@@ -6,5 +6,5 @@ import type { RunRequest } from '../session.js';
 import { openProjectAt } from '../../records/open-project.js';
 
 export async function openProjectIfAsked(request: RunRequest): Promise<void> {
-  if (request.root) await openProjectAt(request.root);
+  if (request.root) await openProjectAt(request.root, request.plugins ?? []);
 }

@@ -48,8 +48,8 @@ describe('the worker pool', () => {
       return dir;
     };
     for (const paths of [['conjectures'], ['fixtures.yaml']]) {
-      const one = runCli(['check', ...paths, '--no-ledger', '--json', '--workers', '1'], { cwd: fresh() });
-      const two = runCli(['check', ...paths, '--no-ledger', '--json', '--workers', '2'], { cwd: fresh() });
+      const one = runCli(['check', ...paths, '--no-ledger', '--json', '--allow-plugins', '--workers', '1'], { cwd: fresh() });
+      const two = runCli(['check', ...paths, '--no-ledger', '--json', '--allow-plugins', '--workers', '2'], { cwd: fresh() });
       expect(one.code, one.stderr).toBe(two.code);
       expect(one.code === 0 || one.code === 1).toBe(true);
       expect(withoutTimes(two.stdout)).toBe(withoutTimes(one.stdout));
