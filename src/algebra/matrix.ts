@@ -8,8 +8,8 @@ import { fail } from '../base/errors.js';
 import { normBig } from '../numbers/integer.js';
 import { isScalar, parseScalar, Rat, type Scalar } from '../numbers/rational.js';
 import { sadd, sdiv, seq, sisZero, smul, sneg, ssub } from '../numbers/scalar.js';
-import { registerDecoder } from '../values/decode.js';
-import type { Structured } from '../values/structured.js';
+import { registerDecoder } from '../protocol/decode.js';
+import type { Structured } from '../protocol/structured.js';
 import { isPolynomial, padd, pmul, pneg, polyText, psub, type PolyLike } from './polynomial.js';
 import { parsePolynomialText } from './polynomialText.js';
 

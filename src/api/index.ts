@@ -27,7 +27,7 @@ import { TOOL_VERSION } from '../version.js';
 export type { CompiledConjecture, ConjectureSpec, ConjectureResult, CheckOptions, Project };
 export type { CheckedPiece, Counterexample, Expectation, Outcome } from '../runner/result.js';
 export { agreesWithExpectation } from '../runner/result.js';
-export { conjectureHash } from '../records/hash.js';
+export { conjectureHash } from '../language/conjecture/conjecture-hash.js';
 export { readLedger } from '../records/ledger.js';
 export { computeStatus } from '../records/status.js';
 export const version = TOOL_VERSION;

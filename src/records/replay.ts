@@ -14,7 +14,7 @@ import { evaluateCase, SKIPPED } from '../runner/evaluate-case.js';
 import { notACaseReason } from '../runner/case-validity.js';
 import { sampleSettingsOf } from '../runner/check-options.js';
 import { decodeValue } from '../values/decode.js';
-import { canonicalForm, conjectureHash } from './hash.js';
+import { canonicalForm, conjectureHash } from '../language/conjecture/conjecture-hash.js';
 import { conjectureText, readCounterexampleFile, type CounterexampleFile, type PluginNeed } from './counterexample-file.js';
 import { pluginHashes } from './plugins.js';
 import type { Project } from './open-project.js';

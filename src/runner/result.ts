@@ -1,7 +1,9 @@
 // The outcome of checking one conjecture, shaped like CLI.md's result document. Values inside are
 // already encoded (encodeValue), so a result can be printed, written to JSON or to the ledger as is.
 
-export type Expectation = 'holds' | 'fails' | 'open';
+import type { Expectation } from '../language/conjecture/conjecture.js';
+
+export type { Expectation };
 export type Outcome = 'holds' | 'fails' | 'error' | 'incomplete';
 export type Phase = 'exhaustive' | 'sample' | 'regression';
 

@@ -12,8 +12,8 @@
 import { fail } from '../../base/errors.js';
 import { isScalar, type Scalar } from '../../numbers/rational.js';
 import { sisZero } from '../../numbers/scalar.js';
-import { registerDecoder } from '../../values/decode.js';
-import type { Structured } from '../../values/structured.js';
+import { registerDecoder } from '../../protocol/decode.js';
+import type { Structured } from '../../protocol/structured.js';
 import { groebnerBasis, termOrder, type GroebnerOptions, type TermOrder } from '../groebner/index.js';
 import { leadingTerm } from '../groebner/ideals.js';
 import { checkPrime } from '../groebner/primeField.js';

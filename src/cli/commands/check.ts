@@ -1,5 +1,6 @@
 // hunch check [PATH...]: run the conjectures, print the report, record coverage and counterexamples.
 
+import { formatCount } from '../../base/format-count.js';
 import type { Command } from 'commander';
 import { InputError } from '../../base/errors.js';
 import { MAX_EXHAUSTIVE_SIZES } from '../../language/conjecture/compile-conjecture.js';
@@ -19,6 +20,8 @@ import type { Terminal } from '../terminal.js';
 import type { AddCommand } from './index.js';
 import { createCheckRecorder, type CheckRecorder } from '../../records/check-recorder.js';
 import { approvedPlugins, explainSkippedPlugins } from '../../records/open-project.js';
+import { writeFileAtomic } from '../../records/atomic-write.js';
+import { junitXml } from '../../reports/junit.js';
 import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
 
 interface CheckFlags {
@@ -67,8 +70,8 @@ export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
 function limitSizes(r: [string, number, number]): [string, number, number] {
   if (r[2] - r[1] + 1 > MAX_EXHAUSTIVE_SIZES)
     throw new InputError(
-      `--sizes ${r[0]}=${r[1]}..${r[2]} has ${(r[2] - r[1] + 1).toLocaleString('en-US')} sizes; an exhaustive range may have at most ` +
-        `${MAX_EXHAUSTIVE_SIZES.toLocaleString('en-US')}. Check large sizes with --sample instead`,
+      `--sizes ${r[0]}=${r[1]}..${r[2]} has ${formatCount(r[2] - r[1] + 1)} sizes; an exhaustive range may have at most ` +
+        `${formatCount(MAX_EXHAUSTIVE_SIZES)}. Check large sizes with --sample instead`,
     );
   return r;
 }
@@ -168,7 +171,7 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
     return EXIT.invalid;
   }
   const interrupted = interrupts > 0;
-  if (flags.junit) recorder.junit(flags.junit, results);
+  if (flags.junit) writeFileAtomic(flags.junit, junitXml(results), { what: 'the JUnit report', makeFolder: false });
   for (const w of recorder.warnings) t.err(`${t.color.yellow('warning:')} ${w}\n`);
   recorder.close();
   if (flags.json) t.out(JSON.stringify(resultDocument(results), null, 2) + '\n');

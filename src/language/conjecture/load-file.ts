@@ -6,7 +6,7 @@ import { InputError } from '../../base/errors.js';
 import { nearest } from '../../base/suggest.js';
 import { CONJECTURE_KEYS, ConjectureSpec, DefineSpec, EXPECTATIONS, SampleSpec } from './conjecture.js';
 import { mapEntries, scalarString, seqItems, YamlFile } from './yaml-reader.js';
-import type { Expectation } from '../../runner/result.js';
+import type { Expectation } from './conjecture.js';
 
 const ID = /^[a-z0-9][a-z0-9-]*$/;
 const NAME = /^[A-Za-z_][A-Za-z0-9_]*$/;

@@ -8,7 +8,7 @@ import { relative } from 'node:path';
 import { InputError } from '../../base/errors.js';
 import { loadConjectures } from '../../language/conjecture/project.js';
 import { counterexamplePath, readCounterexampleFile } from '../../records/counterexample-file.js';
-import { conjectureHash } from '../../records/hash.js';
+import { conjectureHash } from '../../language/conjecture/conjecture-hash.js';
 import { readLedger } from '../../records/ledger.js';
 import type { Project } from '../../records/open-project.js';
 import { pluginHashes } from '../../records/plugins.js';
