@@ -3,6 +3,7 @@
 
 import { EvalError, InputError } from '../base/errors.js';
 import type { CompiledConjecture, Fn } from '../language/conjecture/compiled.js';
+import { witnessesOfBindings } from '../language/conjecture/witnesses.js';
 import type { Value } from '../values/value.js';
 import { bindingTexts, encodeBindings, explainCase, frameFor, sizeOf } from './case-report.js';
 import { rangeBound } from './enumerate-cases.js';
@@ -142,7 +143,8 @@ export function startResult(cc: CompiledConjecture): ConjectureResult {
 }
 
 /** The outcome from what was found: an error, else a counterexample, else a stop, else it holds. */
-export function finishResult(result: ConjectureResult, t0: number, stoppedBy: StopReason | null): ConjectureResult {
+export function finishResult(result: ConjectureResult, t0: number, stoppedBy: StopReason | null, cc?: CompiledConjecture): ConjectureResult {
+  if (cc && result.counterexample) result.counterexample.witnesses = witnessesOfBindings(cc, result.counterexample.bindings);
   result.ms = performance.now() - t0;
   if (result.error) result.outcome = 'error';
   else if (result.counterexample) result.outcome = 'fails';
@@ -158,7 +160,7 @@ export function checkConjecture(compiled: CompiledConjecture, opts: CheckOptions
   const cc = withSizes(compiled, opts.sizes);
   const spec = cc.spec;
   const result = startResult(cc);
-  const finish = (stoppedBy: StopReason | null) => finishResult(result, t0, stoppedBy);
+  const finish = (stoppedBy: StopReason | null) => finishResult(result, t0, stoppedBy, cc);
   const absorb = (r: PhaseResult) => {
     result.checked.push(...r.pieces);
     result.counterexample = r.counterexample;

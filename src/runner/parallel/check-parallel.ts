@@ -60,7 +60,7 @@ export async function checkConjectureParallel(
   const cc = withSizeOverrides(compiled, opts);
   const spec = cc.spec;
   const result = startResult(cc);
-  const finish = (stoppedBy: StopReason | null) => finishResult(result, t0, stoppedBy);
+  const finish = (stoppedBy: StopReason | null) => finishResult(result, t0, stoppedBy, cc);
   // Two lanes per worker: each worker has its next unit queued when it finishes one, so it never
   // waits for a round trip through the main thread.
   const lanes = 2 * ctx.pool.size;
