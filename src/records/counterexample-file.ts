@@ -3,6 +3,7 @@
 // found, and the whole conjecture (with the file's definitions) exactly as it was checked, so
 // that `hunch replay` needs nothing else.
 
+import type { Witness } from '../language/conjecture/witnesses.js';
 import { readFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { Document, isMap, isScalar, isSeq, parseAllDocuments, stringify, visit } from 'yaml';
@@ -45,6 +46,8 @@ export interface CounterexampleFile {
   bindings: Record<string, unknown>;
   values: Record<string, unknown>;
   sides: [unknown, unknown] | null;
+  /** What decided the failure (informational: replay computes them again). */
+  witnesses?: Witness[];
   plugins: PluginNeed[];
   replay: string;
   /** The file's define documents, then the conjecture document, as checked. */
@@ -112,6 +115,8 @@ function header(f: CounterexampleFile, texts: Record<string, string>): string {
     'The case:',
     ...Object.entries(texts).map(([k, v]) => `    ${k} = ${v}`),
     ...(f.sides ? [`The two sides of the claim: ${sideText(f.sides[0])} and ${sideText(f.sides[1])}.`] : []),
+    ...(f.witnesses ?? []).filter((w) => w.kind === 'element').map((w) =>
+      `Witness: ${w.at} ${w.reducer === 'min' || w.reducer === 'max' ? `= ${sideText(w.value)}` : `is ${w.reducer === 'any' ? 'true' : 'false'}`} at ${Object.entries(w.bindings).map(([k, v]) => `${k} = ${sideText(v)}`).join(', ')}.`),
     `Found ${found}.`,
     '',
     'This file holds everything needed to check it again, including the conjecture as it was checked',
@@ -163,6 +168,7 @@ export function counterexampleRecord(
     bindings: cx.bindings,
     values: cx.values,
     sides: cx.sides,
+    ...(cx.witnesses?.length ? { witnesses: cx.witnesses } : {}),
     plugins,
     replay: `hunch replay ${replayPath}`,
     defines: exactDefineDocuments(spec),
@@ -271,6 +277,7 @@ export function parseCounterexampleFile(text: string, path: string): Counterexam
     bindings: f.bindings,
     values: isObj(f.values) ? f.values : {},
     sides: Array.isArray(f.sides) && f.sides.length === 2 ? (f.sides as [unknown, unknown]) : null,
+    ...(Array.isArray(f.witnesses) && f.witnesses.every(isObj) ? { witnesses: f.witnesses as unknown as Witness[] } : {}),
     plugins: (f.plugins as PluginNeed[] | undefined) ?? [],
     replay: typeof f.replay === 'string' ? f.replay : `hunch replay ${path}`,
     defines: (f.defines as Record<string, unknown>[] | undefined) ?? [],

@@ -2,8 +2,9 @@
 // already encoded (encodeValue), so a result can be printed, written to JSON or to the ledger as is.
 
 import type { Expectation } from '../language/conjecture/conjecture.js';
+import type { Witness } from '../language/conjecture/witnesses.js';
 
-export type { Expectation };
+export type { Expectation, Witness };
 export type Outcome = 'holds' | 'fails' | 'error' | 'incomplete';
 export type Phase = 'exhaustive' | 'sample' | 'regression';
 
@@ -51,6 +52,8 @@ export interface Counterexample {
   shrunkFrom?: Record<string, number>;
   /** The bindings as text in the language, for the human report. */
   text?: Record<string, string>;
+  /** What decided the failure: each all/any/min/max on the path to false and its simplest element (CLI.md). */
+  witnesses?: Witness[];
 }
 
 export interface ConjectureResult {
