@@ -1,6 +1,8 @@
-// Matrices with exact rational entries: determinant by fraction-free (Bareiss) elimination,
-// rank, transpose, products, and the characteristic polynomial by the Faddeev–LeVerrier
-// recurrence (exact over the rationals: its divisions are by 1, 2, ..., n).
+// Matrices with exact entries: rational numbers, or polynomials (generic matrices of
+// indeterminates z[i,j]). Determinant by fraction-free (Bareiss) elimination for numbers and by
+// expansion along rows over column subsets for polynomials, rank, transpose, products, and the
+// characteristic polynomial by the Faddeev–LeVerrier recurrence (exact over the rationals: its
+// divisions are by 1, 2, ..., n). Rank and the characteristic polynomial need numeric entries.
 
 import { fail } from '../base/errors.js';
 import { normBig } from '../numbers/integer.js';
@@ -8,7 +10,8 @@ import { isScalar, parseScalar, Rat, type Scalar } from '../numbers/rational.js'
 import { sadd, sdiv, seq, sisZero, smul, sneg, ssub } from '../numbers/scalar.js';
 import { registerDecoder } from '../values/decode.js';
 import type { Structured } from '../values/structured.js';
-import { padd, pmul, type PolyLike } from './polynomial.js';
+import { isPolynomial, padd, pmul, pneg, polyText, psub, type PolyLike } from './polynomial.js';
+import { parsePolynomialText } from './polynomialText.js';
 
 export class Matrix implements Structured {
   readonly kind = 'matrix';
@@ -17,19 +20,24 @@ export class Matrix implements Structured {
   constructor(
     readonly rows: number,
     readonly cols: number,
-    readonly entries: readonly Scalar[],
+    readonly entries: readonly PolyLike[],
   ) {}
+
+  /** Whether every entry is a number (not a polynomial). */
+  isNumeric(): this is Matrix & { entries: readonly Scalar[] } {
+    return !this.entries.some(isPolynomial);
+  }
 
   static from(rows: readonly (readonly unknown[])[]): Matrix {
     if (!Array.isArray(rows)) fail('a matrix is a list of rows');
     const r = rows.length;
     const c = r === 0 ? 0 : rows[0].length;
-    const entries: Scalar[] = [];
+    const entries: PolyLike[] = [];
     rows.forEach((row, i) => {
       if (!Array.isArray(row)) fail(`row ${i + 1} of the matrix is not a list`);
       if (row.length !== c) fail(`the rows of a matrix must have equal lengths: row 1 has ${c} entries, row ${i + 1} has ${row.length}`);
       for (const x of row) {
-        if (!isScalar(x)) fail(`a matrix entry must be a number, not ${String(x)}`);
+        if (!isScalar(x) && !isPolynomial(x)) fail(`a matrix entry must be a number or a polynomial, not ${String(x)}`);
         entries.push(x);
       }
     });
@@ -43,14 +51,14 @@ export class Matrix implements Structured {
   }
 
   /** Entry at 1-based row i, column j. */
-  at(i: number, j: number): Scalar {
+  at(i: number, j: number): PolyLike {
     if (i < 1 || i > this.rows || j < 1 || j > this.cols)
       fail(`entry (${i}, ${j}) is outside a ${this.rows}×${this.cols} matrix`);
     return this.entries[(i - 1) * this.cols + (j - 1)];
   }
 
-  rowList(): Scalar[][] {
-    const out: Scalar[][] = [];
+  rowList(): PolyLike[][] {
+    const out: PolyLike[][] = [];
     for (let i = 0; i < this.rows; i++) out.push(this.entries.slice(i * this.cols, (i + 1) * this.cols));
     return out;
   }
@@ -58,20 +66,21 @@ export class Matrix implements Structured {
   equals(other: Structured): boolean {
     const o = other as Matrix;
     if (o.rows !== this.rows || o.cols !== this.cols) return false;
-    for (let i = 0; i < this.entries.length; i++) if (!seq(o.entries[i], this.entries[i])) return false;
+    for (let i = 0; i < this.entries.length; i++) if (!entryEquals(o.entries[i], this.entries[i])) return false;
     return true;
   }
 
   key(): string {
-    return `${this.rows}x${this.cols}:${this.entries.join(',')}`;
+    return `${this.rows}x${this.cols}:${this.entries.map(polyText).join(',')}`;
   }
 
   toText(): string {
-    return `matrix([${this.rowList().map((r) => `[${r.join(', ')}]`).join(', ')}])`;
+    return `matrix([${this.rowList().map((r) => `[${r.map(polyText).join(', ')}]`).join(', ')}])`;
   }
 
+  /** Numbers as in CLI.md (big ones and rationals as strings); polynomials as their text. */
   encode(): unknown {
-    const enc = (x: Scalar) => (typeof x === 'number' ? x : x.toString());
+    const enc = (x: PolyLike) => (typeof x === 'number' ? x : isPolynomial(x) ? x.toText() : x.toString());
     return { matrix: this.rowList().map((r) => r.map(enc)) };
   }
 }
@@ -82,12 +91,23 @@ registerDecoder('matrix', (x) => {
     if (!Array.isArray(row)) fail('a matrix is a list of rows');
     return row.map((v) => {
       if (typeof v === 'number' && Number.isSafeInteger(v)) return v;
-      if (typeof v === 'string') return parseScalar(v);
+      if (typeof v === 'string') return /^-?\d+(\/\d+)?$/.test(v) ? parseScalar(v) : parsePolynomialText(v);
       fail(`a matrix entry must be an exact number, not ${JSON.stringify(v)}`);
     });
   });
   return Matrix.from(rows);
 });
+
+function entryEquals(a: PolyLike, b: PolyLike): boolean {
+  if (isPolynomial(a)) return isPolynomial(b) && a.equals(b);
+  return !isPolynomial(b) && seq(a, b);
+}
+
+/** The matrix's numeric entries, or an error naming what needs them. */
+function numericEntries(m: Matrix, what: string): Scalar[] {
+  if (!m.isNumeric()) fail(`${what} needs a matrix of numbers; this one has polynomial entries`);
+  return m.entries.slice() as Scalar[];
+}
 
 export function isMatrix(v: unknown): v is Matrix {
   return v instanceof Matrix;
@@ -103,7 +123,7 @@ export function determinant(m: Matrix): Scalar {
   const n = m.rows;
   if (n === 0) return 1;
   // Clear denominators row by row so the elimination runs over the integers.
-  const a: Scalar[] = m.entries.slice();
+  const a: Scalar[] = numericEntries(m, 'the determinant by elimination');
   let denom: Scalar = 1;
   for (let i = 0; i < n; i++) {
     let l = 1n;
@@ -140,6 +160,51 @@ export function determinant(m: Matrix): Scalar {
   return sdiv(sign < 0 ? sneg(d) : d, denom);
 }
 
+/** The determinant of a matrix of numbers or polynomials, exactly. */
+export function matrixDeterminant(m: Matrix): PolyLike {
+  requireSquare(m, 'the determinant');
+  if (m.isNumeric()) return determinant(m);
+  return polynomialDeterminant(m.entries, m.cols, range(m.rows), range(m.rows));
+}
+
+function range(n: number): number[] {
+  return Array.from({ length: n }, (_, i) => i);
+}
+
+/**
+ * det of the submatrix of a (row-major, `cols` columns) on the given rows and columns (0-based,
+ * increasing), by expansion along the rows: the minor on the last k rows and a k-subset of the
+ * columns is computed once per subset (2^n subsets at most, no division).
+ */
+export function polynomialDeterminant(a: readonly PolyLike[], cols: number, rows: readonly number[], columns: readonly number[]): PolyLike {
+  const k = rows.length;
+  if (columns.length !== k) fail('a minor needs as many rows as columns');
+  if (k === 0) return 1;
+  // memo over bitmasks of positions in `columns`, for the rows rows[k - popcount .. k-1].
+  const memo = new Map<number, PolyLike>();
+  const det = (mask: number, depth: number): PolyLike => {
+    // depth = index in rows of the row to expand; mask = the columns still available.
+    if (depth === k) return 1;
+    const known = memo.get(mask);
+    if (known !== undefined) return known;
+    let sum: PolyLike = 0, sign = 1;
+    const r = rows[depth];
+    for (let c = 0; c < k; c++) {
+      if (!(mask & (1 << c))) continue;
+      const x = a[r * cols + columns[c]];
+      if (!(x === 0)) {
+        const rest = det(mask & ~(1 << c), depth + 1);
+        const term = pmul(x, rest);
+        sum = sign > 0 ? padd(sum, term) : psub(sum, term);
+      }
+      sign = -sign;
+    }
+    memo.set(mask, sum);
+    return sum;
+  };
+  return det((1 << k) - 1, 0);
+}
+
 function gcdBig(a: bigint, b: bigint): bigint {
   while (b !== 0n) [a, b] = [b, a % b];
   return a < 0n ? -a : a;
@@ -148,7 +213,7 @@ function gcdBig(a: bigint, b: bigint): bigint {
 /** Rank over the rationals, by Gaussian elimination. */
 export function rank(m: Matrix): number {
   const r = m.rows, c = m.cols;
-  const a = m.entries.slice();
+  const a = numericEntries(m, 'the rank');
   let rk = 0;
   for (let col = 0; col < c && rk < r; col++) {
     let p = rk;
@@ -167,30 +232,37 @@ export function rank(m: Matrix): number {
 }
 
 export function transpose(m: Matrix): Matrix {
-  const e: Scalar[] = new Array(m.rows * m.cols);
+  const e: PolyLike[] = new Array(m.rows * m.cols);
   for (let i = 0; i < m.rows; i++) for (let j = 0; j < m.cols; j++) e[j * m.rows + i] = m.entries[i * m.cols + j];
   return new Matrix(m.cols, m.rows, e);
 }
 
 export function matrixProduct(a: Matrix, b: Matrix): Matrix {
   if (a.cols !== b.rows) fail(`cannot multiply a ${a.rows}×${a.cols} matrix by a ${b.rows}×${b.cols} matrix`);
-  const e: Scalar[] = new Array(a.rows * b.cols);
+  const numeric = a.isNumeric() && b.isNumeric();
+  const e: PolyLike[] = new Array(a.rows * b.cols);
   for (let i = 0; i < a.rows; i++)
     for (let j = 0; j < b.cols; j++) {
-      let s: Scalar = 0;
-      for (let k = 0; k < a.cols; k++) s = sadd(s, smul(a.entries[i * a.cols + k], b.entries[k * b.cols + j]));
-      e[i * b.cols + j] = s;
+      if (numeric) {
+        let s: Scalar = 0;
+        for (let k = 0; k < a.cols; k++) s = sadd(s, smul(a.entries[i * a.cols + k] as Scalar, b.entries[k * b.cols + j] as Scalar));
+        e[i * b.cols + j] = s;
+      } else {
+        let s: PolyLike = 0;
+        for (let k = 0; k < a.cols; k++) s = padd(s, pmul(a.entries[i * a.cols + k], b.entries[k * b.cols + j]));
+        e[i * b.cols + j] = s;
+      }
     }
   return new Matrix(a.rows, b.cols, e);
 }
 
 export function matrixSum(a: Matrix, b: Matrix): Matrix {
   if (a.rows !== b.rows || a.cols !== b.cols) fail(`cannot add a ${a.rows}×${a.cols} matrix and a ${b.rows}×${b.cols} matrix`);
-  return new Matrix(a.rows, a.cols, a.entries.map((x, i) => sadd(x, b.entries[i])));
+  return new Matrix(a.rows, a.cols, a.entries.map((x, i) => padd(x, b.entries[i])));
 }
 
-export function matrixScale(c: Scalar, m: Matrix): Matrix {
-  return new Matrix(m.rows, m.cols, m.entries.map((x) => smul(c, x)));
+export function matrixScale(c: PolyLike, m: Matrix): Matrix {
+  return new Matrix(m.rows, m.cols, m.entries.map((x) => pmul(c, x)));
 }
 
 /** M^k for k >= 0 (square M), by repeated squaring. */
@@ -213,17 +285,18 @@ export function matrixPower(m: Matrix, k: number): Matrix {
 export function charpolyCoefficients(m: Matrix): Scalar[] {
   requireSquare(m, 'the characteristic polynomial');
   const n = m.rows;
+  numericEntries(m, 'the characteristic polynomial');
   const c: Scalar[] = new Array(n + 1).fill(0);
   c[n] = 1;
   let N = Matrix.identity(n);
   for (let k = 1; k <= n; k++) {
     const MN = matrixProduct(m, N);
     let tr: Scalar = 0;
-    for (let i = 0; i < n; i++) tr = sadd(tr, MN.entries[i * n + i]);
+    for (let i = 0; i < n; i++) tr = sadd(tr, MN.entries[i * n + i] as Scalar);
     c[n - k] = sneg(sdiv(tr, k));
     if (k < n) {
       const e = MN.entries.slice();
-      for (let i = 0; i < n; i++) e[i * n + i] = sadd(e[i * n + i], c[n - k]);
+      for (let i = 0; i < n; i++) e[i * n + i] = padd(e[i * n + i], c[n - k]);
       N = new Matrix(n, n, e);
     }
   }
@@ -240,9 +313,9 @@ export function charpoly(m: Matrix, t: PolyLike): PolyLike {
 
 export function matrixDifference(a: Matrix, b: Matrix): Matrix {
   if (a.rows !== b.rows || a.cols !== b.cols) fail(`cannot subtract a ${b.rows}×${b.cols} matrix from a ${a.rows}×${a.cols} matrix`);
-  return new Matrix(a.rows, a.cols, a.entries.map((x, i) => ssub(x, b.entries[i])));
+  return new Matrix(a.rows, a.cols, a.entries.map((x, i) => psub(x, b.entries[i])));
 }
 
 export function matrixNegate(m: Matrix): Matrix {
-  return new Matrix(m.rows, m.cols, m.entries.map(sneg));
+  return new Matrix(m.rows, m.cols, m.entries.map(pneg));
 }

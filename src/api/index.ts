@@ -14,7 +14,8 @@ import type { CompiledConjecture } from '../language/conjecture/compiled.js';
 import { compileConjecture } from '../language/conjecture/compile-conjecture.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
 import { loadConjectures } from '../language/conjecture/project.js';
-import { checkConjecture, type CheckOptions } from '../runner/check.js';
+import type { CheckOptions } from '../runner/check-options.js';
+import { checkConjecture } from '../runner/in-process-executor.js';
 import type { RunHooks } from '../runner/hooks.js';
 import { agreesWithExpectation, type ConjectureResult } from '../runner/result.js';
 import { formatResult } from '../reports/human.js';
@@ -169,3 +170,6 @@ export class ConjectureTestFailure extends Error {
     this.name = 'ConjectureTestFailure';
   }
 }
+export { guessExpression, guessTerms, type GuessResult } from './guess.js';
+export { guessSequence } from '../algebra/guessing/index.js';
+export type { Guess, GuessReport, Evidence as GuessEvidence, Attempt as GuessAttempt } from '../algebra/guessing/index.js';

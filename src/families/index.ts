@@ -17,3 +17,7 @@ import './asms/asms.js';
 import './reducedWords/reducedWords.js';
 import './pipeDreams/pipeDreams.js';
 import './partialPermutations/partialPermutations.js';
+import './setPartitions/noncrossingPartitions.js';
+import './signedPermutations/signedPermutations.js';
+import './motzkinPaths/motzkinPaths.js';
+import './parkingFunctions/parkingFunctions.js';

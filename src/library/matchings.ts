@@ -7,6 +7,12 @@ import { fail } from '../base/errors.js';
 import { Matching, matchingCrossings, matchingNestings } from '../families/matchings/matching.js';
 import { imod, type Int } from '../numbers/integer.js';
 import { defineFunction } from './registry.js';
+import { SetPartition } from '../families/setPartitions/setPartition.js';
+import { partitionCrossings, partitionNestings } from '../families/setPartitions/arcs.js';
+import type { Value } from '../values/value.js';
+
+/** crossings and nestings also take set partitions, through their arc diagrams. */
+const MS = [{ name: 'm', type: ['matching', 'setPartition'] }];
 
 const topic = 'matchings';
 const M = [{ name: 'm', type: 'matching' }];
@@ -50,23 +56,23 @@ defineFunction({
 defineFunction({
   name: 'crossings',
   topic,
-  params: M,
+  params: MS,
   returns: 'integer',
-  description: 'the number of pairs of arcs (a, b), (c, d) with a < c < b < d',
+  description: 'the number of pairs of arcs (a, b), (c, d) with a < c < b < d (of a set partition: of its arc diagram, consecutive elements of each block)',
   example: 'crossings(matching([[1, 3], [2, 4]]))',
   exampleValue: '1',
-  source: 'Touchard–Riordan formula (Riordan, Math. Comp. 29 (1975)); equidistributed with nestings (de Sainte-Catherine 1983)',
-  impl: (m) => matchingCrossings((m as Matching).p),
+  source: 'Touchard–Riordan formula (Riordan, Math. Comp. 29 (1975)); equidistributed with nestings (de Sainte-Catherine 1983), on set partitions too (Chen, Deng, Du, Stanley and Yan, Trans. Amer. Math. Soc. 359 (2007))',
+  impl: (m: Value) => (m instanceof SetPartition ? partitionCrossings(m.rgs) : matchingCrossings((m as Matching).p)),
 });
 
 defineFunction({
   name: 'nestings',
   topic,
-  params: M,
+  params: MS,
   returns: 'integer',
-  description: 'the number of pairs of arcs (a, b), (c, d) with a < c < d < b',
+  description: 'the number of pairs of arcs (a, b), (c, d) with a < c < d < b (of a set partition: of its arc diagram)',
   example: 'nestings(matching([[1, 4], [2, 3]]))',
   exampleValue: '1',
   source: 'equidistributed with crossings (de Sainte-Catherine 1983); nonnesting matchings: OEIS A000108',
-  impl: (m) => matchingNestings((m as Matching).p),
+  impl: (m: Value) => (m instanceof SetPartition ? partitionNestings(m.rgs) : matchingNestings((m as Matching).p)),
 });

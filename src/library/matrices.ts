@@ -1,20 +1,22 @@
 // Matrices (LIBRARY.md §2): construction, determinant, rank, transpose, characteristic
 // polynomial. Products and sums are the operators * + - (src/library/operators.ts).
 
-import { charpoly, determinant, Matrix, rank, transpose } from '../algebra/matrix.js';
-import type { PolyLike } from '../algebra/polynomial.js';
+import { charpoly, matrixDeterminant, Matrix, rank, transpose } from '../algebra/matrix.js';
+import { isPolynomial, type PolyLike } from '../algebra/polynomial.js';
 import { fail } from '../base/errors.js';
 import { isScalar } from '../numbers/rational.js';
 import { valueToText } from '../values/operations.js';
 import type { Value } from '../values/value.js';
 import { defineFunction } from './registry.js';
+import { Tableau } from '../families/tableaux/tableau.js';
+import { transposeRows } from './tableaux/descents.js';
 
 /** The rows, after naming the first entry that is not a number in the language's own notation. */
 function matrixRows(rows: Value): unknown[][] {
   if (Array.isArray(rows))
     for (const row of rows)
       if (Array.isArray(row))
-        for (const x of row) if (!isScalar(x)) fail(`a matrix entry must be a number, not ${valueToText(x)}`);
+        for (const x of row) if (!isScalar(x) && !isPolynomial(x)) fail(`a matrix entry must be a number or a polynomial, not ${valueToText(x)}`);
   return rows as unknown[][];
 }
 
@@ -25,7 +27,7 @@ defineFunction({
   topic,
   params: [{ name: 'rows', type: 'list' }],
   returns: 'matrix',
-  description: 'the matrix with these rows (lists of equal length of exact numbers)',
+  description: 'the matrix with these rows (lists of equal length of exact numbers or polynomials)',
   example: 'matrix([[1, 2], [3, 4]])',
   exampleValue: 'matrix([[1, 2], [3, 4]])',
   source: 'definition',
@@ -36,12 +38,12 @@ defineFunction({
   name: 'det',
   topic,
   params: [{ name: 'M', type: 'matrix' }],
-  returns: 'number',
-  description: 'the determinant of a square matrix, exactly (fraction-free Bareiss elimination)',
+  returns: 'scalarOrPolynomial',
+  description: 'the determinant of a square matrix, exactly (fraction-free Bareiss elimination for numbers, expansion along rows for polynomial entries)',
   example: 'det(matrix([[2, 1, 0], [1, 2, 1], [0, 1, 2]]))',
   exampleValue: '4',
   source: 'E. H. Bareiss, Sylvester\'s identity and multistep integer-preserving Gaussian elimination, Math. Comp. 22 (1968); tested on Hilbert (OEIS A005249) and Vandermonde matrices',
-  impl: (m) => determinant(m as Matrix),
+  impl: (m) => matrixDeterminant(m as Matrix),
 });
 
 defineFunction({
@@ -59,13 +61,19 @@ defineFunction({
 defineFunction({
   name: 'transpose',
   topic,
-  params: [{ name: 'M', type: 'matrix' }],
-  returns: 'matrix',
-  description: 'the transposed matrix',
+  params: [{ name: 'M', type: ['matrix', 'tableau'] }],
+  returns: 'any',
+  description: 'the transposed matrix; of a standard tableau, the standard tableau of the conjugate shape whose rows are its columns',
   example: 'transpose(matrix([[1, 2, 3], [4, 5, 6]]))',
   exampleValue: 'matrix([[1, 4], [2, 5], [3, 6]])',
-  source: 'definition',
-  impl: (m) => transpose(m as Matrix),
+  source: 'definition; on standard tableaux, RSK(w reversed) gives [transpose(P), evacuation(transpose(Q))] (Schützenberger; Stanley, Enumerative Combinatorics 2, Appendix A1.2)',
+  impl: (m) => {
+    if (m instanceof Tableau) {
+      if (!m.isStandard()) fail(`transpose(T) needs a standard tableau (the transpose of a semistandard one is not semistandard), got ${m.toText()}`);
+      return new Tableau(transposeRows(m.rows));
+    }
+    return transpose(m as Matrix);
+  },
 });
 
 defineFunction({

@@ -5,3 +5,6 @@ import './permutations/statistics.js';
 import './permutations/constructions.js';
 import './permutations/patterns.js';
 import './permutations/orders.js';
+import './permutations/cycles.js';
+import './permutations/symmetries.js';
+import './permutations/foata.js';

@@ -8,7 +8,7 @@
 import { fail } from '../base/errors.js';
 import { isPolynomial, polyText, type PolyLike } from '../algebra/polynomial.js';
 import { asVariable } from '../algebra/polynomialOps.js';
-import { varBase, varIndex, varName } from '../algebra/variables.js';
+import { isBareVar, varBase, varName } from '../algebra/variables.js';
 import type { Value } from '../values/value.js';
 import { valueToText } from '../values/operations.js';
 
@@ -25,6 +25,6 @@ export function variableArg(call: string, what: string, v: Value): number {
 /** The base name of an indexed family argument: `x` (bare) gives 'x'; x[3] is refused. */
 export function indexedBaseArg(call: string, what: string, v: Value): string {
   const id = variableArg(call, what, v);
-  if (varIndex(id) !== null) fail(`${call} needs ${what} to be the bare name of indexed indeterminates (x, not ${varName(id)})`);
+  if (!isBareVar(id)) fail(`${call} needs ${what} to be the bare name of indexed indeterminates (x, not ${varName(id)})`);
   return varBase(id);
 }

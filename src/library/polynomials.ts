@@ -8,7 +8,9 @@ import {
   asMonomial, coefficientOf, coefficientsOf, degreeIn, renameVariables, substitute, termsOf, totalDegree,
   univariateCoefficients,
 } from '../algebra/polynomialOps.js';
-import { indexedVarId, varBase, varId, varIndex, varName } from '../algebra/variables.js';
+import { indexedName, isBareVar, varBase, varId, varIndex, varIndices, varName } from '../algebra/variables.js';
+import { isIdeal } from '../algebra/ideals/ideal.js';
+import { idealDimensionData } from '../algebra/ideals/invariants.js';
 import type { Value } from '../values/value.js';
 import { variableArg } from './polyArgs.js';
 import { defineFunction } from './registry.js';
@@ -65,16 +67,21 @@ defineFunction({
   name: 'degree',
   topic,
   params: [
-    { name: 'p', type: P },
+    { name: 'p', type: [P, 'ideal'] },
     { name: 'var', type: 'polynomial', optional: true },
   ],
   returns: 'integer',
   description:
-    'the total degree of p, or its degree in one variable; a nonzero number has degree 0 and 0 has none (an error)',
+    'the total degree of p, or its degree in one variable; a nonzero number has degree 0 and 0 has none (an error); for an ideal I, the degree of S/I (of the affine variety V(I), with multiplicity, when I is not homogeneous; 0 for the whole ring)',
   example: 'degree(q^3*x[1] + q, q)',
   exampleValue: '3',
-  source: 'definition',
+  source:
+    'definition; for ideals, the leading coefficient of the Hilbert polynomial times (dim - 1)!, through the initial ideal (D. Cox, J. Little, D. O\'Shea, Ideals, Varieties, and Algorithms, ch. 9 §3-§4); tested on the commuting variety (OEIS A029729) and determinantal varieties (W. Bruns, U. Vetter, Determinantal Rings, LNM 1327)',
   impl: (p, v) => {
+    if (isIdeal(p)) {
+      if (v !== undefined) fail('degree(I) of an ideal takes no variable');
+      return idealDimensionData(p).degree;
+    }
     if (v === undefined) return totalDegree(p as PolyLike);
     return degreeIn(p as PolyLike, variableArg('degree(p, var)', 'var', v));
   },
@@ -104,7 +111,7 @@ defineFunction({
     const poly = p as PolyLike;
     const id = variableArg(call, 'var', v);
     const values = new Map<number, PolyLike>();
-    if (varIndex(id) !== null) {
+    if (!isBareVar(id)) {
       if (Array.isArray(value)) fail(`${call}: a list of values needs a bare indexed name (x), not ${varName(id)}`);
       values.set(id, value as PolyLike);
       return substitute(poly, values);
@@ -144,12 +151,9 @@ defineFunction({
     const poly = p as PolyLike;
     const ia = variableArg(call, 'a', a), ib = variableArg(call, 'b', b);
     const rename = new Map<number, number>();
-    if (varIndex(ia) === null && varIndex(ib) === null && ia !== ib) {
+    if (isBareVar(ia) && isBareVar(ib) && ia !== ib) {
       const ba = varBase(ia), bb = varBase(ib);
-      const partner = (id: number, to: string) => {
-        const i = varIndex(id);
-        return i === null ? varId(to) : indexedVarId(to, i);
-      };
+      const partner = (id: number, to: string) => varId(indexedName(to, varIndices(id)));
       for (const id of familyIn(poly, ba)) rename.set(id, partner(id, bb));
       for (const id of familyIn(poly, bb)) rename.set(id, partner(id, ba));
     } else {

@@ -7,13 +7,15 @@
 // What does not: the id (records carry it apart), statement, references, expect (changing the
 // expectation does not change what was verified), the sample count (records carry their case
 // counts), key order, YAML layout and comments, and the spelling of expressions (each is parsed and
-// printed back, so `a<=b` and `a <= b` are the same conjecture).
+// printed back, so `a<=b` and `a <= b` are the same conjecture, and so are the body-first
+// `sum(i^2 for i in S)` and the binder-first `sum(i in S: i^2)`: the printed form is the fixed
+// binder-first one, printHashForm, so hashes recorded before the body-first form existed stay valid).
 
 import { createHash } from 'node:crypto';
 import type { Expr } from '../language/expr/ast.js';
 import { textOrigin } from '../language/expr/origin.js';
 import { parseDefineHeader, parseExpression } from '../language/expr/parser.js';
-import { printExpression } from '../language/expr/printer.js';
+import { printHashForm } from '../language/expr/printer.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
 import type { ExprText } from '../language/conjecture/yaml-reader.js';
 
@@ -53,7 +55,7 @@ function canonical(e: ExprText): Canonical {
   }
   const names = new Set<string>();
   namesIn(ast, names);
-  return { text: printExpression(ast), names };
+  return { text: printHashForm(ast), names };
 }
 
 interface CanonicalDefine {

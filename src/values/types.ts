@@ -38,6 +38,9 @@ export function typeAccepts(expected: TypeName, actual: TypeName): boolean {
   if (expected === 'scalarOrPolynomial')
     return actual === 'integer' || actual === 'rational' || actual === 'number' || actual === 'polynomial';
   if (expected === 'polynomial') return actual === 'integer' || actual === 'rational' || actual === 'number';
+  // A number or polynomial is a symmetric function of degree 0 (constants are never kept as one).
+  if (expected === 'symmetric')
+    return actual === 'integer' || actual === 'rational' || actual === 'number' || actual === 'polynomial' || actual === 'scalarOrPolynomial';
   // A statically inferred 'number' may turn out to be an integer at run time.
   if (expected === 'integer') return actual === 'number';
   return false;
@@ -45,5 +48,6 @@ export function typeAccepts(expected: TypeName, actual: TypeName): boolean {
 
 /** "a permutation", "an integer": for messages. */
 export function article(t: TypeName): string {
+  if (t === 'symmetric') return 'a symmetric function';
   return /^[aeiou]/.test(t) ? `an ${t}` : `a ${t}`;
 }

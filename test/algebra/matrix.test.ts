@@ -22,7 +22,7 @@ function leibniz(m: Matrix): Scalar {
     }
     for (let i = k; i < n; i++) {
       [perm[k], perm[i]] = [perm[i], perm[k]];
-      rec(k + 1, i === k ? sign : -sign, smul(prod, m.entries[k * n + perm[k]]));
+      rec(k + 1, i === k ? sign : -sign, smul(prod, m.entries[k * n + perm[k]] as Scalar));
       [perm[k], perm[i]] = [perm[i], perm[k]];
     }
   };
@@ -110,11 +110,11 @@ describe('characteristic polynomial', () => {
         const c = charpolyCoefficients(m);
         expect(seq(c[0], n % 2 === 0 ? determinant(m) : sneg(determinant(m)))).toBe(true);
         let tr: Scalar = 0;
-        for (let i = 0; i < n; i++) tr = sadd(tr, m.entries[i * n + i]);
+        for (let i = 0; i < n; i++) tr = sadd(tr, m.entries[i * n + i] as Scalar);
         expect(seq(c[n - 1], sneg(tr))).toBe(true);
         let sum = matrixScale(0, m);
         for (let i = 0; i <= n; i++) sum = matrixSum(sum, matrixScale(c[i], matrixPower(m, i)));
-        expect(sum.entries.every((x) => seq(x, 0))).toBe(true);
+        expect(sum.entries.every((x) => seq(x as Scalar, 0))).toBe(true);
       }),
       { numRuns: 60 },
     );

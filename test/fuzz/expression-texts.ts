@@ -47,12 +47,12 @@ export const LEAVES: Record<string, string[]> = {
   function: ['v -> v + 1', 'v -> [[v, 1]]', '(a, b) -> a * b', 'inv', 'v -> v', '() -> 1'],
   chain: ['chain([1, 2], s -> [[3 - s, 1]])', 'chain(permutations(2), w -> [[w, 1]])'],
   measure: ['stationary(chain([1, 2], s -> [[3 - s, 1], [s, 1]]))'],
-  distribution: ['distribution(i in 1..3: mod(i, 2))', 'distribution([1, 1, 2])'],
+  distribution: ['distribution(mod(i, 2) for i in 1..3)', 'distribution(i in 1..3: mod(i, 2))', 'distribution([1, 1, 2])'],
 };
 
 const TOKENS = [
   '(', ')', '[', ']', ',', ':', '..', '->', '+', '-', '*', '/', '^', '==', '!=', '<', '<=', '>', '>=',
-  'if', 'then', 'else', 'and', 'or', 'not', 'implies', 'in', 'where', 'true', 'false',
+  'if', 'then', 'else', 'and', 'or', 'not', 'implies', 'in', 'for', 'where', 'true', 'false',
   'n', 'k', 'w', 'q', 'x', 'i', 'v', '0', '1', '3', '"ab"', '"', "'", '.', '=', '%', '{', '}', '&&', '**', '!', '#', '@', '\t', '\n',
   '3.5', '2x', 'é', '\u0000',
 ];
@@ -103,8 +103,10 @@ function comprehension(r: Rand, type: string, depth: number, env: Env): string {
     gens.push(`${v} in ${src}${where}`);
   }
   const bodyType = reducer === 'all' || reducer === 'any' || reducer === 'count' ? 'boolean' : reducer === 'concat' ? 'list' : pick(r, ['integer', 'integer', 'polynomial', 'any']);
-  const body = reducer === 'count' && chance(r, 40) ? '' : `: ${gen(r, bodyType, depth - 1, inner)}`;
-  return `${reducer}(${gens.join(', ')}${body})`;
+  if (reducer === 'count' && chance(r, 40)) return `${reducer}(${gens.join(', ')})`;
+  const body = gen(r, bodyType, depth - 1, inner);
+  // Both spellings: body first (canonical) and binder first.
+  return chance(r, 70) ? `${reducer}(${body} for ${gens.join(', ')})` : `${reducer}(${gens.join(', ')}: ${body})`;
 }
 
 function libraryCall(r: Rand, type: string, depth: number, env: Env): string {

@@ -91,4 +91,24 @@ claim: peaks(w) <= twice(n)
     expect(hashOf(text, { pluginHashes: { myStat: 'a'.repeat(64) } })).not.toBe(hashOf(text, { pluginHashes: { myStat: 'b'.repeat(64) } }));
     expect(hashOf(text, { pluginHashes: { otherStat: 'a'.repeat(64) } })).toBe(h0);
   });
+
+  test('the two comprehension spellings give one hash, the hash recorded before body-first existed', () => {
+    // The pinned value was computed with the binder-first printer, before the body-first form was
+    // added: records in users' ledgers must stay valid.
+    const head = 'conjecture: q-factorial\nindeterminates: [q]\ndefine:\n  peaks(w): PEAKS\nfor:\n  n: 1..5\nclaim: CLAIM\n';
+    const make = (peaks: string, claim: string) => head.replace('PEAKS', peaks).replace('CLAIM', claim);
+    const binderFirst = make(
+      '"count(i in 2..len(w)-1 where w[i-1] < w[i] and w[i] > w[i+1])"',
+      "'sum(w in permutations(n): q^inv(w)) == product(i in 1..n: sum(j in 0..i-1: q^j)) and " +
+        "sum(i in 1..n, j in i..n where gcd(i, j) == 1: i*j) >= 0 and all(w in permutations(n): peaks(w) >= 0)'",
+    );
+    const bodyFirst = make(
+      'count(i in 2..len(w)-1 where w[i-1] < w[i] and w[i] > w[i+1])',
+      'sum(q^inv(w) for w in permutations(n)) == product(sum(q^j for j in 0..i-1) for i in 1..n) and ' +
+        'sum(i*j for i in 1..n, j in i..n where gcd(i, j) == 1) >= 0 and all(peaks(w) >= 0 for w in permutations(n))',
+    );
+    const pinned = '637ee180d6949e6853f6801a5c27109ea857c129a6b6cb3ee17991b70f31e19a';
+    expect(hashOf(binderFirst)).toBe(pinned);
+    expect(hashOf(bodyFirst)).toBe(pinned);
+  });
 });

@@ -5,6 +5,9 @@ import '../../families/index.js';
 import '../../library/index.js';
 import { evaluate } from '../../language/expr/index.js';
 import { detectProperties } from '../../reports/sequence-properties.js';
+import { guessSequence, MAX_GUESS_TERMS } from '../../algebra/guessing/index.js';
+import { bestGuessLine, guessJson } from '../../reports/guesses.js';
+import { isScalar, type Scalar } from '../../numbers/rational.js';
 import { encodeValue, valueToText } from '../../values/operations.js';
 import type { Value } from '../../values/value.js';
 import { EXIT } from '../errors.js';
@@ -42,8 +45,10 @@ export const addTableCommand: AddCommand = (program, t, setExit) => {
         throw explainSkippedPlugins(e, project);
       }
       const props = detectProperties(rows.map((r) => r[1]));
+      // The simplest guess for a column of numbers (hunch guess shows them all, with --write).
+      const best = rows.length <= MAX_GUESS_TERMS && rows.every((r) => isScalar(r[1])) ? guessSequence({ offset: lo, terms: rows.map((r) => r[1] as Scalar) }).guesses[0] : undefined;
       if (flags.json) {
-        t.out(JSON.stringify({ over: name, rows: rows.map(([v, x]) => ({ [name]: v, value: encodeValue(x) })), properties: props }, null, 2) + '\n');
+        t.out(JSON.stringify({ over: name, rows: rows.map(([v, x]) => ({ [name]: v, value: encodeValue(x) })), properties: props, ...(best ? { bestGuess: guessJson(best, 1) } : {}) }, null, 2) + '\n');
       } else {
         const w = Math.max(name.length, String(hi).length, String(lo).length);
         t.out(`${t.color.bold(name.padStart(w))}  ${t.color.bold(expr)}\n`);
@@ -51,6 +56,10 @@ export const addTableCommand: AddCommand = (program, t, setExit) => {
         if (props.length) {
           t.out(`\nAt every ${name} in ${lo}..${hi}: ${props.join(', ')}.\n`);
           t.out(t.color.dim('(Observed on these values only: a hint for a conjecture, not a theorem.)\n'));
+        }
+        if (best) {
+          t.out(`\n${bestGuessLine(best, name)}\n`);
+          t.out(t.color.dim(`(A guess from these values only; hunch guess '${expr}' --over ${flags.over} lists every guess and --write makes them conjectures.)\n`));
         }
       }
       setExit(EXIT.ok);

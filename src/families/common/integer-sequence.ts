@@ -13,7 +13,7 @@ export abstract class IntegerSequence implements Structured {
   /** A new object of the same class over these integers (trusted, already valid). */
   protected abstract rebuild(values: number[]): IntegerSequence;
 
-  /** A source after `in`: sum(c), max(lambda), all(i in S: ...). */
+  /** A source after `in`: sum(c), max(lambda), all(c > 0 for c in S). */
   elements(): readonly number[] {
     return this.sequence();
   }

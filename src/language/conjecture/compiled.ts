@@ -2,11 +2,11 @@
 
 import type { SourcePos } from '../../base/errors.js';
 import type { Family } from '../../families/family.js';
-import type { Value } from '../../values/value.js';
 import type { ConjectureSpec } from './conjecture.js';
 
-export type Frame = Value[];
-export type Fn = (frame: Frame) => Value;
+import type { Fn, Frame } from '../expr/frame.js';
+
+export type { Fn, Frame } from '../expr/frame.js';
 
 export type BindingSource =
   | { kind: 'range'; lo: Fn; hi: Fn }

@@ -12,10 +12,9 @@ import { isStructured } from '../../values/structured.js';
 import { article, typeOf, type TypeName } from '../../values/types.js';
 import type { Value } from '../../values/value.js';
 import type { Reducer } from './ast.js';
+import type { Fn, Frame } from './frame.js';
 import { at2, located, notBoolean, short } from './runtime.js';
 
-type Frame = Value[];
-type Fn = (fr: Frame) => Value;
 
 export type SourcePlan =
   | { kind: 'range'; lo: (fr: Frame) => number; hi: (fr: Frame) => number }

@@ -3,7 +3,9 @@
 // API (what the conjecture loader, the runner and `hunch eval` use):
 //
 //   parseExpression(text, origin): Expr            InputError (pos, snippet, suggestion) on bad syntax
-//   printExpression(e): string                      parse(print(e)) is structurally equal to e (exprEquals)
+//   printExpression(e): string                      parse(print(e)) is structurally equal to e (exprEquals);
+//                                                   comprehensions body first: sum(E for v in S)
+//   printHashForm(e): string                        the fixed binder-first text the conjecture hash uses
 //   parseDefineHeader('peaks(w)', origin)           -> { name: 'peaks', params: ['w'] }
 //   textOrigin(file, text, line?, column?)          an Origin for text that sits verbatim in a file
 //   new Compiler({ file, indeterminates, defines }) checks every define at once (InputError)
@@ -37,7 +39,7 @@ import { located } from './runtime.js';
 export type { Expr, Generator, Origin, SourceText, Reducer, BinaryOp } from './ast.js';
 export { exprEquals, stripPositions, REDUCERS, isReducer } from './ast.js';
 export { parseExpression, parseDefineHeader, MAX_NESTING, MAX_DEPTH } from './parser.js';
-export { printExpression } from './printer.js';
+export { printExpression, printHashForm } from './printer.js';
 export { textOrigin, sourcePos } from './origin.js';
 export { Compiler, MAX_CALL_DEPTH, type Compiled, type CompiledSource, type DefineDecl, type CompilerOptions, type Fn, type Frame } from './compiler.js';
 

@@ -1,6 +1,6 @@
 // Recursive-descent parser for FORMAT.md §3. Precedence, lowest first:
 //   1  if C then A else B,  v -> E,  (a, b) -> E
-//   2  A implies B          (right-associative; its operands are `or` chains)
+//   2  A implies B, A iff B (implies right-associative; iff does not chain; operands are `or` chains)
 //   3  A or B
 //   4  A and B
 //   5  not A
@@ -9,12 +9,20 @@
 //   8  + -
 //   9  * /  and unary -     (-q^2 is -(q^2))
 //  10  ^                    (right-associative; the exponent may carry signs: w^-1)
-//  11  calls f(a, b), comprehensions sum(i in S where C: E), indexing L[i], ( ), [ ]
+//  11  calls f(a, b), comprehensions, indexing L[i], ( ), [ ]
 // Implies sits just below `or` so that `a or b implies c` reads (a or b) implies c.
+//
+// Comprehensions come in two spellings of the same tree (FORMAT.md §3 "Comprehensions"):
+//   body first (canonical):  sum(E for i in S where C, j in T)   (`for` may also separate generators)
+//   binder first:            sum(i in S where C, j in T: E)      count(w in S where C) has no body
+// In the body-first form the body is a full expression (an if, a lambda): `for` is a keyword and no
+// operator, so the body ends where `for` starts; a generator's source ends at `where`, `,`, `for`
+// or `)`; `in` appears only right after a generator's variable, so a body never contains one
+// outside its own parentheses (a nested comprehension).
 
 import { InputError } from '../../base/errors.js';
 import { parseInt10 } from '../../numbers/integer.js';
-import { type BinaryOp, type CompareOp, type Expr, type Generator, type Origin, type SourceText, isReducer, REDUCERS } from './ast.js';
+import { type BinaryOp, type CompareOp, type Expr, type Generator, type Origin, type Reducer, type SourceText, isReducer, REDUCERS } from './ast.js';
 import { tokenize, type Token } from './lexer.js';
 import { inputError } from './origin.js';
 
@@ -157,17 +165,35 @@ class Parser {
   // Level 2.
   private implication(): Expr {
     const left = this.disjunction();
+    if (this.is('iff')) {
+      const op = this.next();
+      const right = this.disjunction();
+      if (this.is('iff') || this.is('implies')) {
+        throw this.err(`${op.text} does not chain with ${this.tok.text}`, this.tok, 'add parentheses: (A iff B) iff C, or A iff (B implies C)');
+      }
+      return this.node({ type: 'binary', op: 'iff', left, right, start: left.start, end: right.end });
+    }
     if (this.is('implies')) {
       this.next();
       this.enter();
       try {
         const right = this.implication();
+        if (right.type === 'binary' && right.op === 'iff' && !this.parenthesized(right)) {
+          throw inputError('implies does not chain with iff', this.src, right.start, right.end, 'add parentheses: A implies (B iff C), or (A implies B) iff C');
+        }
         return this.node({ type: 'binary', op: 'implies', left, right, start: left.start, end: right.end });
       } finally {
         this.depth--;
       }
     }
     return left;
+  }
+
+  /** Nodes written inside their own parentheses (a tree does not keep them otherwise). */
+  private readonly grouped = new Set<Expr>();
+
+  private parenthesized(e: Expr): boolean {
+    return this.grouped.has(e);
   }
 
   private leftAssoc(ops: string[], operand: () => Expr): Expr {
@@ -296,9 +322,15 @@ class Parser {
       const open = this.next();
       this.enter();
       const index = this.expr();
+      // A second index, z[i, j], names a doubly indexed indeterminate (the compiler checks).
+      let index2: Expr | undefined;
+      if (this.is(',')) {
+        this.next();
+        index2 = this.expr();
+      }
       this.depth--;
       const close = this.expect(']', 'to close the index', open);
-      e = this.node({ type: 'index', target: e, index, start: e.start, end: close.end });
+      e = this.node(index2 ? { type: 'index', target: e, index, index2, start: e.start, end: close.end } : { type: 'index', target: e, index, start: e.start, end: close.end });
     }
     return e;
   }
@@ -331,6 +363,7 @@ class Parser {
           const e = this.expr();
           this.depth--;
           this.expect(')', 'to close the parenthesis', t);
+          this.grouped.add(e);
           return e;
         }
         if (t.text === '[') {
@@ -349,11 +382,12 @@ class Parser {
   }
 
   /** Items up to (not including) the closer, separated by commas. */
-  private commaList(closer: string, opener: Token): Expr[] {
+  private commaList(closer: string, opener: Token, first?: Expr): Expr[] {
     const items: Expr[] = [];
-    if (this.is(closer)) return items;
+    if (first === undefined && this.is(closer)) return items;
     for (;;) {
-      items.push(this.expr());
+      items.push(first ?? this.expr());
+      first = undefined;
       if (this.is(',')) {
         this.next();
         continue;
@@ -362,7 +396,10 @@ class Parser {
       if (this.tok.kind === 'eof') {
         throw inputError(`${opener.text} is never closed: expected ${closer}`, this.src, opener.start, opener.end, `add ${closer}`);
       }
-      throw this.err(`expected , or ${closer}, found ${this.describe(this.tok)}`);
+      const hint = !this.is('for') ? undefined
+        : closer === ']' ? 'a list comprehension is written list(E for v in S)'
+        : 'a comprehension has a single body before for, as in sum(E for v in S)';
+      throw this.err(`expected , or ${closer}, found ${this.describe(this.tok)}`, this.tok, hint);
     }
   }
 
@@ -374,8 +411,14 @@ class Parser {
     const open = this.next();
     this.enter();
     try {
-      if (this.generatorAhead()) return this.comprehension(name, open);
-      const args = this.commaList(')', open);
+      if (this.generatorAhead()) return this.binderFirst(name, open);
+      if (this.is(')')) {
+        const close = this.next();
+        return this.node({ type: 'call', callee: name.text, args: [], start: name.start, end: close.end });
+      }
+      const first = this.expr();
+      if (this.is('for')) return this.bodyFirst(name, open, first);
+      const args = this.commaList(')', open, first);
       const close = this.next();
       return this.node({ type: 'call', callee: name.text, args, start: name.start, end: close.end });
     } finally {
@@ -383,44 +426,70 @@ class Parser {
     }
   }
 
-  private comprehension(name: Token, open: Token): Expr {
+  private requireReducer(name: Token, form: string): void {
     if (!isReducer(name.text)) {
-      throw this.err(`${name.text}(v in ...) is not a comprehension`, name, `comprehensions are ${REDUCERS.join(', ')}`);
+      throw this.err(`${name.text}(${form}) is not a comprehension`, name, `comprehensions are ${REDUCERS.join(', ')}`);
     }
-    const generators: Generator[] = [];
+  }
+
+  /** One generator `v in S` with its optional `where C`. */
+  private generator(): Generator {
+    if (!this.generatorAhead()) {
+      throw this.err(`expected a generator "v in S", found ${this.describe(this.tok)}`, this.tok,
+        this.tok.kind === 'name' ? `write ${this.tok.text} in S` : undefined);
+    }
+    const v = this.next();
+    this.next(); // in
+    const source = this.expr();
+    let where: Expr | undefined;
+    if (this.is('where')) {
+      this.next();
+      where = this.expr();
+    }
+    if (this.is('if')) throw this.err('a filter on a generator is written with where, not if', this.tok, 'v in S where C');
+    return { name: v.text, source, where, start: v.start, end: (where ?? source).end };
+  }
+
+  private close(name: Token, open: Token, expected: string): Token {
+    if (this.is(')')) return this.next();
+    if (this.tok.kind === 'eof') throw inputError(`( is never closed: expected )`, this.src, open.start, open.end, 'add )');
+    const hint = this.is(':') ? 'the body-first form puts the body before for and has no ":"' : undefined;
+    throw this.err(`expected ${expected} in ${name.text}(...), found ${this.describe(this.tok)}`, this.tok, hint);
+  }
+
+  /** sum(E for i in S where C, j in T): the body was parsed as the call's first argument. */
+  private bodyFirst(name: Token, open: Token, body: Expr): Expr {
+    this.requireReducer(name, '... for v in S');
+    this.next(); // for
+    const generators: Generator[] = [this.generator()];
+    while (this.is(',') || this.is('for')) {
+      this.next();
+      generators.push(this.generator());
+    }
+    const close = this.close(name, open, 'where, a comma, for or )');
+    return this.node({ type: 'comprehension', reducer: name.text as Reducer, generators, body, start: name.start, end: close.end });
+  }
+
+  /** sum(i in S where C, j in T: E), and count(w in S where C) without a body. */
+  private binderFirst(name: Token, open: Token): Expr {
+    this.requireReducer(name, 'v in ...');
+    const generators: Generator[] = [this.generator()];
+    while (this.is(',')) {
+      this.next();
+      generators.push(this.generator());
+    }
     let body: Expr | undefined;
-    for (;;) {
-      if (!this.generatorAhead()) throw this.err(`expected a generator "v in S", found ${this.describe(this.tok)}`);
-      const v = this.next();
-      this.next(); // in
-      const source = this.expr();
-      let where: Expr | undefined;
-      if (this.is('where')) {
-        this.next();
-        where = this.expr();
-      }
-      generators.push({ name: v.text, source, where, start: v.start, end: (where ?? source).end });
-      if (this.is(',')) {
-        this.next();
-        continue;
-      }
-      break;
-    }
     if (this.is(':')) {
       this.next();
       body = this.expr();
     }
-    if (!this.is(')')) {
-      if (this.tok.kind === 'eof') throw inputError(`( is never closed: expected )`, this.src, open.start, open.end, 'add )');
-      throw this.err(`expected where, a comma, : or ) in ${name.text}(...), found ${this.describe(this.tok)}`);
-    }
-    const close = this.next();
-    return this.node({ type: 'comprehension', reducer: name.text, generators, body, start: name.start, end: close.end });
+    const close = this.close(name, open, 'where, a comma, : or )');
+    return this.node({ type: 'comprehension', reducer: name.text as Reducer, generators, body, start: name.start, end: close.end });
   }
 }
 
 /** The children of a node, in no particular order. */
-function children(e: Expr): Expr[] {
+export function children(e: Expr): Expr[] {
   switch (e.type) {
     case 'int':
     case 'string':
@@ -442,7 +511,7 @@ function children(e: Expr): Expr[] {
     case 'call':
       return e.args;
     case 'index':
-      return [e.target, e.index];
+      return e.index2 ? [e.target, e.index, e.index2] : [e.target, e.index];
     case 'comprehension': {
       const out: Expr[] = [];
       for (const g of e.generators) out.push(g.source, ...(g.where ? [g.where] : []));

@@ -7,10 +7,17 @@ import { Partition } from '../../families/partitions/partition.js';
 import { defineFunction } from '../registry.js';
 import type { Value } from '../../values/value.js';
 import { Scratch } from './scratch.js';
+import { Word } from '../../families/words/word.js';
+import { Tableau } from '../../families/tableaux/tableau.js';
+import { tableauDescents } from '../tableaux/descents.js';
 
 const topic = 'permutations';
 const P = [{ name: 'w', type: 'permutation' }];
-const arr = (w: Value): number[] => (w as Permutation).a;
+/** inv, maj, des and descents also take words (sequences with repeated letters). */
+const PW = [{ name: 'w', type: ['permutation', 'word'] }];
+/** maj, des and descents also take standard tableaux (i + 1 in a lower row than i). */
+const PWT = [{ name: 'w', type: ['permutation', 'word', 'tableau'] }];
+const arr = (w: Value): number[] => (w instanceof Word ? w.letters : (w as Permutation).a);
 
 /** Fenwick-tree counts for long permutations, where the quadratic loop would be slow. */
 const fenwickBuf = new Scratch();
@@ -20,12 +27,16 @@ const LONG = 64;
 export function inv(a: readonly number[]): number {
   const n = a.length;
   if (n <= LONG) return inversions(a);
-  const t = fenwickBuf.get(n + 1);
+  // a word's letters may exceed its length: the tree spans the largest value
+  let m = n;
+  for (const v of a) if (v > m) m = v;
+  if (m > 4 * n + 1024) return inversions(a);
+  const t = fenwickBuf.get(m + 1);
   let c = 0;
   for (let i = n - 1; i >= 0; i--) {
     // values smaller than a[i] already seen to the right
     for (let x = a[i] - 1; x > 0; x -= x & -x) c += t[x];
-    for (let x = a[i]; x <= n; x += x & -x) t[x]++;
+    for (let x = a[i]; x <= m; x += x & -x) t[x]++;
   }
   return c;
 }
@@ -154,49 +165,49 @@ export const lds = (a: readonly number[]): number => longestMonotone(a, -1);
 defineFunction({
   name: 'inv',
   topic,
-  params: P,
+  params: PW,
   returns: 'integer',
-  description: 'the number of inversions: pairs i < j with w[i] > w[j]',
+  description: 'the number of inversions: pairs i < j with w[i] > w[j] (of a permutation or a word)',
   example: 'inv(perm([3, 1, 4, 2]))',
   exampleValue: '3',
-  source: 'OEIS A008302 (Mahonian numbers: the distribution of inv over S_n)',
-  impl: (w) => inv((w as Permutation).a),
+  source: 'OEIS A008302 (Mahonian numbers: the distribution of inv over S_n); on words, the q-multinomial coefficient (MacMahon; Andrews, The Theory of Partitions, Thm 3.6)',
+  impl: (w) => inv(arr(w)),
 });
 
 defineFunction({
   name: 'maj',
   topic,
-  params: P,
+  params: PWT,
   returns: 'integer',
-  description: 'the major index: the sum of the descent positions i, where w[i] > w[i+1]',
+  description: 'the major index: the sum of the descent positions i, where w[i] > w[i+1] (of a permutation or a word); of a standard tableau, the sum of its descents i (i + 1 in a lower row)',
   example: 'maj(perm([3, 1, 4, 2]))',
   exampleValue: '4',
-  source: 'OEIS A008302 (MacMahon: maj and inv are equidistributed)',
-  impl: (w) => maj(arr(w)),
+  source: 'OEIS A008302 (MacMahon: maj and inv are equidistributed, on permutations and on the rearrangements of a word); on standard tableaux, q^n(lambda) [n]_q! / prod [h]_q (Stanley, Enumerative Combinatorics 2, Cor. 7.21.5)',
+  impl: (w) => (w instanceof Tableau ? tableauDescents(w, 'maj(T)').reduce((a, b) => a + b, 0) : maj(arr(w))),
 });
 
 defineFunction({
   name: 'des',
   topic,
-  params: P,
+  params: PWT,
   returns: 'integer',
-  description: 'the number of descents: positions i with w[i] > w[i+1]',
+  description: 'the number of descents: positions i with w[i] > w[i+1] (of a permutation or a word); of a standard tableau, the i with i + 1 in a lower row',
   example: 'des(perm([3, 1, 4, 2]))',
   exampleValue: '2',
   source: 'OEIS A008292 (Eulerian numbers)',
-  impl: (w) => des(arr(w)),
+  impl: (w) => (w instanceof Tableau ? tableauDescents(w, 'des(T)').length : des(arr(w))),
 });
 
 defineFunction({
   name: 'descents',
   topic,
-  params: P,
+  params: PWT,
   returns: 'list',
-  description: 'the list of descent positions i (w[i] > w[i+1]), increasing',
+  description: 'the list of descent positions i (w[i] > w[i+1]), increasing (of a permutation or a word); of a standard tableau, the i with i + 1 in a lower row than i',
   example: 'descents(perm([3, 1, 4, 2]))',
   exampleValue: '[1, 3]',
   source: 'definition; OEIS A008292 (Eulerian numbers) for their number',
-  impl: (w) => descents(arr(w)),
+  impl: (w) => (w instanceof Tableau ? tableauDescents(w, 'descents(T)') : descents(arr(w))),
 });
 
 defineFunction({

@@ -2,7 +2,7 @@ import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
 import { InputError } from '../../../src/base/errors.js';
 import {
-  type Expr, exprEquals, parseDefineHeader, parseExpression, printExpression, REDUCERS, stripPositions, textOrigin,
+  type Expr, exprEquals, parseDefineHeader, parseExpression, printExpression, printHashForm, REDUCERS, stripPositions, textOrigin,
 } from '../../../src/language/expr/index.js';
 import { errorOf } from './helpers.js';
 
@@ -26,6 +26,9 @@ describe('precedence (FORMAT.md §3)', () => {
     ['a or b and c', 'a or (b and c)'],
     ['a or b implies c', '(a or b) implies c'],
     ['a implies b implies c', 'a implies (b implies c)'],
+    ['a or b iff c and d', '(a or b) iff (c and d)'],
+    ['a iff (b iff c)', 'a iff (b iff c)'],
+    ['a implies (b iff c)', 'a implies (b iff c)'],
     ['if a then b else c + 1', 'if a then b else (c + 1)'],
     ['v -> v + 1', 'v -> (v + 1)'],
     ['-a * b', '(-a) * b'],
@@ -43,8 +46,62 @@ describe('precedence (FORMAT.md §3)', () => {
     expect(shape('(-2)^2')).toBe('(-2)^2');
     expect(shape('(2^3)^2')).toBe('(2^3)^2');
     expect(shape('a - (b - c)')).toBe('a - (b - c)');
-    expect(shape('sum(i in 1..n, j in i..n where gcd(i, j) == 1: 1)')).toBe('sum(i in 1..n, j in i..n where gcd(i, j) == 1: 1)');
+    expect(shape('sum(i in 1..n, j in i..n where gcd(i, j) == 1: 1)')).toBe('sum(1 for i in 1..n, j in i..n where gcd(i, j) == 1)');
+    expect(shape('count(w in S where des(w) == 1)')).toBe('count(w in S where des(w) == 1)');
     expect(shape('(a, b) -> a')).toBe('(a, b) -> a');
+  });
+});
+
+describe('comprehensions: body first (canonical) and binder first mean the same', () => {
+  const same: Array<[string, string]> = [
+    ['sum(q^inv(w) for w in permutations(n))', 'sum(w in permutations(n): q^inv(w))'],
+    ['all(c <= 1 for c in coefficients(s))', 'all(c in coefficients(s): c <= 1)'],
+    ['distribution(inv(w) for w in permutations(n))', 'distribution(w in permutations(n): inv(w))'],
+    ['sum(i*j for i in 1..n, j in i..n where gcd(i, j) == 1)', 'sum(i in 1..n, j in i..n where gcd(i, j) == 1: i*j)'],
+    // `for` may also separate generators
+    ['sum(i*j for i in 1..n for j in i..n where gcd(i, j) == 1)', 'sum(i in 1..n, j in i..n where gcd(i, j) == 1: i*j)'],
+    // the body is a whole expression: an if, a lambda, a comparison, a logical formula
+    ['sum(if des(w) == 0 then 1 else q for w in S)', 'sum(w in S: if des(w) == 0 then 1 else q)'],
+    ['list(v -> v + k for k in 1..3)', 'list(k in 1..3: v -> v + k)'],
+    ['all(a implies b or c for a in L)', 'all(a in L: a implies b or c)'],
+    // nested comprehensions, in the body and in a source
+    ['sum(sum(j for j in 1..i) for i in 1..n)', 'sum(i in 1..n: sum(j in 1..i: j))'],
+    ['max(x for x in list(y^2 for y in 1..n) where x > 2)', 'max(x in list(y in 1..n: y^2) where x > 2: x)'],
+    // a where whose condition is an if, then another generator
+    ['sum(1 for i in 1..n where if i > 2 then true else false, j in 1..i)', 'sum(i in 1..n where if i > 2 then true else false, j in 1..i: 1)'],
+  ];
+  test.each(same)('%s == %s', (a, b) => {
+    expect(stripPositions(parse(a))).toEqual(stripPositions(parse(b)));
+  });
+
+  test('the printer writes body first; the hash form keeps binder first', () => {
+    const e = parse('sum(i in 1..n, j in i..n where gcd(i, j) == 1: i*j)');
+    expect(printExpression(e)).toBe('sum(i * j for i in 1..n, j in i..n where gcd(i, j) == 1)');
+    expect(printHashForm(e)).toBe('sum(i in 1..n, j in i..n where gcd(i, j) == 1: i * j)');
+    expect(printExpression(parse('count(w in S)'))).toBe('count(w in S)');
+    expect(printHashForm(parse('count(w in S where P)'))).toBe('count(w in S where P)');
+    expect(printExpression(parse('sum(if a then b else c for x in S)'))).toBe('sum(if a then b else c for x in S)');
+  });
+
+  test('a body-first comprehension positions its parts', () => {
+    const t = 'sum(q^inv(w) for w in permutations(n) where des(w) == 1)';
+    const e = parse(t);
+    if (e.type !== 'comprehension') throw new Error('not a comprehension');
+    expect(t.slice(e.body!.start, e.body!.end)).toBe('q^inv(w)');
+    expect(t.slice(e.generators[0].start, e.generators[0].end)).toBe('w in permutations(n) where des(w) == 1');
+    expect([e.start, e.end]).toEqual([0, t.length]);
+  });
+
+  test('mistakes get a hint', () => {
+    expect(errorOf(() => parse('[x for x in S]')).suggestion).toMatch(/list\(E for v in S\)/);
+    expect(errorOf(() => parse('f(x for x in S)')).message).toMatch(/not a comprehension/);
+    expect(errorOf(() => parse('sum(x for x in S if x > 1)')).suggestion).toMatch(/where/);
+    expect(errorOf(() => parse('sum(x for x in S: x)')).suggestion).toMatch(/no ":"/);
+    expect(errorOf(() => parse('sum(x for 3)')).message).toMatch(/expected a generator/);
+    expect(errorOf(() => parse('sum(x for y)')).suggestion).toBe('write y in S');
+    expect(errorOf(() => parse('sum(x for x in S')).message).toMatch(/never closed/);
+    expect(errorOf(() => parse('sum(a, b for x in S)')).suggestion).toMatch(/single body/);
+    expect(errorOf(() => parse('for + 1')).message).toMatch(/the word for/);
   });
 });
 
@@ -97,6 +154,10 @@ describe('syntax errors carry line, column, snippet and a suggestion', () => {
     expect(errorOf(() => parse('1 +')).message).toMatch(/ends too early/);
     expect(errorOf(() => parse('f(x in L)')).suggestion).toMatch(/comprehensions are sum/);
     expect(errorOf(() => parse('1..2..3')).message).toMatch(/two ends/);
+    expect(errorOf(() => parse('a iff b iff c')).suggestion).toMatch(/parentheses/);
+    expect(errorOf(() => parse('a implies b iff c')).suggestion).toMatch(/parentheses/);
+    expect(errorOf(() => parse('a iff b implies c')).suggestion).toMatch(/parentheses/);
+    expect(errorOf(() => parse('a implies (b) iff c')).message).toMatch(/does not chain/);
     expect(errorOf(() => parse('f(a b)')).message).toMatch(/expected , or \)/);
   });
   test('deep nesting fails fast', () => {
@@ -121,7 +182,7 @@ describe('define headers', () => {
 
 // ---- Round trips on generated trees ----
 
-const KEYWORDS = new Set(['if', 'then', 'else', 'and', 'or', 'not', 'implies', 'in', 'where', 'true', 'false']);
+const KEYWORDS = new Set(['if', 'then', 'else', 'and', 'or', 'not', 'implies', 'iff', 'in', 'for', 'where', 'true', 'false']);
 const ident = fc.stringMatching(/^[a-z][a-zA-Z0-9_]{0,4}$/).filter((s) => !KEYWORDS.has(s));
 const P = { start: 0, end: 0 };
 
@@ -136,7 +197,7 @@ const exprArb: fc.Arbitrary<Expr> = fc.letrec<{ e: Expr }>((tie) => ({
     ),
     fc.array(tie('e'), { maxLength: 3 }).map((items) => ({ type: 'list', items, ...P }) as Expr),
     fc.tuple(tie('e'), tie('e')).map(([lo, hi]) => ({ type: 'range', lo, hi, ...P }) as Expr),
-    fc.tuple(fc.constantFrom('+', '-', '*', '/', '^', '==', '!=', '<', '<=', '>', '>=', 'and', 'or', 'implies'), tie('e'), tie('e'))
+    fc.tuple(fc.constantFrom('+', '-', '*', '/', '^', '==', '!=', '<', '<=', '>', '>=', 'and', 'or', 'implies', 'iff'), tie('e'), tie('e'))
       .map(([op, left, right]) => ({ type: 'binary', op, left, right, ...P }) as Expr),
     fc.tuple(fc.constantFrom('-', 'not'), tie('e')).map(([op, operand]) => ({ type: 'unary', op, operand, ...P }) as Expr),
     fc.tuple(tie('e'), tie('e'), tie('e')).map(([cond, then, els]) => ({ type: 'if', cond, then, else: els, ...P }) as Expr),
@@ -163,6 +224,15 @@ describe('parse(print(e)) == e', () => {
         expect(stripPositions(back)).toEqual(stripPositions(e));
       }),
       { numRuns: 1500 },
+    );
+  });
+  test('on generated trees, through the binder-first hash form', () => {
+    fc.assert(
+      fc.property(exprArb, (e) => {
+        const text = printHashForm(e);
+        expect(stripPositions(parseExpression(text, o(text)))).toEqual(stripPositions(e));
+      }),
+      { numRuns: 500 },
     );
   });
   test('print is stable: print(parse(print(e))) == print(e)', () => {
