@@ -7,10 +7,10 @@
 import { EvalError, InputError } from '../../base/errors.js';
 import { nearest } from '../../base/suggest.js';
 import type { CompiledConjecture } from '../../language/conjecture/compiled.js';
-import { sampleSettingsOf, sizesOf } from '../../runner/check.js';
+import { sampleSettingsOf, sizesOf } from '../../runner/check-options.js';
 import { plannedCases } from '../../runner/plan.js';
 import type { ConjectureResult } from '../../runner/result.js';
-import { overrides, type RunRequest } from '../../runner/session.js';
+import { overrides, type RunRequest } from '../../runner/run-request.js';
 
 export function refuseNothingToCheck(compiled: CompiledConjecture[], req: RunRequest, shownPaths: string[]): void {
   if (compiled.length === 0) {
