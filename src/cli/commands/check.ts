@@ -11,6 +11,7 @@ import { agreesWithExpectation, type ConjectureResult } from '../../runner/resul
 // The worker pool, shards and resumed runs.
 import { startCheckRun, workerCount } from '../../runner/threaded-run.js';
 import { heldRecordsForResume, shardFlag } from './check-parallel-flags.js';
+import { checkedNothing, refuseNothingToCheck } from './check-nothing.js';
 import { formatResult, formatSummary } from '../../reports/human.js';
 import { resultDocument } from '../../reports/json.js';
 import { ProgressLine } from '../../reports/progress.js';
@@ -109,6 +110,7 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   } catch (e) {
     throw explainSkippedPlugins(e, project);
   }
+  refuseNothingToCheck(compiled, req, paths);
   const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger });
   req.regression = recorder.regressionCases(compiled);
   if (flags.resume) req.resume = heldRecordsForResume(flags.ledger, project.config.ledger, compiled);
@@ -182,7 +184,12 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
       t.out(t.color.yellow(`Interrupted${left ? `: ${left} conjecture${left === 1 ? '' : 's'} not started` : ''}; what was finished is recorded.\n`));
     }
   }
+  // A "holds" over no case at all (a family found empty only while running) is no pass.
+  const nothing = results.filter(checkedNothing);
+  for (const r of nothing)
+    t.err(`${t.color.red('nothing checked:')} ${r.id} had no case at any size it was checked at; it is not counted as holding.\n`);
   if (interrupted) return EXIT.interrupted;
+  if (nothing.length) return EXIT.contradicted;
   return results.every((r) => agreesWithExpectation(r) || (r.outcome === 'incomplete' && r.expect !== 'fails'))
     ? EXIT.ok
     : EXIT.contradicted;
