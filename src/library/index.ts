@@ -29,3 +29,7 @@ import './sequences.js';
 import './kronecker.js';
 import './signedPermutations.js';
 import './paths.js';
+import './symmetricPolynomialBases.js';
+import './schubertCombinatorics.js';
+import './insertion.js';
+import './quasisymmetric.js';

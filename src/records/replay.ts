@@ -12,7 +12,7 @@ import { getFunction } from '../library/registry.js';
 import { bindingTexts, explainCase, frameFor } from '../runner/case-report.js';
 import { evaluateCase, SKIPPED } from '../runner/evaluate-case.js';
 import { notACaseReason } from '../runner/case-validity.js';
-import { sampleSettingsOf } from '../runner/check.js';
+import { sampleSettingsOf } from '../runner/check-options.js';
 import { decodeValue } from '../values/decode.js';
 import { canonicalForm, conjectureHash } from './hash.js';
 import { conjectureText, readCounterexampleFile, type CounterexampleFile, type PluginNeed } from './counterexample-file.js';

@@ -38,6 +38,15 @@ describe('hunch guess', () => {
     expect(j.tried.map((t: { guessClass: string }) => t.guessClass)).toEqual(expect.arrayContaining(['polynomials in n', 'P-recursive recurrences', 'algebraic generating functions']));
   }, 60_000);
 
+  test('hunch table shows the best guess under the table, and in its JSON (Fibonacci numbers, OEIS A000045)', () => {
+    const r = runCli(['table', 'fibonacci(n)', '--over', 'n=0..12']);
+    expect(r.stdout).toContain('Best guess, with a(n) the value: a(n + 2) == a(n + 1) + a(n)  (C-finite recurrence, order 2; found from the terms n = 0..3, confirmed by n = 4..12 (9 terms))');
+    const j = JSON.parse(runCli(['table', 'fibonacci(k)', '--over', 'k=0..12', '--json']).stdout);
+    expect(j.bestGuess).toMatchObject({ kind: 'c-finite', evidence: { foundFrom: [0, 3] } });
+    const none = runCli(['table', 'perm([1])', '--over', 'n=1..3']);
+    expect(none.stdout).not.toContain('Best guess');
+  }, 60_000);
+
   test('--json gives the evidence as ranges', () => {
     const r = runCli(['guess', 'fibonacci(n)', '--over', 'n=0..12', '--json']);
     const j = JSON.parse(r.stdout);
@@ -57,6 +66,18 @@ describe('hunch guess', () => {
     expect(t.code).toBe(2);
     expect(t.stderr).toContain('must lie beyond');
   }, 60_000);
+
+  test('--divide-by: the quotient by another column is guessed too, and its conjecture holds further (involutions, OEIS A000085)', () => {
+    const file = join(dir, 'quotient.yaml');
+    const g = runCli(['guess', 'count(w in involutions(n))*factorial(2*n)', '--over', 'n=0..12', '--divide-by', 'factorial(2*n)', '--write', file, '--to', '14', '--pick', '1']);
+    expect(g.code).toBe(0);
+    expect(g.stdout).toContain('c(n) = factorial(2*n)');
+    expect(g.stdout).toContain('b(n + 2) == b(n + 1) + (n + 1)*b(n)');
+    expect(g.stdout).toContain('where b(n) = a(n)/c(n)');
+    const c = runCli(['check', file, '--workers', '1'], { cwd: dir, timeout: 180_000 });
+    expect(c.stdout).toMatch(/holds/);
+    expect(c.code).toBe(0);
+  }, 300_000);
 
   // Each written file holds on a range beyond the terms it was guessed from.
   const cases: Array<[string, string, string, number, string]> = [

@@ -5,10 +5,10 @@ import { InputError } from '../../base/errors.js';
 import { MAX_EXHAUSTIVE_SIZES } from '../../language/conjecture/compile-conjecture.js';
 import '../../families/index.js';
 import '../../library/index.js';
-import { prepareRun, type RunRequest } from '../../runner/session.js';
+import { prepareRun, type RunRequest } from '../../runner/run-request.js';
 import { agreesWithExpectation, type ConjectureResult } from '../../runner/result.js';
 // The worker pool, shards and resumed runs.
-import { startCheckRun, workerCount } from '../../runner/parallel/run-check.js';
+import { startCheckRun, workerCount } from '../../runner/threaded-run.js';
 import { heldRecordsForResume, shardFlag } from './check-parallel-flags.js';
 import { formatResult, formatSummary } from '../../reports/human.js';
 import { resultDocument } from '../../reports/json.js';

@@ -30,8 +30,7 @@ function row(e: NotebookEntry): string {
     `<td class="exhaustive">${h(e.exhaustive)}</td>`,
     `<td class="sampled sampled-text">${h(e.sampled)}</td>`,
     `<td class="bar">${sizeBar(e.sizes)}</td>`,
-    `<td class="stale">${e.stale ? h(e.stale) : '<span class="unknown">none</span>'}</td>`,
-    `<td class="time">${h(formatMs(e.ms))}</td>`,
+    `<td class="records">${h(formatMs(e.ms))}<br>${e.stale ? `stale: ${h(e.stale)}` : 'nothing stale'}</td>`,
     '</tr>',
   ].join('');
 }
@@ -86,7 +85,7 @@ export function reportPage(n: NotebookModel): string {
     `<p class="note">${h(EVIDENCE_NOTE)}</p>`,
     `<div class="legend">${legend()}</div>`,
     '<table id="conjectures">',
-    '<thead><tr><th>conjecture</th><th>statement</th><th>expect</th><th>latest</th><th>verified (exhaustive)</th><th>sampled (evidence, not proof)</th><th>sizes</th><th>stale records</th><th>time</th></tr></thead>',
+    '<thead><tr><th>conjecture</th><th>statement</th><th>expect</th><th>latest</th><th>verified (exhaustive)</th><th>sampled (evidence, not proof)</th><th>sizes</th><th>time, staleness</th></tr></thead>',
     '<tbody>',
     ...n.entries.map(row),
     '</tbody>',

@@ -3,7 +3,7 @@
 export const REPORT_CSS = `
 :root { --ink: #1d1d1f; --muted: #6b6b70; --rule: #d9d9de; --good: #2e7d32; --bad: #c62828; --warn: #a66300; --accent: #1f5fa8; }
 * { box-sizing: border-box; }
-body { font-family: system-ui, -apple-system, "Segoe UI", Roboto, "Helvetica Neue", Arial, sans-serif; color: var(--ink); margin: 2rem auto; max-width: 72rem; padding: 0 1rem; line-height: 1.45; background: #fff; }
+body { font-family: system-ui, -apple-system, "Segoe UI", Roboto, "Helvetica Neue", Arial, sans-serif; color: var(--ink); margin: 1.5rem auto; max-width: 90rem; padding: 0 1.25rem; line-height: 1.45; background: #fff; }
 h1 { font-size: 1.6rem; margin: 0 0 .25rem; }
 h2 { font-size: 1.2rem; margin: 2rem 0 .5rem; border-top: 1px solid var(--rule); padding-top: 1rem; }
 .meta, .note { color: var(--muted); font-size: .9rem; }
@@ -13,10 +13,11 @@ table { border-collapse: collapse; width: 100%; font-size: .85rem; margin-top: 1
 th, td { text-align: left; vertical-align: top; padding: .35rem .5rem; border-bottom: 1px solid var(--rule); }
 th { font-weight: 600; background: #f5f5f7; }
 td.id code { font-weight: 600; }
-td.statement { min-width: 16rem; }
-td.id { max-width: 13rem; word-break: break-word; }
-td.id .meta { font-size: .75rem; }
-td.exhaustive, td.sampled { min-width: 9rem; }
+td.statement { min-width: 14rem; }
+td.id code { white-space: nowrap; }
+td.id .meta { font-size: .75rem; overflow-wrap: anywhere; }
+td.exhaustive, td.sampled { min-width: 8rem; }
+td.records { font-size: .8rem; color: var(--muted); white-space: nowrap; }
 .outcome { font-weight: 600; white-space: nowrap; }
 .agrees { color: var(--good); }
 .disagrees { color: var(--bad); }

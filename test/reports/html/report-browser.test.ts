@@ -41,7 +41,7 @@ describe.skipIf(!haveBrowser)('the report page in a real browser', () => {
     const { chromium } = await import('playwright-core');
     const browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: BROWSER_ARGS });
     try {
-      const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+      const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
       const tab = await context.newPage();
       const url = pathToFileURL(page).href;
       const requests: string[] = [];
@@ -81,8 +81,10 @@ describe.skipIf(!haveBrowser)('the report page in a real browser', () => {
       expect(colours.size).toBeGreaterThan(20);
       expect(inked / (img.width * img.height)).toBeGreaterThan(0.01);
       if (process.env.HUNCH_UPDATE_SCREENSHOT === '1') {
-        const top = await tab.screenshot({ clip: { x: 0, y: 0, width: 1280, height: 900 } });
+        const top = await tab.screenshot({ clip: { x: 0, y: 0, width: 1440, height: 900 } });
         writeFileSync(join(ROOT, 'test', 'reports', 'html', 'report.png'), top);
+        const section = await tab.$('section.counterexample[data-id="maj-bounded-by-inv"]');
+        if (section) writeFileSync(join(ROOT, 'test', 'reports', 'html', 'report-counterexample.png'), await section.screenshot());
       }
     } finally {
       await browser.close();
