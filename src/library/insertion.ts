@@ -13,6 +13,7 @@ import {
   checkReducedWord, edelmanGreeneInsert, insertTwoLine, isSkewSemistandard, rectifyRows, sortTwoLine, twoLineArrayOf,
 } from './tableaux/insertion.js';
 import { transposeRows } from './tableaux/descents.js';
+import { heckeInsert } from './tableaux/hecke.js';
 
 const topic = 'tableaux';
 
@@ -99,5 +100,22 @@ defineFunction({
     checkReducedWord(word, 'edelmanGreene(a)');
     const { P, Q } = edelmanGreeneInsert(word);
     return [new Tableau(P), new Tableau(Q)];
+  },
+});
+
+defineFunction({
+  name: 'hecke',
+  topic,
+  params: [{ name: 'a', type: 'list' }],
+  returns: 'list',
+  description: 'Hecke insertion of a word of positive integers: [P, Q], P an increasing tableau (its reading word has the same Demazure product as a), Q the set-valued recording tableau as rows of lists of labels',
+  example: 'hecke([1, 2, 1, 1])',
+  exampleValue: '[tableau([[1, 2], [2]]), [[[1], [2]], [[3, 4]]]]',
+  source: 'Buch, Kresch, Shimozono, Tamvakis and Yong, "Stable Grothendieck polynomials and K-theoretic factor sequences", Math. Ann. 340 (2008), §2; on reduced words it is Edelman–Greene insertion',
+  impl: (a) => {
+    const word = intList(a, 'hecke(a)');
+    for (const x of word) if (x < 1) fail(`hecke(a) needs positive integers, got [${word.join(', ')}]`);
+    const { P, Q } = heckeInsert(word);
+    return [new Tableau(P), Q];
   },
 });
