@@ -30,6 +30,4 @@ export function runCli(args: string[], opts: { cwd?: string; env?: Record<string
   return { code: r.status, stdout: r.stdout, stderr: r.stderr };
 }
 
-export function tempDir(prefix = 'hunch-test-'): string {
-  return mkdtempSync(join(tmpdir(), prefix));
-}
+export { tempDir } from '../helpers/temp-dirs.js';
