@@ -1,7 +1,7 @@
 // How a user sees a problem: one clear message with file:line:column, the offending text and the
 // nearest valid name — never a stack trace.
 
-import { EvalError, InputError } from '../base/errors.js';
+import { EvalError, InputError, InputErrors } from '../base/errors.js';
 import { escapeControl } from '../base/escape.js';
 import type { ErrorInfo } from '../runner/result.js';
 import type { Terminal } from './terminal.js';
@@ -28,6 +28,7 @@ export function formatLocated(
 }
 
 export function formatError(t: Terminal, e: unknown): string {
+  if (e instanceof InputErrors) return e.errors.map((x) => formatError(t, x)).join('');
   if (e instanceof InputError) return formatLocated(t, e.message, e.pos ? e.pos : undefined, e.snippet, e.suggestion);
   if (e instanceof EvalError) return formatLocated(t, e.message, e.pos);
   const msg = e instanceof Error ? e.message : String(e);

@@ -132,3 +132,15 @@ defineFunction({
     return Ideal.of(gens, ring);
   },
 });
+
+defineFunction({
+  name: 'generators',
+  topic,
+  params: [{ name: 'I', type: 'ideal' }],
+  returns: 'list',
+  description: 'the generators of I as it was given (zeros left out); for a matrix Schubert ideal, its essential minors',
+  example: 'generators(matrixSchubertIdeal(perm([1, 3, 2]), x))',
+  exampleValue: '[x[1,1]*x[2,2] - x[1,2]*x[2,1]]',
+  source: 'definition',
+  impl: (I) => (I as Ideal).gens.slice(),
+});

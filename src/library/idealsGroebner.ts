@@ -99,8 +99,7 @@ defineFunction({
   impl: (f, I, order) => {
     const J = I as Ideal, g = f as PolyLike;
     const ord = termOrderArg('normalForm(f, I, order)', order, ringWith(J, [g]));
-    basisFor(J, ord); // checks the order covers the ring
-    return normalForm(g, J.gens, ord, J.groebnerOptions());
+    return normalForm(g, basisFor(J, ord), ord, { ...J.groebnerOptions(), assumeBasis: true });
   },
 });
 

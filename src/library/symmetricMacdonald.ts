@@ -1,11 +1,11 @@
 // Hall–Littlewood and modified Macdonald symmetric functions (LIBRARY.md, "Symmetric functions"):
-// Kostka–Foulkes polynomials by charge, Hall–Littlewood P and Q, the modified Macdonald
+// Hall–Littlewood P and Q (through Kostka–Foulkes polynomials by charge), the modified Macdonald
 // polynomials H~_mu(x; q, t) by the inv/maj formula on fillings, and their Schur coefficients
 // (the modified q,t-Kostka polynomials). The parameters may be indeterminates or any values.
 
 import { fail } from '../base/errors.js';
 import { pmul, type PolyLike } from '../algebra/polynomial.js';
-import { bOf, hallLittlewoodPTable, kostkaFoulkes } from '../algebra/symmetric/hallLittlewood.js';
+import { bOf, hallLittlewoodPTable } from '../algebra/symmetric/hallLittlewood.js';
 import { MACDONALD_MAX, macdonaldHTable } from '../algebra/symmetric/macdonald.js';
 import { sizeOfParts } from '../algebra/symmetric/partitions.js';
 import { evalBi, evalUni } from '../algebra/symmetric/qtTables.js';
@@ -32,27 +32,8 @@ function hallLittlewood(lam: number[], t: PolyLike, scale: PolyLike): SymLike {
   return m.result();
 }
 
-defineFunction({
-  name: 'kostkaFoulkes',
-  topic,
-  params: [
-    { name: 'lambda', type: ['partition', 'list'] },
-    { name: 'mu', type: ['partition', 'list'] },
-    { name: 't', type: 'scalarOrPolynomial' },
-  ],
-  returns: 'scalarOrPolynomial',
-  description:
-    'the Kostka–Foulkes polynomial K_{lambda mu}(t): the sum of t^charge(T) over semistandard tableaux T of shape lambda and content mu (K_{lambda mu}(1) is the Kostka number)',
-  example: 'kostkaFoulkes([2, 1], [1, 1, 1], t)',
-  exampleValue: 't^2 + t',
-  source: `${MACDONALD}, III.6 (charge, (6.5)) and the tables of III.6; tested against III.6 Ex. 2 for mu = (1^n)`,
-  impl: (l, m, t) => {
-    const call = 'kostkaFoulkes(lambda, mu, t)';
-    const lam = shape(call, l, 14), mu = shape(call, m, 14, 'mu');
-    if (sizeOfParts(lam) !== sizeOfParts(mu)) return 0;
-    return evalUni(kostkaFoulkes(lam, mu), t as PolyLike);
-  },
-});
+// kostkaFoulkes(lambda, mu, t) is registered once, with the charge statistic (src/library/charge.ts);
+// test/algebra/symmetric checks this module's kostkaFoulkes against it.
 
 defineFunction({
   name: 'hallLittlewoodP',

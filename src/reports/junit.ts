@@ -7,17 +7,9 @@ import { decodeValue } from '../values/decode.js';
 import { valueToText } from '../values/operations.js';
 import { escapeControl } from '../base/escape.js';
 import { formatCount } from '../base/format-count.js';
+import { xmlEscape } from './markup/xml.js';
 
-/** Escape text for XML content and attributes; control characters are shown as \xNN, others XML 1.0 cannot hold are dropped. */
-export function xmlEscape(s: string): string {
-  return escapeControl(s)
-    .replace(/[^\x09\x0a\x0d\x20-\ud7ff\ue000-\ufffd\u{10000}-\u{10ffff}]/gu, '')
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;')
-    .replace(/"/g, '&quot;')
-    .replace(/'/g, '&apos;');
-}
+export { xmlEscape };
 
 const seconds = (ms: number) => (ms / 1000).toFixed(3); // a timing: the one place floats are fine
 

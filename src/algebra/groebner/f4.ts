@@ -351,9 +351,9 @@ class F4 {
         start.push({ mult: T.quotient(pr.lcm, this.polys[pr.i].mons[0]), poly: pr.i });
         start.push({ mult: T.quotient(pr.lcm, this.polys[pr.j].mons[0]), poly: pr.j });
       }
-      const t0 = TRACE ? performance.now() : 0;
+      const t0 = TRACE ? performance.now() : 0, c0 = TRACE ? process.cpuUsage().user : 0;
       const fresh = this.reduceRows(start, false);
-      if (TRACE) console.error(`step ${this.stats.steps} sugar ${sugar} pairs ${chosen.length} new ${fresh.length} basis ${this.activeList.length} monomials ${T.count} ${this.lastShape} ${(performance.now() - t0).toFixed(0)} ms`);
+      if (TRACE) console.error(`step ${this.stats.steps} sugar ${sugar} pairs ${chosen.length} new ${fresh.length} basis ${this.activeList.length} monomials ${T.count} ${this.lastShape} ${(performance.now() - t0).toFixed(0)} ms (${((process.cpuUsage().user - c0) / 1000).toFixed(0)} ms CPU)`);
       if (fresh.some((f) => T.deg[f.mons[0]] === 0)) return [unitBasis(T.nv)];
       fresh.sort((a, b) => T.cmp(a.mons[0], b.mons[0]));
       for (const f of fresh) {

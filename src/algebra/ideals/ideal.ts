@@ -21,6 +21,7 @@ import { MonomialIdeal } from '../monomialIdeals/monomialIdeal.js';
 import { fromTerms, isPolynomial, polyText, psub, type PolyLike } from '../polynomial.js';
 import { parsePolynomialText } from '../polynomialText.js';
 import { rankOf, varId, varName } from '../variables.js';
+import { idealShouldStop } from './stop.js';
 
 /** Bounds on every basis computation behind an ideal's invariants, unless a caller sets its own. */
 export const DEFAULT_IDEAL_LIMITS: GroebnerOptions = { maxBasisSize: 20_000 };
@@ -75,7 +76,7 @@ export class Ideal implements Structured {
   }
 
   groebnerOptions(extra: GroebnerOptions = {}): GroebnerOptions {
-    return { ...DEFAULT_IDEAL_LIMITS, ...extra, prime: this.prime };
+    return { ...DEFAULT_IDEAL_LIMITS, shouldStop: idealShouldStop, ...extra, prime: this.prime };
   }
 
   /** grevlex on the ring's variables in print order. */

@@ -25,10 +25,11 @@ export function toPolynomialIn(f: SymLike, x: string, m: number): PolyLike {
 }
 
 /** Split p into x-exponent vectors (length m) with coefficients in the other variables. */
-function byXExponents(p: PolyLike, x: string, m: number, call: string): Map<string, { e: number[]; coef: PolyLike }> {
+export function xCoefficients(p: PolyLike, x: string, m: number, call: string): Map<string, { e: number[]; coef: PolyLike }> {
   const out = new Map<string, { e: number[]; coef: PolyLike }>();
   if (!isPolynomial(p)) {
-    if (!(isScalar(p) && sisZero(p))) out.set('', { e: new Array(m).fill(0), coef: p });
+    const e = new Array<number>(m).fill(0);
+    if (!(isScalar(p) && sisZero(p))) out.set(e.join(','), { e, coef: p });
     return out;
   }
   const nv = p.nv;
@@ -65,7 +66,7 @@ function byXExponents(p: PolyLike, x: string, m: number, call: string): Map<stri
 }
 
 export function fromPolynomialIn(p: PolyLike, x: string, m: number, call: string): SymLike {
-  const terms = byXExponents(p, x, m, call);
+  const terms = xCoefficients(p, x, m, call);
   // Symmetric: unchanged by each adjacent transposition of x[i], x[i+1] (they generate S_m).
   for (const { e, coef } of terms.values()) {
     let ok = true;

@@ -6,10 +6,9 @@ import '../../families/index.js';
 import '../../library/index.js';
 import { evaluate } from '../../language/expr/index.js';
 import { detectProperties } from '../../reports/sequence-properties.js';
-import { guessSequence } from '../../algebra/guessing/index.js';
+import { guessSequence, MAX_GUESS_TERMS } from '../../algebra/guessing/index.js';
 import { bestGuessLine, guessJson } from '../../reports/guesses.js';
 import { isScalar, type Scalar } from '../../numbers/rational.js';
-import { useBodyFirstWhenParsed } from '../../reports/tabulate.js';
 import { encodeValue, valueToText } from '../../values/operations.js';
 import type { Value } from '../../values/value.js';
 import { EXIT } from '../errors.js';
@@ -48,8 +47,7 @@ export const addTableCommand: AddCommand = (program, t, setExit) => {
       }
       const props = detectProperties(rows.map((r) => r[1]));
       // The simplest guess for a column of numbers (hunch guess shows them all, with --write).
-      useBodyFirstWhenParsed();
-      const best = rows.every((r) => isScalar(r[1])) ? guessSequence({ offset: lo, terms: rows.map((r) => r[1] as Scalar) }).guesses[0] : undefined;
+      const best = rows.length <= MAX_GUESS_TERMS && rows.every((r) => isScalar(r[1])) ? guessSequence({ offset: lo, terms: rows.map((r) => r[1] as Scalar) }).guesses[0] : undefined;
       if (flags.json) {
         t.out(JSON.stringify({ over: name, rows: rows.map(([v, x]) => ({ [name]: v, value: encodeValue(x) })), properties: props, ...(best ? { bestGuess: guessJson(best, 1) } : {}) }, null, 2) + '\n');
       } else {

@@ -25,7 +25,7 @@ interface NodeBase {
 
 export type ArithOp = '+' | '-' | '*' | '/' | '^';
 export type CompareOp = '==' | '!=' | '<' | '<=' | '>' | '>=';
-export type LogicOp = 'and' | 'or' | 'implies';
+export type LogicOp = 'and' | 'or' | 'implies' | 'iff';
 export type BinaryOp = ArithOp | CompareOp | LogicOp;
 
 /** The reducers that take comprehensions: sum(i^2 for i in 1..n), count(w in S where ...), ... */

@@ -1,4 +1,4 @@
-// Compiling operators and literals: lists, ranges, not/and/or/implies, ==, order comparisons,
+// Compiling operators and literals: lists, ranges, not/and/or/implies/iff, ==, order comparisons,
 // arithmetic (with a `typeof` fast path for small integers), if, and indexing.
 
 import { EvalError } from '../../base/errors.js';
@@ -118,6 +118,8 @@ export function compileLogic(cx: CompileContext, e: ExprOf<'binary'>): Compiled 
       return { fn: (fr) => a(fr) && b(fr), type: 'boolean' };
     case 'or':
       return { fn: (fr) => a(fr) || b(fr), type: 'boolean' };
+    case 'iff':
+      return { fn: (fr) => a(fr) === b(fr), type: 'boolean' };
     default:
       return { fn: (fr) => !a(fr) || b(fr), type: 'boolean' };
   }

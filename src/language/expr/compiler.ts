@@ -46,7 +46,7 @@ export interface CompilerOptions {
   defines: DefineDecl[];
 }
 
-const BOOLEAN_OPS = new Set(['and', 'or', 'implies']);
+const BOOLEAN_OPS = new Set(['and', 'or', 'implies', 'iff']);
 const ORDER_OPS = new Set(['<', '<=', '>', '>=']);
 
 

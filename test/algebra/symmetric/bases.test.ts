@@ -10,7 +10,7 @@ import { substitute } from '../../../src/algebra/polynomialOps.js';
 import { schurPolynomial } from '../../../src/algebra/schur.js';
 import { BASIS_NAMES, expandIn, fromBasis } from '../../../src/algebra/symmetric/bases.js';
 import { conjugate, partitionsOf, zee } from '../../../src/algebra/symmetric/partitions.js';
-import { hallProduct, omegaOf } from '../../../src/algebra/symmetric/products.js';
+import { hallProduct, omegaOf, symMul } from '../../../src/algebra/symmetric/products.js';
 import { fromPolynomialIn, toPolynomialIn } from '../../../src/algebra/symmetric/specialize.js';
 import { symAdd, type SymLike } from '../../../src/algebra/symmetric/symmetricFunction.js';
 import { indexedVarId } from '../../../src/algebra/variables.js';
@@ -116,5 +116,38 @@ describe('fromPolynomial', () => {
   it('refuses a polynomial that is not symmetric', () => {
     const x1 = toPolynomialIn(m(1), 'x', 1);
     expect(() => fromPolynomialIn(x1, 'x', 2, 'fromPolynomial(P, x, m)')).toThrow(/not symmetric/);
+  });
+});
+
+describe('Jacobi–Trudi: s_lambda = det(h_{lambda_i - i + j}) and det(e_{lambda\'_i - i + j}) (Macdonald I (3.4), (3.5))', () => {
+  /** The determinant by expansion over permutations, products taken in the ring. */
+  function det(entry: (i: number, j: number) => SymLike, k: number): SymLike {
+    let total: SymLike = 0;
+    const perm = Array.from({ length: k }, (_, i) => i);
+    const go = (pos: number, sign: number) => {
+      if (pos === k) {
+        let prod: SymLike = sign;
+        for (let i = 0; i < k; i++) prod = symMul(prod, entry(i, perm[i]));
+        total = symAdd(total, prod);
+        return;
+      }
+      for (let i = pos; i < k; i++) {
+        [perm[pos], perm[i]] = [perm[i], perm[pos]];
+        go(pos + 1, i === pos ? sign : -sign);
+        [perm[pos], perm[i]] = [perm[i], perm[pos]];
+      }
+    };
+    go(0, 1);
+    return total;
+  }
+  const hk = (k: number): SymLike => (k < 0 ? 0 : k === 0 ? 1 : h(k));
+  const ek = (k: number): SymLike => (k < 0 ? 0 : k === 0 ? 1 : e(k));
+  it('for every lambda of size <= 6', () => {
+    for (let n = 1; n <= 6; n++)
+      for (const lam of partitionsOf(n)) {
+        sameSym(det((i, j) => hk(lam[i] - i + j), lam.length), s(...lam));
+        const c = conjugate(lam);
+        sameSym(det((i, j) => ek(c[i] - i + j), c.length), s(...lam));
+      }
   });
 });

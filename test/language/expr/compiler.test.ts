@@ -149,6 +149,10 @@ describe('conditionals, logic, strings', () => {
     expect(ev('false and 1/0 == 1')).toBe(false);
     expect(ev('true or 1/0 == 1')).toBe(true);
     expect(ev('false implies 1/0 == 1')).toBe(true);
+    // iff: both sides are evaluated; the truth table
+    expect([ev('true iff true'), ev('true iff false'), ev('false iff true'), ev('false iff false')]).toEqual([true, false, false, true]);
+    expect(ev('all((t_mod(n, 2) == 0) iff (t_mod(n*n, 2) == 0) for n in 1..20)')).toBe(true);
+    expect(errorOf(() => ev('1 iff true')).message).toMatch(/left side of iff must be true or false/);
     expect(ev('not (1 == 2)')).toBe(true);
     expect(ev('"abc"[2]')).toBe('b');
   });
