@@ -13,7 +13,7 @@ import { InputError } from '../base/errors.js';
 import type { CompiledConjecture } from '../language/conjecture/compiled.js';
 import { compileConjecture } from '../language/conjecture/compile-conjecture.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
-import { loadConjectures } from '../language/conjecture/project.js';
+import { loadConjectures } from '../language/conjecture/load-conjectures.js';
 import type { CheckOptions } from '../runner/check-options.js';
 import { checkConjecture } from '../runner/in-process-executor.js';
 import type { RunHooks } from '../runner/hooks.js';

@@ -1,4 +1,4 @@
-// Schubert calculus and symmetric polynomials (LIBRARY.md §2, issue 5): Schubert, double Schubert
+// Schubert calculus and symmetric polynomials (LIBRARY.md §2): Schubert, double Schubert
 // and Grothendieck polynomials, Schur polynomials, divided differences, symmetry and
 // real-rootedness tests. The indexed indeterminates are passed by their bare name (x for x[1],
 // x[2], ...; see polyArgs.ts).

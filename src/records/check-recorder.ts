@@ -10,7 +10,7 @@ import { LedgerWriter } from './ledger.js';
 import type { Project } from './open-project.js';
 import { pluginsUsedBy } from './plugins.js';
 import { readProjectConfig } from './config.js';
-import { findProjectRoot } from './project.js';
+import { findProjectRoot } from './project-root.js';
 
 export interface CheckRecorder {
   /** Encoded binding values in `for` order, by conjecture id, from counterexamples/<id>.yaml. */

@@ -16,7 +16,7 @@ import { valueToText } from '../values/operations.js';
 import type { Value } from '../values/value.js';
 import { TOOL_VERSION } from '../version.js';
 import { writeFileAtomic } from './atomic-write.js';
-import { COUNTEREXAMPLE_DIR } from './project.js';
+import { COUNTEREXAMPLE_DIR } from './project-root.js';
 
 export const COUNTEREXAMPLE_FORMAT = 1;
 

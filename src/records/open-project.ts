@@ -5,7 +5,7 @@
 import { InputError } from '../base/errors.js';
 import { readProjectConfig, type ProjectConfig } from './config.js';
 import { loadPlugins, type LoadedPlugin } from './plugins.js';
-import { findProjectRoot } from './project.js';
+import { findProjectRoot } from './project-root.js';
 import { fingerprints, pluginConsent } from './trust.js';
 
 /** A plugin file the main thread decided to load, passed to worker threads (plain data). */

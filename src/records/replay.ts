@@ -7,7 +7,7 @@ import { EvalError, InputError } from '../base/errors.js';
 import { compileConjecture } from '../language/conjecture/compile-conjecture.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
 import { loadConjectureFile } from '../language/conjecture/load-file.js';
-import { loadConjectures } from '../language/conjecture/project.js';
+import { loadConjectures } from '../language/conjecture/load-conjectures.js';
 import { traceWitnesses, type Witness } from '../language/conjecture/witnesses.js';
 import { getFunction } from '../library/registry.js';
 import { bindingTexts, explainCase, frameFor } from '../runner/case-report.js';

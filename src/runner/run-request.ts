@@ -8,7 +8,7 @@ import { nearest } from '../base/suggest.js';
 import type { CompiledConjecture } from '../language/conjecture/compiled.js';
 import { compileConjecture } from '../language/conjecture/compile-conjecture.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
-import { loadConjectures } from '../language/conjecture/project.js';
+import { loadConjectures } from '../language/conjecture/load-conjectures.js';
 import type { Value } from '../values/value.js';
 import { sizesOf, type CheckOptions } from './check-options.js';
 import { MAX_EXHAUSTIVE_CASES, plannedCases } from './plan.js';

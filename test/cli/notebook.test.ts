@@ -1,4 +1,4 @@
-// End-to-end checks on the bundled notebook (issues 3 and 4): a sampled failure at size 20 or
+// End-to-end checks on the bundled notebook: a sampled failure at size 20 or
 // more is shrunk, written to counterexamples/, drawn, and replayed from the file alone; the
 // plugin example works and editing it makes its conjectures stale.
 

@@ -1,5 +1,5 @@
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { tempDir } from '../helpers/temp-dirs.js';
 import { join } from 'node:path';
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
@@ -8,7 +8,7 @@ import { appendRecords, LedgerWriter, parseLedger, pieceRecord, readLedger, reco
 import { parseShard } from '../../src/runner/work/slicing.js';
 import { H1, rec } from './fixtures.js';
 
-const tmp = () => mkdtempSync(join(tmpdir(), 'hunch-ledger-'));
+const tmp = () => tempDir('hunch-ledger-');
 
 describe('ledger records', () => {
   test('a piece becomes a record with its outcome', () => {

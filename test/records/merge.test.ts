@@ -1,5 +1,5 @@
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { tempDir } from '../helpers/temp-dirs.js';
 import { join } from 'node:path';
 import { Chalk } from 'chalk';
 import { describe, expect, test } from 'vitest';
@@ -8,7 +8,7 @@ import { coverageOf, mergeLedgers, mergeRecords } from '../../src/records/merge.
 import { formatMerge } from '../../src/reports/merge-summary.js';
 import { rec } from './fixtures.js';
 
-const tmp = () => mkdtempSync(join(tmpdir(), 'hunch-merge-'));
+const tmp = () => tempDir('hunch-merge-');
 
 describe('merge', () => {
   test('exact duplicates are removed; different records kept, in time order', () => {

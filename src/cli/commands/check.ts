@@ -10,7 +10,7 @@ import { prepareRun, type RunRequest } from '../../runner/run-request.js';
 import { agreesWithExpectation, type ConjectureResult } from '../../runner/result.js';
 // The worker pool, shards and resumed runs.
 import { startCheckRun, workerCount } from '../../runner/threaded-run.js';
-import { heldRecordsForResume, shardFlag } from './check-parallel-flags.js';
+import { heldRecordsForResume, shardFlag } from './shard-resume-flags.js';
 import { checkedNothing, refuseNothingToCheck } from './check-nothing.js';
 import { formatResult, formatSummary } from '../../reports/human.js';
 import { resultDocument } from '../../reports/json.js';

@@ -4,7 +4,7 @@
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { InputError } from '../../base/errors.js';
-import { CONFIG_FILE, DEFAULT_LEDGER } from '../../records/project.js';
+import { CONFIG_FILE, DEFAULT_LEDGER } from '../../records/project-root.js';
 import { EXIT } from '../errors.js';
 import type { AddCommand } from './index.js';
 

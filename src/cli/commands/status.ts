@@ -2,7 +2,7 @@
 
 import '../../families/index.js';
 import '../../library/index.js';
-import { loadConjectures } from '../../language/conjecture/project.js';
+import { loadConjectures } from '../../language/conjecture/load-conjectures.js';
 import { conjectureHash } from '../../language/conjecture/conjecture-hash.js';
 import { readLedger } from '../../records/ledger.js';
 import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
