@@ -59,7 +59,7 @@ export function lengthOf(v: Value): number {
   const hint = AMBIGUOUS[t];
   fail(
     `len(x) is not defined for ${article(t)}` +
-      (hint ? `: ${hint}` : `; it takes a list, a string, or a ${Object.keys(LENGTHS).join(', ')}`),
+      (hint ? `: ${hint}` : `; it takes a list, a string, a ${Object.keys(LENGTHS).join(', a ')}`),
   );
 }
 
