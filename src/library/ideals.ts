@@ -47,7 +47,7 @@ defineFunction({
   source: 'definition',
   impl: (z, m, n) => {
     const call = 'genericMatrix(z, m, n)';
-    return genericMatrix(indexedBaseArg(call, 'z', z), smallIntArg(call, 'm', m, 0, 100), smallIntArg(call, 'n', n, 0, 100));
+    return genericMatrix(indexedBaseArg(call, 'z', z), smallIntArg(call, 'm', m, 0, 400), smallIntArg(call, 'n', n, 0, 400));
   },
 });
 
@@ -127,8 +127,20 @@ defineFunction({
   impl: (w, z) => {
     const call = 'matrixSchubertIdeal(w, z)';
     const a = (w as Permutation).a;
-    if (a.length > 12) fail(`${call} is limited to permutations of at most 12 points`);
+    if (a.length > 9) fail(`${call} is limited to permutations of at most 9 points`);
     const { gens, ring } = matrixSchubertGenerators(a, indexedBaseArg(call, 'z', z));
     return Ideal.of(gens, ring);
   },
+});
+
+defineFunction({
+  name: 'generators',
+  topic,
+  params: [{ name: 'I', type: 'ideal' }],
+  returns: 'list',
+  description: 'the generators of I as it was given (zeros left out); for a matrix Schubert ideal, its essential minors',
+  example: 'generators(matrixSchubertIdeal(perm([1, 3, 2]), x))',
+  exampleValue: '[x[1,1]*x[2,2] - x[1,2]*x[2,1]]',
+  source: 'definition',
+  impl: (I) => (I as Ideal).gens.slice(),
 });

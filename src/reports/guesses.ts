@@ -6,13 +6,17 @@ import { evidenceText } from './guess-conjecture.js';
 
 export const GUESS_CAVEAT = 'Guesses agree with every term given; that proves nothing beyond those terms. Write them as conjectures (--write FILE) and check them on more.';
 
+function terms(k: number): string {
+  return k === 1 ? '1 term' : `${k} terms`;
+}
+
 export function formatGuesses(report: GuessReport, header: string, dim: (s: string) => string = (s) => s): string {
   let out = '';
   if (report.guesses.length === 0) {
-    out += `No guess fits ${header} (${report.terms} terms, n = ${report.offset}..${report.offset + report.terms - 1}).\n`;
+    out += `No guess fits ${header} (${terms(report.terms)}, n = ${report.offset}..${report.offset + report.terms - 1}).\n`;
     out += `Tried, each class needing ${MIN_CONFIRMING_TERMS} terms beyond those that determine a guess:\n`;
-    for (const t of report.tried) out += `  - ${t.guessClass}${t.extent ? `: ${t.extent}` : ''} (${t.terms} terms)\n`;
-    if (report.tried.length === 0) out += `  nothing: ${report.terms} terms are too few for any class\n`;
+    for (const t of report.tried) out += `  - ${t.guessClass}${t.extent ? `: ${t.extent}` : ''} (${terms(t.terms)})\n`;
+    if (report.tried.length === 0) out += `  nothing: ${terms(report.terms)} ${report.terms === 1 ? 'is' : 'are'} too few for any class\n`;
     return out;
   }
   out += `Guesses for ${header}, simplest first:\n`;

@@ -6,7 +6,8 @@ import type { ChalkInstance } from 'chalk';
 import { decodeValue } from '../values/decode.js';
 import { valueToText } from '../values/operations.js';
 import { agreesWithExpectation, type ConjectureResult, type Counterexample } from '../runner/result.js';
-import { describeCoverage, formatCount, formatMs } from './coverage.js';
+import { formatCount } from '../base/format-count.js';
+import { describeCoverage, formatMs } from './coverage-text.js';
 import { drawValue } from './pictures/index.js';
 import { witnessLines } from './witnesses.js';
 

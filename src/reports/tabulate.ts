@@ -1,7 +1,6 @@
 // Evaluating one expression over a range of one variable, as `hunch table` and `hunch guess` do.
 
-import { InputError } from '../base/errors.js';
-import { setBodyFirst } from '../algebra/guessing/index.js';
+import { EvalError, InputError } from '../base/errors.js';
 import { evaluate } from '../language/expr/index.js';
 import { isScalar, type Scalar } from '../numbers/rational.js';
 import { valueToText } from '../values/operations.js';
@@ -9,7 +8,15 @@ import type { Value } from '../values/value.js';
 
 export function tabulate(expr: string, name: string, lo: number, hi: number, lets: Array<[string, string]> = [], indeterminates: string[] = []): Array<[number, Value]> {
   const rows: Array<[number, Value]> = [];
-  for (let v = lo; v <= hi; v++) rows.push([v, evaluate(expr, [[name, String(v)], ...lets], indeterminates)]);
+  for (let v = lo; v <= hi; v++) {
+    try {
+      rows.push([v, evaluate(expr, [[name, String(v)], ...lets], indeterminates)]);
+    } catch (e) {
+      // Say at which value of the variable it failed; a mistake in the text itself is reported as it is.
+      if (e instanceof EvalError) throw new EvalError(`${e.message} (at ${name} = ${v})`, e.pos);
+      throw e;
+    }
+  }
   return rows;
 }
 
@@ -21,12 +28,3 @@ export function scalarColumn(rows: Array<[number, Value]>, name: string, what: s
   });
 }
 
-/** Comprehensions in guesses take the body-first form when this build's parser reads it. */
-export function useBodyFirstWhenParsed(): void {
-  try {
-    evaluate('sum(k for k in 1..2)');
-    setBodyFirst(true);
-  } catch {
-    setBodyFirst(false);
-  }
-}

@@ -1,10 +1,10 @@
 // The outcome of checking one conjecture, shaped like CLI.md's result document. Values inside are
 // already encoded (encodeValue), so a result can be printed, written to JSON or to the ledger as is.
 
+import type { Expectation } from '../language/conjecture/conjecture.js';
 import type { Witness } from '../language/conjecture/witnesses.js';
 
-export type { Witness };
-export type Expectation = 'holds' | 'fails' | 'open';
+export type { Expectation, Witness };
 export type Outcome = 'holds' | 'fails' | 'error' | 'incomplete';
 export type Phase = 'exhaustive' | 'sample' | 'regression';
 

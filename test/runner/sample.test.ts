@@ -8,7 +8,7 @@
 
 import { describe, expect, it } from 'vitest';
 import { check, compileAll, compileOne, doc } from './helpers.js';
-import { checkConjecture } from '../../src/runner/check.js';
+import { checkConjecture } from '../../src/runner/in-process-executor.js';
 import type { ConjectureResult } from '../../src/runner/result.js';
 
 /** A true claim whose `where` skips about half the draws: the skipped counts fingerprint the cases. */

@@ -8,7 +8,7 @@
 import { denOf, makeRat, numOf, type Scalar } from '../../numbers/rational.js';
 import { ipow } from '../../numbers/integer.js';
 import { sdiv, seq as sEq, smul, spow } from '../../numbers/scalar.js';
-import { intPolyText } from './text.js';
+import { factor, intPolyText } from './text.js';
 
 export interface FactorialTerm {
   /** factorial(u k + v)^m */
@@ -21,6 +21,26 @@ export interface FactorialForm {
   constant: Scalar;
   base: Scalar;
   factorials: FactorialTerm[];
+  /** (u k + v)^m: what is left of factorial(u k + v + j)/factorial(u k + v') for small j. */
+  linear: FactorialTerm[];
+}
+
+/** factorial(x + j)/factorial(x) for 1 <= j <= 3 becomes (x + 1)...(x + j): fewer factorials to read. */
+function simplifyAdjacent(facts: FactorialTerm[]): { factorials: FactorialTerm[]; linear: FactorialTerm[] } {
+  const left = facts.map((f) => ({ ...f }));
+  const linear: FactorialTerm[] = [];
+  for (const up of left)
+    for (const down of left) {
+      if (up.m !== 1 || down.m !== -1 || up.u !== down.u) continue;
+      const j = Math.abs(up.v - down.v);
+      if (j < 1 || j > 3) continue;
+      const lo = Math.min(up.v, down.v);
+      const sign = up.v > down.v ? 1 : -1;
+      for (let i = 1; i <= j; i++) linear.push({ u: up.u, v: lo + i, m: sign });
+      up.m = 0;
+      down.m = 0;
+    }
+  return { factorials: left.filter((f) => f.m !== 0), linear };
 }
 
 interface Root {
@@ -98,9 +118,15 @@ export function factorialOf(n: number, cache: Map<number, bigint>): bigint {
   return v;
 }
 
-/** base^k * prod factorial(u k + v)^m, or null when some factorial argument is negative. */
-export function factorialPart(base: Scalar, facts: readonly FactorialTerm[], k: number, cache: Map<number, bigint>): Scalar | null {
+/** base^k * prod factorial(u k + v)^m * prod (u k + v)^m, or null when some factorial argument is negative or a linear factor vanishes. */
+export function factorialPart(base: Scalar, facts: readonly FactorialTerm[], k: number, cache: Map<number, bigint>, linear: readonly FactorialTerm[] = []): Scalar | null {
   let num = 1n, den = 1n;
+  for (const f of linear) {
+    const x = BigInt(f.u * k + f.v);
+    if (x === 0n) return null;
+    if (f.m > 0) num *= x ** BigInt(f.m);
+    else den *= x ** BigInt(-f.m);
+  }
   for (const f of facts) {
     const x = f.u * k + f.v;
     if (x < 0) return null;
@@ -114,13 +140,15 @@ export function factorialPart(base: Scalar, facts: readonly FactorialTerm[], k: 
 /** The factorial form a(k) with a(k0) = a0, valid for k >= k0; null when a factorial argument is negative at k0. */
 export function completeForm(a0: Scalar, k0: number, ratio: { base: Scalar; factorials: FactorialTerm[] }): FactorialForm | null {
   const cache = new Map<number, bigint>();
+  const { factorials, linear } = simplifyAdjacent(ratio.factorials);
+  // The factorials as found must make sense from k0 on (the simplified form is equal there).
   const at0 = factorialPart(ratio.base, ratio.factorials, k0, cache);
   if (at0 === null || sEq(at0, 0)) return null;
-  return { constant: sdiv(a0, at0), base: ratio.base, factorials: ratio.factorials };
+  return { constant: sdiv(a0, at0), base: ratio.base, factorials, linear };
 }
 
 export function evaluateForm(f: FactorialForm, k: number, cache: Map<number, bigint>): Scalar | null {
-  const p = factorialPart(f.base, f.factorials, k, cache);
+  const p = factorialPart(f.base, f.factorials, k, cache, f.linear);
   return p === null ? null : smul(f.constant, p);
 }
 
@@ -138,6 +166,11 @@ export function factorialFormText(f: FactorialForm, v: string): string {
   const abn = bn < 0n ? -bn : bn;
   if (abn !== 1n) num.push(`${abn}^${v}`);
   if (bd !== 1n) den.push(`${bd}^${v}`);
+  for (const t of f.linear) {
+    const arg = intPolyText([BigInt(t.v), BigInt(t.u)], v);
+    const text = factor(arg);
+    (t.m > 0 ? num : den).push(Math.abs(t.m) === 1 ? text : `${text}^${Math.abs(t.m)}`);
+  }
   for (const t of f.factorials) {
     const arg = intPolyText([BigInt(t.v), BigInt(t.u)], v);
     const text = Math.abs(t.m) === 1 ? `factorial(${arg})` : `factorial(${arg})^${Math.abs(t.m)}`;

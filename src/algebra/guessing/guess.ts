@@ -9,7 +9,7 @@ import { guessPolynomial } from './polynomialFit.js';
 import { rationalGeneratingFunction, recurrenceGuess, searchRecurrence } from './recurrence.js';
 import { factor, ratPolyText, intPolyText } from './text.js';
 import { STANDARD_TRANSFORMS, byColumn, type Transform } from './transforms.js';
-import type { Attempt, ClaimPlan, Guess, GuessKind, GuessReport, Sequence } from './types.js';
+import { MAX_GUESS_TERMS, MIN_CONFIRMING_TERMS, type Attempt, type ClaimPlan, type Guess, type GuessKind, type GuessReport, type Sequence } from './types.js';
 
 export interface GuessOptions {
   /** Also try a(n)/c(n) for this column, whose function is called `name` in a conjecture. */
@@ -30,7 +30,9 @@ function directGuesses(seq: Sequence, light: boolean): { guesses: Guess[]; tried
   const tried: Attempt[] = [];
   const poly = guessPolynomial(seq);
   tried.push(...poly.tried);
-  if (poly.guess) return { guesses: [poly.guess], tried };
+  // A polynomial says it all; a quasi-polynomial may still have a simpler recurrence.
+  if (poly.guess?.kind === 'polynomial') return { guesses: [poly.guess], tried };
+  if (poly.guess) guesses.push(poly.guess);
   const rec = searchRecurrence(seq, light ? { maxOrder: 1 } : {});
   let cFinite = false;
   if (rec.fit) {
@@ -81,19 +83,25 @@ function transformed(t: Transform, seq: Sequence, inner: Guess): Guess {
   };
 }
 
+/** Guesses for the sequence, simplest first (at most MAX_GUESS_TERMS terms: callers refuse more). */
 export function guessSequence(seq: Sequence, opts: GuessOptions = {}): GuessReport {
+  if (seq.terms.length > MAX_GUESS_TERMS) throw new RangeError(`guessing takes at most ${MAX_GUESS_TERMS} terms, not ${seq.terms.length}`);
   const { guesses, tried } = directGuesses(seq, false);
   if (opts.transforms !== false) {
     const best = guesses.length ? Math.min(...guesses.map((g) => g.unknowns)) : Infinity;
-    const ts = [...STANDARD_TRANSFORMS, ...(opts.divisor ? [byColumn(opts.divisor.name, opts.divisor.column)] : [])];
-    for (const t of ts) {
+    // The standard transforms look for closed forms; all classes are tried on them only when nothing
+    // fits the sequence itself, and always on the quotient by a column the user gave.
+    const nothingDirect = guesses.length === 0;
+    const ts: Array<[Transform, boolean]> = STANDARD_TRANSFORMS.map((t) => [t, !nothingDirect]);
+    if (opts.divisor) ts.push([byColumn(opts.divisor.name, opts.divisor.column), false]);
+    for (const [t, light] of ts) {
       const b = t.apply(seq);
-      if (!b) continue;
-      const inner = directGuesses(b, true);
+      if (!b || b.terms.length < 1 + MIN_CONFIRMING_TERMS) continue;
+      const inner = directGuesses(b, light);
       // Offered only when simpler than every direct guess and of another kind (differences of a polynomial say nothing new).
       const simpler = inner.guesses.filter((g) => g.unknowns < best && !guesses.some((d) => !d.transform && d.kind === g.kind));
       guesses.push(...simpler.map((g) => transformed(t, seq, g)));
-      if (guesses.length === 0) tried.push({ guessClass: `after the transform b(n) = ${t.label}: polynomials, C-finite and hypergeometric`, extent: '', terms: b.terms.length });
+      if (guesses.length === 0) tried.push({ guessClass: `after the transform b(n) = ${t.label}`, extent: light ? 'polynomials, C-finite and hypergeometric' : 'every class above', terms: b.terms.length });
     }
   }
   guesses.sort(rank);

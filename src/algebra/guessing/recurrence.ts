@@ -8,7 +8,7 @@ import { bigGcd, normBig } from '../../numbers/integer.js';
 import { sadd, smul } from '../../numbers/scalar.js';
 import { findRelation } from './relation.js';
 import { intPolyText, shifted, times } from './text.js';
-import { MIN_CONFIRMING_TERMS, type Attempt, type ClaimPlan, type Guess, type Sequence } from './types.js';
+import { MAX_UNKNOWNS, MIN_CONFIRMING_TERMS, type Attempt, type ClaimPlan, type Guess, type Sequence } from './types.js';
 
 export interface RecurrenceFit {
   order: number;
@@ -38,7 +38,7 @@ export function recurrenceCandidates(terms: number, opts: RecurrenceSearch = {})
   for (let r = 1; r <= maxR; r++)
     for (let d = 0; d <= maxD; d++) {
       const cols = (r + 1) * (d + 1);
-      if (terms - r >= cols - 1 + MIN_CONFIRMING_TERMS) out.push([r, d]);
+      if (cols - 1 <= MAX_UNKNOWNS && terms - r >= cols - 1 + MIN_CONFIRMING_TERMS) out.push([r, d]);
     }
   out.sort((a, b) => (a[0] + 1) * (a[1] + 1) - (b[0] + 1) * (b[1] + 1) || a[0] - b[0] || a[1] - b[1]);
   return out;

@@ -4,14 +4,9 @@
 import { denOf, makeRat, numOf, type Scalar } from '../../numbers/rational.js';
 import { bigGcd } from '../../numbers/integer.js';
 
-/** Comprehensions are printed body first (`product(E for k in A..B)`), the canonical form. */
-export let BODY_FIRST = false;
-export function setBodyFirst(on: boolean): void {
-  BODY_FIRST = on;
-}
-
+/** A comprehension in the canonical body-first form: `product(E for k in A..B)`. */
 export function comprehension(op: string, body: string, binder: string, source: string): string {
-  return BODY_FIRST ? `${op}(${body} for ${binder} in ${source})` : `${op}(${binder} in ${source}: ${body})`;
+  return `${op}(${body} for ${binder} in ${source})`;
 }
 
 function monomial(v: string, e: number): string {

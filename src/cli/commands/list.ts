@@ -71,7 +71,7 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
       if (selF.length) {
         t.out(c.bold('Families') + '\n');
         for (const f of selF) {
-          t.out(`  ${c.cyan(f.signature)}${f.arbitrary ? '' : c.dim('  (no random sampler yet)')}\n    ${f.description}\n    example: ${f.example}\n    source: ${c.dim(f.source)}\n`);
+          t.out(`  ${c.cyan(f.signature)}\n    ${f.description}\n    example: ${f.example}\n    source: ${c.dim(f.source)}\n`);
         }
       }
       if (selFn.length) {

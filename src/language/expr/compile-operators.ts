@@ -108,7 +108,7 @@ export function compileNegate(cx: CompileContext, e: ExprOf<'unary'>): Compiled 
       if (typeof a === 'number') return a === 0 ? 0 : -a;
       return at1(ops.neg, a, pos);
     },
-    type: c.type === 'integer' || isNumericish(c.type) || c.type === 'matrix' ? c.type : 'any',
+    type: c.type === 'integer' || isNumericish(c.type) || c.type === 'matrix' || c.type === 'symmetric' ? c.type : 'any',
   };
 }
 
@@ -197,8 +197,20 @@ export function checkArith(cx: CompileContext, op: string, a: TypeName, b: TypeN
     throw errorAt(cx, `${op} is not defined for ${what}`, e,
       why ?? (op === '+' && a === 'list' && (b === 'list' || b === 'any') ? 'to join lists use concat([A, B])' : undefined));
   };
-  const arithmetic = (t: TypeName) => t === 'any' || isNumericish(t) || t === 'permutation' || t === 'matrix';
+  const arithmetic = (t: TypeName) => t === 'any' || isNumericish(t) || t === 'permutation' || t === 'matrix' || t === 'symmetric';
   if (!arithmetic(a) || (b !== undefined && !arithmetic(b))) bad();
+  // Symmetric functions: a ring over the numbers and polynomials (division only by those).
+  if (a === 'symmetric' || b === 'symmetric') {
+    if (b === undefined) return a;
+    const other = a === 'symmetric' ? b : a;
+    if (op === '^') {
+      if (b === 'symmetric' || !mayAccept('integer', b)) bad('an exponent must be an integer');
+      return 'symmetric';
+    }
+    if (op === '/' && b === 'symmetric') bad('a symmetric function can be divided only by a number or a polynomial');
+    if (other !== 'any' && other !== 'symmetric' && !isNumericish(other)) bad();
+    return 'symmetric';
+  }
   if (b === undefined) {
     if (a === 'permutation') bad('use inverse(w) or w^-1');
     return a;

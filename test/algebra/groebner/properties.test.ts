@@ -8,7 +8,7 @@ import fc from 'fast-check';
 import { fromTerms, padd, pmul, pequals, type PolyLike } from '../../../src/algebra/polynomial.js';
 import { varId } from '../../../src/algebra/variables.js';
 import type { Scalar } from '../../../src/numbers/rational.js';
-import { groebnerBasis, normalForm, termOrder, type OrderSpec } from '../../../src/algebra/groebner/index.js';
+import { groebnerBasis, isGroebnerBasis, normalForm, termOrder, type OrderSpec } from '../../../src/algebra/groebner/index.js';
 import { buchberger } from '../../../src/algebra/groebner/buchberger.js';
 import { Limits } from '../../../src/algebra/groebner/bounds.js';
 import { rationals } from '../../../src/algebra/groebner/field.js';
@@ -71,6 +71,39 @@ describe('random ideals in three variables', () => {
       const p2 = G2.map((g) => toPlain(Q, g, ids, c2));
       for (const g of G1) expect(plainRemainder(Q, toPlain(Q, g, ids, c2), p2, c2)).toEqual([]);
     }), { ...RUNS, numRuns: 25 });
+  }, 300000);
+
+  it('isGroebnerBasis (with the product and chain criteria) agrees with the plain all-pairs check', () => {
+    fc.assert(fc.property(idealArb, orderArb, fc.boolean(), (gens, spec, complete) => {
+      const o = termOrder(spec as OrderSpec, ids), cmp = plainOrders[spec];
+      // a computed basis plus a random member, or just the random generators
+      const G = complete ? [...groebnerBasis(gens, o), ...gens] : gens;
+      const nonzero = G.filter((g) => g !== 0);
+      for (const [K, prime] of [[Q, undefined], [Fp(101), 101]] as const) {
+        const plain = nonzero.map((g) => toPlain(K, g, ids, cmp)).filter((g) => g.length > 0);
+        expect(isGroebnerBasis(nonzero, o, { prime })).toBe(plainIsGroebner(K, plain, cmp));
+      }
+    }), { ...RUNS, numRuns: 60 });
+  }, 300000);
+
+  it('weight and block orders: the result is a reduced Gröbner basis for that order', () => {
+    const [r, s, w] = ids;
+    const spec: fc.Arbitrary<OrderSpec> = fc.oneof(
+      fc.tuple(fc.array(fc.integer({ min: 0, max: 3 }), { minLength: 3, maxLength: 3 }), orderArb).map(([weights, then]) => ({ weights, then })),
+      fc.tuple(orderArb, orderArb, fc.integer({ min: 0, max: 2 })).map(([a, b, k]) => {
+        const perm = [[r, s, w], [s, w, r], [w, r, s]][k];
+        return { blocks: [{ vars: [perm[0], perm[1]], order: a }, { vars: [perm[2]], order: b }] };
+      }),
+    );
+    fc.assert(fc.property(idealArb, spec, fc.constantFrom(undefined, 101), (gens, sp, prime) => {
+      const o = termOrder(sp, ids);
+      const cmp = (a: number[], b: number[]) => o.compare(a, b);
+      const K = prime ? Fp(prime) : Q;
+      const G = groebnerBasis(gens, o, { prime, maxDegree: 400 }).map((g) => toPlain(K, g, ids, cmp));
+      expect(plainIsReduced(K, G)).toBe(true);
+      expect(plainIsGroebner(K, G, cmp)).toBe(true);
+      for (const f of gens) expect(plainRemainder(K, toPlain(K, f, ids, cmp), G, cmp)).toEqual([]);
+    }), { ...RUNS, numRuns: 40 });
   }, 300000);
 
   it('the basis over Q reduces modulo 2^31 - 1 to the modular basis (a prime this large is lucky here)', () => {
