@@ -55,7 +55,7 @@ defineFunction({
 
 defineFunction({
   name: 'kostkaFoulkes',
-  topic: 'tableaux',
+  topic: 'symmetric functions',
   params: [
     { name: 'lambda', type: ['partition', 'list'] },
     { name: 'mu', type: ['partition', 'list'] },

@@ -110,7 +110,7 @@ function refuseHugeSchur(parts: readonly number[], m: number): void {
 
 defineFunction({
   name: 'schur',
-  topic,
+  topic: 'symmetric functions',
   params: [
     { name: 'lambda', type: 'partition' },
     { name: 'x', type: 'polynomial' },
@@ -177,7 +177,7 @@ function symmetricVars(call: string, p: PolyLike, vars: Value, m: Value | undefi
 
 defineFunction({
   name: 'isSymmetric',
-  topic,
+  topic: 'symmetric functions',
   params: [
     { name: 'p', type: 'scalarOrPolynomial' },
     { name: 'vars', type: ['list', 'polynomial'] },

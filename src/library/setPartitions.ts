@@ -31,3 +31,15 @@ defineFunction({
   source: 'Kreweras, Discrete Math. 1 (1972); counted by the Catalan numbers, OEIS A000108',
   impl: (s) => isNoncrossing((s as SetPartition).rgs),
 });
+
+defineFunction({
+  name: 'blocks',
+  topic,
+  params: S,
+  returns: 'list',
+  description: 'the blocks of a set partition, each increasing, ordered by least element: blocks(s)[i] == s[i], and len(s) counts them',
+  example: 'blocks(setPartition([[2, 3], [1, 4]]))',
+  exampleValue: '[[1, 4], [2, 3]]',
+  source: 'definition (R. P. Stanley, Enumerative Combinatorics, vol. 1, 2nd ed., Section 1.9)',
+  impl: (s) => (s as SetPartition).blocks().map((b) => b.slice()),
+});
