@@ -1,6 +1,7 @@
 // hunch check [PATH...]: run the conjectures, print the report, record coverage and counterexamples.
 
 import type { Command } from 'commander';
+import { availableParallelism } from 'node:os';
 import { InputError } from '../../base/errors.js';
 import { MAX_EXHAUSTIVE_SIZES } from '../../language/conjecture/compile-conjecture.js';
 import '../../families/index.js';
@@ -74,6 +75,15 @@ function limitSizes(r: [string, number, number]): [string, number, number] {
   return r;
 }
 
+/** The most random cases per size a run may ask for (a slip of a few zeros would otherwise run for days). */
+export const MAX_SAMPLE_COUNT = 10_000_000;
+
+function limitCount(n: number): number {
+  if (n > MAX_SAMPLE_COUNT)
+    throw new InputError(`--count ${n.toLocaleString('en-US')} is more than the ${MAX_SAMPLE_COUNT.toLocaleString('en-US')} random cases per size a run may draw`);
+  return n;
+}
+
 function buildRequest(paths: string[], f: CheckFlags): RunRequest {
   return {
     paths,
@@ -81,7 +91,7 @@ function buildRequest(paths: string[], f: CheckFlags): RunRequest {
     sizes: (f.sizes ?? []).map((s) => limitSizes(parseRangeOption(s, '--sizes'))),
     sampleRanges: (f.sample ?? []).map((s) => parseRangeOption(s, '--sample')),
     exhaustive: f.exhaustive,
-    count: f.count === undefined ? null : parseCount(f.count, '--count'),
+    count: f.count === undefined ? null : limitCount(parseCount(f.count, '--count')),
     seed: f.seed ?? null,
     budgetMs: f.budget === undefined ? null : parseDuration(f.budget),
     root: null,
@@ -92,7 +102,13 @@ function buildRequest(paths: string[], f: CheckFlags): RunRequest {
 export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal): Promise<number> {
   const req = buildRequest(paths, flags);
   // --workers K (default HUNCH_WORKERS, else every core), --shard I/K.
-  const workers = workerCount(flags.workers === undefined ? undefined : parseCount(flags.workers, '--workers'));
+  let workers = workerCount(flags.workers === undefined ? undefined : parseCount(flags.workers, '--workers'));
+  // More threads than cores only adds memory and switching: use every core, and say so.
+  const cores = Math.max(1, availableParallelism());
+  if (workers > cores) {
+    t.err(`${t.color.yellow('note:')} --workers ${workers} is more than the ${cores} core${cores === 1 ? '' : 's'} of this machine; using ${cores}.\n`);
+    workers = cores;
+  }
   req.shard = shardFlag(flags.shard);
   // The project (hunch.yaml, its plugins, the canonical hash) is opened in this thread and again in
   // the worker. Everything is loaded and validated here first: a bad file exits 2 before anything
