@@ -2,6 +2,8 @@
 
 import type { Command } from 'commander';
 import { availableParallelism } from 'node:os';
+import { statSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 import { InputError } from '../../base/errors.js';
 import { MAX_EXHAUSTIVE_SIZES } from '../../language/conjecture/compile-conjecture.js';
 import '../../families/index.js';
@@ -39,6 +41,7 @@ interface CheckFlags {
   ascii?: boolean;
   resume?: boolean;
   allowPlugins?: boolean;
+  counterexamples?: boolean;
 }
 
 export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
@@ -57,7 +60,8 @@ export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
     .option('--resume', 'skip the sizes and slices the ledger already holds for the conjecture as it is now')
     .option('--json', 'print the result document instead of the report')
     .option('--ledger <PATH>', 'where coverage is recorded (default: hunch-ledger.jsonl in the project root)')
-    .option('--no-ledger', 'record nothing')
+    .option('--no-ledger', 'record nothing (no ledger lines, no counterexample files unless --counterexamples)')
+    .option('--counterexamples', 'write counterexample files even with --no-ledger')
     .option('--junit <FILE>', 'also write a JUnit XML report')
     .option('--id <ID>', 'only the conjecture with this id (repeatable)', collect)
     .option('--ascii', 'plain ASCII pictures')
@@ -82,6 +86,18 @@ function limitCount(n: number): number {
   if (n > MAX_SAMPLE_COUNT)
     throw new InputError(`--count ${n.toLocaleString('en-US')} is more than the ${MAX_SAMPLE_COUNT.toLocaleString('en-US')} random cases per size a run may draw`);
   return n;
+}
+
+/** An output file's folder must exist: a typo in a path is reported before the run, not after it. */
+function refuseMissingFolder(file: string, option: string): void {
+  const dir = dirname(resolve(file));
+  let ok = false;
+  try {
+    ok = statSync(dir).isDirectory();
+  } catch {
+    ok = false;
+  }
+  if (!ok) throw new InputError(`${option} ${file}: the folder ${dir} does not exist`);
 }
 
 function buildRequest(paths: string[], f: CheckFlags): RunRequest {
@@ -113,6 +129,7 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   // The project (hunch.yaml, its plugins, the canonical hash) is opened in this thread and again in
   // the worker. Everything is loaded and validated here first: a bad file exits 2 before anything
   // is recorded.
+  if (flags.junit !== undefined) refuseMissingFolder(flags.junit, '--junit');
   const project = await openCommandProject(t, req.paths[0], { allowPlugins: flags.allowPlugins, quiet: flags.json });
   req.root = project.root;
   req.plugins = approvedPlugins(project);
@@ -124,7 +141,8 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
     throw explainSkippedPlugins(e, project);
   }
   refuseNothingToCheck(compiled, req, paths);
-  const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger });
+  // --no-ledger records nothing: no counterexample file either, unless asked for.
+  const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger, counterexamples: flags.ledger !== false || flags.counterexamples === true });
   req.regression = recorder.regressionCases(compiled);
   if (flags.resume) req.resume = heldRecordsForResume(flags.ledger, project.config.ledger, compiled);
 

@@ -415,4 +415,30 @@ export const corpus: HostileCase[] = [
     code: 3,
     stderr: ['the budget was reached'],
   },
+
+  // --- small ones -------------------------------------------------------------------------------
+  {
+    name: '--junit into a missing folder is an error before the run',
+    files: { 'a.yaml': FAILS },
+    args: ['check', 'a.yaml', '--junit', 'no/such/folder/report.xml'],
+    code: 2,
+    stderr: ['--junit no/such/folder/report.xml: the folder', 'does not exist'],
+    absent: ['hunch-ledger.jsonl', 'counterexamples', 'no'],
+  },
+  {
+    name: '--no-ledger writes no counterexample file',
+    files: { 'a.yaml': FAILS },
+    args: ['check', 'a.yaml', '--no-ledger'],
+    code: 0,
+    absent: ['hunch-ledger.jsonl', 'counterexamples'],
+  },
+  {
+    name: 'a ledger whose first line starts with a byte-order mark',
+    files: {
+      'a.yaml': HOLDS,
+      'hunch-ledger.jsonl': '\ufeff{"v":1,"id":"trivial","hash":"' + 'a'.repeat(64) + '","tool":"0.1.0","phase":"exhaustive","size":{"n":1},"cases":1,"failures":0,"skipped":0,"ms":0.1,"at":"2026-01-01T00:00:00.000Z","host":"h","run":"r","outcome":"holds"}\n',
+    },
+    args: ['status', 'a.yaml'],
+    code: 0,
+  },
 ];
