@@ -9,6 +9,7 @@ import { join, relative } from 'node:path';
 import { Document, isMap, isScalar, isSeq, parseAllDocuments, stringify, visit } from 'yaml';
 import { InputError } from '../base/errors.js';
 import { escapeControl } from '../base/escape.js';
+import { readInputFile } from '../base/read-input.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
 import type { ConjectureResult, Counterexample } from '../runner/result.js';
 import { decodeValue } from '../values/decode.js';
@@ -286,13 +287,7 @@ export function parseCounterexampleFile(text: string, path: string): Counterexam
 }
 
 export function readCounterexampleFile(path: string): CounterexampleFile {
-  let text: string;
-  try {
-    text = readFileSync(path, 'utf8');
-  } catch (e) {
-    throw new InputError(`cannot read the counterexample file ${path}: ${(e as Error).message}`);
-  }
-  return parseCounterexampleFile(text, path);
+  return parseCounterexampleFile(readInputFile(path, 'the counterexample file'), path);
 }
 
 /**

@@ -258,7 +258,8 @@ export function parseLedger(text: string, file: string): LedgerContents {
   const lines = text.split('\n');
   const endsWithNewline = text.endsWith('\n');
   for (let i = 0; i < lines.length; i++) {
-    const raw = lines[i].replace(/\r$/, '');
+    // A byte-order mark (an editor that saved the file as "UTF-8 with BOM") is not part of the record.
+    const raw = lines[i].replace(/\r$/, '').replace(/^\ufeff/, '');
     if (raw.trim() === '') continue;
     const lineNo = i + 1;
     const isLast = i === lines.length - 1 && !endsWithNewline;

@@ -12,6 +12,9 @@ import { plannedCases } from '../../runner/plan.js';
 import type { ConjectureResult } from '../../runner/result.js';
 import { overrides, type RunRequest } from '../../runner/run-request.js';
 
+/** The most random cases per size a conjecture file may ask for. */
+export const MAX_FILE_SAMPLE_COUNT = 10_000_000;
+
 export function refuseNothingToCheck(compiled: CompiledConjecture[], req: RunRequest, shownPaths: string[]): void {
   if (compiled.length === 0) {
     const where = shownPaths.length ? shownPaths.join(', ') : 'the conjecture paths';
@@ -33,6 +36,9 @@ export function refuseNothingToCheck(compiled: CompiledConjecture[], req: RunReq
   }
   const sizeOverrides = overrides(req.sizes);
   for (const cc of compiled) {
+    const fileCount = cc.spec.sample?.count ?? null;
+    if (fileCount !== null && fileCount > MAX_FILE_SAMPLE_COUNT)
+      throw new InputError(`${cc.spec.id}: sample count ${fileCount.toLocaleString('en-US')} is more than the ${MAX_FILE_SAMPLE_COUNT.toLocaleString('en-US')} random cases per size a file may ask for`, cc.spec.pos, String(fileCount));
     if (cc.sizeIndex < 0) continue;
     const b = cc.bindings[cc.sizeIndex];
     if (b.source.kind !== 'range') continue;

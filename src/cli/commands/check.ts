@@ -2,6 +2,9 @@
 
 import { formatCount } from '../../base/format-count.js';
 import type { Command } from 'commander';
+import { availableParallelism } from 'node:os';
+import { statSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 import { InputError } from '../../base/errors.js';
 import { MAX_EXHAUSTIVE_SIZES } from '../../language/conjecture/compile-conjecture.js';
 import '../../families/index.js';
@@ -41,6 +44,7 @@ interface CheckFlags {
   ascii?: boolean;
   resume?: boolean;
   allowPlugins?: boolean;
+  counterexamples?: boolean;
 }
 
 export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
@@ -59,7 +63,8 @@ export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
     .option('--resume', 'skip the sizes and slices the ledger already holds for the conjecture as it is now')
     .option('--json', 'print the result document instead of the report')
     .option('--ledger <PATH>', 'where coverage is recorded (default: hunch-ledger.jsonl in the project root)')
-    .option('--no-ledger', 'record nothing')
+    .option('--no-ledger', 'record nothing (no ledger lines, no counterexample files unless --counterexamples)')
+    .option('--counterexamples', 'write counterexample files even with --no-ledger')
     .option('--junit <FILE>', 'also write a JUnit XML report')
     .option('--id <ID>', 'only the conjecture with this id (repeatable)', collect)
     .option('--ascii', 'plain ASCII pictures')
@@ -77,6 +82,27 @@ function limitSizes(r: [string, number, number]): [string, number, number] {
   return r;
 }
 
+/** The most random cases per size a run may ask for (a slip of a few zeros would otherwise run for days). */
+export const MAX_SAMPLE_COUNT = 10_000_000;
+
+function limitCount(n: number): number {
+  if (n > MAX_SAMPLE_COUNT)
+    throw new InputError(`--count ${n.toLocaleString('en-US')} is more than the ${MAX_SAMPLE_COUNT.toLocaleString('en-US')} random cases per size a run may draw`);
+  return n;
+}
+
+/** An output file's folder must exist: a typo in a path is reported before the run, not after it. */
+function refuseMissingFolder(file: string, option: string): void {
+  const dir = dirname(resolve(file));
+  let ok = false;
+  try {
+    ok = statSync(dir).isDirectory();
+  } catch {
+    ok = false;
+  }
+  if (!ok) throw new InputError(`${option} ${file}: the folder ${dir} does not exist`);
+}
+
 function buildRequest(paths: string[], f: CheckFlags): RunRequest {
   return {
     paths,
@@ -84,7 +110,7 @@ function buildRequest(paths: string[], f: CheckFlags): RunRequest {
     sizes: (f.sizes ?? []).map((s) => limitSizes(parseRangeOption(s, '--sizes'))),
     sampleRanges: (f.sample ?? []).map((s) => parseRangeOption(s, '--sample')),
     exhaustive: f.exhaustive,
-    count: f.count === undefined ? null : parseCount(f.count, '--count'),
+    count: f.count === undefined ? null : limitCount(parseCount(f.count, '--count')),
     seed: f.seed ?? null,
     budgetMs: f.budget === undefined ? null : parseDuration(f.budget),
     root: null,
@@ -95,11 +121,18 @@ function buildRequest(paths: string[], f: CheckFlags): RunRequest {
 export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal): Promise<number> {
   const req = buildRequest(paths, flags);
   // --workers K (default HUNCH_WORKERS, else every core), --shard I/K.
-  const workers = workerCount(flags.workers === undefined ? undefined : parseCount(flags.workers, '--workers'));
+  let workers = workerCount(flags.workers === undefined ? undefined : parseCount(flags.workers, '--workers'));
+  // More threads than cores only adds memory and switching: use every core, and say so.
+  const cores = Math.max(1, availableParallelism());
+  if (workers > cores) {
+    t.err(`${t.color.yellow('note:')} --workers ${workers} is more than the ${cores} core${cores === 1 ? '' : 's'} of this machine; using ${cores}.\n`);
+    workers = cores;
+  }
   req.shard = shardFlag(flags.shard);
   // The project (hunch.yaml, its plugins, the canonical hash) is opened in this thread and again in
   // the worker. Everything is loaded and validated here first: a bad file exits 2 before anything
   // is recorded.
+  if (flags.junit !== undefined) refuseMissingFolder(flags.junit, '--junit');
   const project = await openCommandProject(t, req.paths[0], { allowPlugins: flags.allowPlugins, quiet: flags.json });
   req.root = project.root;
   req.plugins = approvedPlugins(project);
@@ -111,7 +144,8 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
     throw explainSkippedPlugins(e, project);
   }
   refuseNothingToCheck(compiled, req, paths);
-  const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger });
+  // --no-ledger records nothing: no counterexample file either, unless asked for.
+  const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger, counterexamples: flags.ledger !== false || flags.counterexamples === true });
   req.regression = recorder.regressionCases(compiled);
   if (flags.resume) req.resume = heldRecordsForResume(flags.ledger, project.config.ledger, compiled);
 

@@ -1,7 +1,7 @@
 // Helpers the compiled closures call at run time: attaching positions to errors, the boolean and
 // type guards, indexing. Kept out of the closures themselves so those stay small.
 
-import { EvalError, InputError, type SourcePos } from '../../base/errors.js';
+import { EvalError, InputError, StopSignal, type SourcePos } from '../../base/errors.js';
 import { Matrix } from '../../algebra/matrix.js';
 import { indexedVariable, Polynomial } from '../../algebra/polynomial.js';
 import { isBareVar, varName } from '../../algebra/variables.js';
@@ -21,7 +21,7 @@ export function located(e: unknown, pos: SourcePos | undefined): unknown {
     if (!e.pos) e.pos = pos;
     return e;
   }
-  if (e instanceof InputError) return e;
+  if (e instanceof InputError || e instanceof StopSignal) return e;
   if (e instanceof RangeError && /call stack/i.test(e.message)) {
     return new EvalError('the computation nested too deeply (a recursion without end?)', pos);
   }

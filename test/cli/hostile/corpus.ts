@@ -2,7 +2,8 @@
 // exit code and the message it must produce. Every one must end without a stack trace or an
 // internal error, and write nothing it should not.
 
-import { chmodSync, mkdirSync, symlinkSync } from 'node:fs';
+import { execFileSync } from 'node:child_process';
+import { chmodSync, mkdirSync, symlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { forgedFile, TRUE_BOUND } from './forge.js';
 
@@ -353,5 +354,91 @@ export const corpus: HostileCase[] = [
     args: ['check', 'a.yaml', '--no-ledger'],
     code: 1,
     stderr: ['nothing checked: all-excluded'],
+  },
+
+  // --- bounded resources ---------------------------------------------------------------------------
+  {
+    name: 'a conjecture path that is a FIFO',
+    setup: (d) => execFileSync('mkfifo', [join(d, 'a.yaml')]),
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['not a regular file'],
+  },
+  {
+    name: 'a conjecture path that is a device',
+    setup: (d) => symlinkSync('/dev/zero', join(d, 'a.yaml')),
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['not a regular file'],
+  },
+  {
+    name: 'a replay file that is a device',
+    setup: (d) => symlinkSync('/dev/zero', join(d, 'x.yaml')),
+    args: ['replay', 'x.yaml'],
+    code: 2,
+    stderr: ['not a regular file'],
+  },
+  {
+    name: 'a conjecture file over the size limit is refused before it is read',
+    setup: (d) => writeFileSync(join(d, 'a.yaml'), Buffer.alloc(17 * 1024 * 1024, 0x20)),
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['more than the 16,777,216 an input may have'],
+  },
+  {
+    name: '--count beyond the limit',
+    files: { 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml', '--count', '1000000000000'],
+    code: 2,
+    stderr: ['random cases per size a run may draw'],
+  },
+  {
+    name: 'a sample count beyond the limit in the file',
+    files: { 'a.yaml': 'conjecture: many\nexpect: holds\nfor:\n  n: 1..3\nclaim: n > 0\nsample:\n  n: 4..9\n  count: 100000000000\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a file may ask for'],
+  },
+  {
+    name: '--workers beyond the core count is capped, with a note',
+    files: { 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml', '--workers', '512', '--no-ledger'],
+    code: 0,
+    stderr: ['--workers 512 is more than the', 'using'],
+  },
+  {
+    name: 'replay honours --budget inside a long case',
+    files: {
+      'x.yaml': forgedFile('conjecture: slow\nexpect: holds\nfor:\n  n: 1..2\nclaim: count(i in 1..10^12 where i > 0) < 0\n', { n: 1 }),
+    },
+    args: ['replay', 'x.yaml', '--budget', '1s'],
+    code: 3,
+    stderr: ['the budget was reached'],
+  },
+
+  // --- small ones -------------------------------------------------------------------------------
+  {
+    name: '--junit into a missing folder is an error before the run',
+    files: { 'a.yaml': FAILS },
+    args: ['check', 'a.yaml', '--junit', 'no/such/folder/report.xml'],
+    code: 2,
+    stderr: ['--junit no/such/folder/report.xml: the folder', 'does not exist'],
+    absent: ['hunch-ledger.jsonl', 'counterexamples', 'no'],
+  },
+  {
+    name: '--no-ledger writes no counterexample file',
+    files: { 'a.yaml': FAILS },
+    args: ['check', 'a.yaml', '--no-ledger'],
+    code: 0,
+    absent: ['hunch-ledger.jsonl', 'counterexamples'],
+  },
+  {
+    name: 'a ledger whose first line starts with a byte-order mark',
+    files: {
+      'a.yaml': HOLDS,
+      'hunch-ledger.jsonl': '\ufeff{"v":1,"id":"trivial","hash":"' + 'a'.repeat(64) + '","tool":"0.1.0","phase":"exhaustive","size":{"n":1},"cases":1,"failures":0,"skipped":0,"ms":0.1,"at":"2026-01-01T00:00:00.000Z","host":"h","run":"r","outcome":"holds"}\n',
+    },
+    args: ['status', 'a.yaml'],
+    code: 0,
   },
 ];

@@ -1,0 +1,28 @@
+// Stopping inside one long case. Loops of the language (comprehensions over ranges, lists and
+// families) call tick() once per element; every 4096th call asks the poll installed by the runner
+// whether the run must stop (budget spent, Ctrl-C, SIGTERM) and if so throws StopSignal. The
+// common call is one increment and one mask test, so exhaustive loops keep their speed.
+
+import { StopSignal } from '../../base/errors.js';
+
+export type StopPoll = () => 'budget' | 'interrupt' | null;
+
+let poll: StopPoll | null = null;
+let counter = 0;
+
+export function tick(): void {
+  if ((++counter & 0xfff) !== 0 || poll === null) return;
+  const r = poll();
+  if (r) throw new StopSignal(r);
+}
+
+/** Run `body` with `p` as the stop poll (restoring the previous one afterwards). */
+export function withStopPoll<T>(p: StopPoll | null | undefined, body: () => T): T {
+  const before = poll;
+  poll = p ?? null;
+  try {
+    return body();
+  } finally {
+    poll = before;
+  }
+}
