@@ -44,3 +44,20 @@ export class EvalError extends Error {
 export function fail(message: string): never {
   throw new EvalError(message);
 }
+
+/**
+ * Several input errors found together (every YAML hazard of a file), reported in one run. The
+ * fields of InputError are the first one's; `message` lists them all, each after the first with
+ * its position; `errors` holds them apart for a caller that prints each on its own.
+ */
+export class InputErrors extends InputError {
+  constructor(public readonly errors: InputError[]) {
+    super(
+      errors.map((e, i) => (i === 0 || !e.pos ? e.message : `${e.pos.file}:${e.pos.line}:${e.pos.column}: ${e.message}`)).join('\n'),
+      errors[0]?.pos,
+      errors[0]?.snippet,
+      errors[0]?.suggestion,
+    );
+    this.name = 'InputError';
+  }
+}

@@ -1,7 +1,8 @@
 // How a user sees a problem: one clear message with file:line:column, the offending text and the
 // nearest valid name — never a stack trace.
 
-import { EvalError, InputError } from '../base/errors.js';
+import { EvalError, InputError, InputErrors } from '../base/errors.js';
+import { escapeControl } from '../base/escape.js';
 import type { ErrorInfo } from '../runner/result.js';
 import type { Terminal } from './terminal.js';
 
@@ -15,7 +16,11 @@ export function formatLocated(
   snippet?: string,
   suggestion?: string,
 ): string {
-  const where = pos?.file ? `${pos.file}${pos.line ? `:${pos.line}` : ''}${pos.column ? `:${pos.column}` : ''}: ` : '';
+  // Text from input (file names, offending text) is shown with its control bytes escaped.
+  message = escapeControl(message, true);
+  snippet = snippet === undefined ? undefined : escapeControl(snippet, true);
+  suggestion = suggestion === undefined ? undefined : escapeControl(suggestion, true);
+  const where = pos?.file ? `${escapeControl(pos.file, true)}${pos.line ? `:${pos.line}` : ''}${pos.column ? `:${pos.column}` : ''}: ` : '';
   let s = `${t.color.bold(where)}${t.color.red('error:')} ${message}\n`;
   if (snippet && !message.includes(snippet)) s += `    ${snippet.length > 120 ? snippet.slice(0, 117) + '...' : snippet}\n`;
   if (suggestion && !message.includes(suggestion)) s += `    ${t.color.dim('hint:')} ${suggestion}\n`;
@@ -23,6 +28,7 @@ export function formatLocated(
 }
 
 export function formatError(t: Terminal, e: unknown): string {
+  if (e instanceof InputErrors) return e.errors.map((x) => formatError(t, x)).join('');
   if (e instanceof InputError) return formatLocated(t, e.message, e.pos ? e.pos : undefined, e.snippet, e.suggestion);
   if (e instanceof EvalError) return formatLocated(t, e.message, e.pos);
   const msg = e instanceof Error ? e.message : String(e);

@@ -18,3 +18,6 @@ import './reducedWords/reducedWords.js';
 import './pipeDreams/pipeDreams.js';
 import './partialPermutations/partialPermutations.js';
 import './setPartitions/noncrossingPartitions.js';
+import './signedPermutations/signedPermutations.js';
+import './motzkinPaths/motzkinPaths.js';
+import './parkingFunctions/parkingFunctions.js';

@@ -8,6 +8,8 @@ import { isScalar } from '../numbers/rational.js';
 import { valueToText } from '../values/operations.js';
 import type { Value } from '../values/value.js';
 import { defineFunction } from './registry.js';
+import { Tableau } from '../families/tableaux/tableau.js';
+import { transposeRows } from './tableaux/descents.js';
 
 /** The rows, after naming the first entry that is not a number in the language's own notation. */
 function matrixRows(rows: Value): unknown[][] {
@@ -59,13 +61,19 @@ defineFunction({
 defineFunction({
   name: 'transpose',
   topic,
-  params: [{ name: 'M', type: 'matrix' }],
-  returns: 'matrix',
-  description: 'the transposed matrix',
+  params: [{ name: 'M', type: ['matrix', 'tableau'] }],
+  returns: 'any',
+  description: 'the transposed matrix; of a standard tableau, the standard tableau of the conjugate shape whose rows are its columns',
   example: 'transpose(matrix([[1, 2, 3], [4, 5, 6]]))',
   exampleValue: 'matrix([[1, 4], [2, 5], [3, 6]])',
-  source: 'definition',
-  impl: (m) => transpose(m as Matrix),
+  source: 'definition; on standard tableaux, RSK(w reversed) gives [transpose(P), evacuation(transpose(Q))] (Schützenberger; Stanley, Enumerative Combinatorics 2, Appendix A1.2)',
+  impl: (m) => {
+    if (m instanceof Tableau) {
+      if (!m.isStandard()) fail(`transpose(T) needs a standard tableau (the transpose of a semistandard one is not semistandard), got ${m.toText()}`);
+      return new Tableau(transposeRows(m.rows));
+    }
+    return transpose(m as Matrix);
+  },
 });
 
 defineFunction({

@@ -4,7 +4,8 @@
 // operands' types.
 //
 //   + - * /   numbers, polynomials (a constant result is a number), matrices of numbers or
-//             polynomials (+ - *, c * M for a number or polynomial c)
+//             polynomials (+ - *, c * M for a number or polynomial c), symmetric functions (a ring
+//             over numbers and polynomials; / by a number or polynomial)
 //   *         on permutations composes: (u*v)[i] == u[v[i]]
 //   ^         integer exponent; w^-1 is the inverse of a permutation; p^k needs k >= 0
 //   == !=     structural (values/operations.ts valueEquals)
@@ -17,6 +18,8 @@ import { sadd, scmp, sdiv, smul, sneg, spow, ssub } from '../numbers/scalar.js';
 import { isPolynomial, padd, psub, pmul, pneg, ppow, pdivExact, type PolyLike } from '../algebra/polynomial.js';
 import { Matrix, matrixPower, matrixProduct, matrixScale, matrixSum } from '../algebra/matrix.js';
 import { Permutation } from '../families/permutations/permutation.js';
+import { isSymLike, isSymmetricFunction, mapCoefficients, symAdd, symNeg, symSub } from '../algebra/symmetric/symmetricFunction.js';
+import { symMul, symPow } from '../algebra/symmetric/products.js';
 import { valueEquals, valueToText } from '../values/operations.js';
 import { isStructured } from '../values/structured.js';
 import { article, typeOf } from '../values/types.js';
@@ -38,6 +41,7 @@ export function add(a: Value, b: Value): Value {
   if (isScalar(a) && isScalar(b)) return sadd(a, b);
   if (isPolyLike(a) && isPolyLike(b)) return padd(a, b);
   if (isMatrixValue(a) && isMatrixValue(b)) return matrixAdd(a, b);
+  if (isSymLike(a) && isSymLike(b)) return symAdd(a, b);
   return typeError('+', a, b);
 }
 
@@ -45,6 +49,7 @@ export function sub(a: Value, b: Value): Value {
   if (isScalar(a) && isScalar(b)) return ssub(a, b);
   if (isPolyLike(a) && isPolyLike(b)) return psub(a, b);
   if (isMatrixValue(a) && isMatrixValue(b)) return matrixSub(a, b);
+  if (isSymLike(a) && isSymLike(b)) return symSub(a, b);
   return typeError('-', a, b);
 }
 
@@ -52,6 +57,7 @@ export function neg(a: Value): Value {
   if (isScalar(a)) return sneg(a);
   if (isPolynomial(a)) return pneg(a);
   if (isMatrixValue(a)) return matrixNeg(a);
+  if (isSymmetricFunction(a)) return symNeg(a);
   return typeError('unary -', a);
 }
 
@@ -63,6 +69,7 @@ export function mul(a: Value, b: Value): Value {
     if (isMatrixValue(b)) return matrixMul(a, b);
     if (isPolyLike(b)) return matrixScale(b, a);
   } else if (isMatrixValue(b) && isPolyLike(a)) return matrixScale(a, b);
+  if (isSymLike(a) && isSymLike(b)) return symMul(a, b);
   return typeError('*', a, b);
 }
 
@@ -72,6 +79,7 @@ export function div(a: Value, b: Value): Value {
     if (isScalar(b)) return pmul(a, sdiv(1, b));
     return pdivExact(a, b);
   }
+  if (isSymmetricFunction(a) && isPolyLike(b)) return mapCoefficients(a, (c) => (isScalar(b) ? pmul(c, sdiv(1, b)) : pdivExact(c, b)));
   return typeError('/', a, b);
 }
 
@@ -94,6 +102,7 @@ export function pow(a: Value, e: Value): Value {
   }
   if (a instanceof Permutation) return permPower(a, e);
   if (isMatrixValue(a)) return matrixPow(a, e);
+  if (isSymmetricFunction(a)) return symPow(a, e);
   return typeError('^', a, e);
 }
 

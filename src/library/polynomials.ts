@@ -9,6 +9,8 @@ import {
   univariateCoefficients,
 } from '../algebra/polynomialOps.js';
 import { indexedName, isBareVar, varBase, varId, varIndex, varIndices, varName } from '../algebra/variables.js';
+import { isIdeal } from '../algebra/ideals/ideal.js';
+import { idealDimensionData } from '../algebra/ideals/invariants.js';
 import type { Value } from '../values/value.js';
 import { variableArg } from './polyArgs.js';
 import { defineFunction } from './registry.js';
@@ -65,16 +67,21 @@ defineFunction({
   name: 'degree',
   topic,
   params: [
-    { name: 'p', type: P },
+    { name: 'p', type: [P, 'ideal'] },
     { name: 'var', type: 'polynomial', optional: true },
   ],
   returns: 'integer',
   description:
-    'the total degree of p, or its degree in one variable; a nonzero number has degree 0 and 0 has none (an error)',
+    'the total degree of p, or its degree in one variable; a nonzero number has degree 0 and 0 has none (an error); for an ideal I, the degree of S/I (of the affine variety V(I), with multiplicity, when I is not homogeneous; 0 for the whole ring)',
   example: 'degree(q^3*x[1] + q, q)',
   exampleValue: '3',
-  source: 'definition',
+  source:
+    'definition; for ideals, the leading coefficient of the Hilbert polynomial times (dim - 1)!, through the initial ideal (D. Cox, J. Little, D. O\'Shea, Ideals, Varieties, and Algorithms, ch. 9 §3-§4); tested on the commuting variety (OEIS A029729) and determinantal varieties (W. Bruns, U. Vetter, Determinantal Rings, LNM 1327)',
   impl: (p, v) => {
+    if (isIdeal(p)) {
+      if (v !== undefined) fail('degree(I) of an ideal takes no variable');
+      return idealDimensionData(p).degree;
+    }
     if (v === undefined) return totalDegree(p as PolyLike);
     return degreeIn(p as PolyLike, variableArg('degree(p, var)', 'var', v));
   },

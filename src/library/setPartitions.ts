@@ -3,10 +3,10 @@
 
 import { SetPartition } from '../families/setPartitions/setPartition.js';
 import { isNoncrossing, partitionArcs } from '../families/setPartitions/arcs.js';
-import { defineFunction } from './registry.js';
+import { defineFunction, type ParamDecl } from './registry.js';
 
 const topic = 'set partitions';
-const S = [{ name: 's', type: 'setPartition' }];
+const S: ParamDecl[] = [{ name: 's', type: 'setPartition' }];
 
 defineFunction({
   name: 'partitionArcs',

@@ -11,18 +11,24 @@ import { readingWordOf } from '../families/tableaux/tableauOrder.js';
 import { valueToText } from '../values/operations.js';
 import type { Value } from '../values/value.js';
 import { intList } from './partitions.js';
+import { evacuationBK, promotionBK } from './tableaux/benderKnuth.js';
+import { smallIntArg } from './integerArgs.js';
+
+/** The alphabet 1..m of a semistandard promotion or evacuation: m given, else the largest entry. */
+function alphabetArg(t: Tableau, m: Value | undefined, call: string): number {
+  let max = 0;
+  for (const r of t.rows) for (const v of r) if (v > max) max = v;
+  if (m === undefined) return max;
+  const k = smallIntArg(call, 'm', m, 0, 100_000);
+  if (k < max) fail(`${call} needs m >= the largest entry ${max}, got m = ${k}`);
+  return k;
+}
 
 const topic = 'tableaux';
 
 function rowsArg(v: Value, what: string): number[][] {
   if (!Array.isArray(v)) fail(`${what} must be a list of rows, got ${valueToText(v)}`);
   return v.map((r) => intList(r, `a row of ${what}`));
-}
-
-function standardArg(v: Value, call: string): Tableau {
-  const t = v as Tableau;
-  if (!t.isStandard()) fail(`${call} needs a standard tableau (entries 1..n once each), got ${t.toText()}`);
-  return t;
 }
 
 /**
@@ -159,23 +165,31 @@ defineFunction({
 defineFunction({
   name: 'promotion',
   topic,
-  params: [{ name: 'T', type: 'tableau' }],
+  params: [{ name: 'T', type: 'tableau' }, { name: 'm', type: 'integer', optional: true }],
   returns: 'tableau',
-  description: 'Schützenberger promotion of a standard tableau: delete 1, slide by jeu de taquin, subtract 1, put n in the vacated cell',
+  description: 'Schützenberger promotion: of a standard tableau, delete 1, slide by jeu de taquin, subtract 1, put n in the vacated cell; of a semistandard tableau with entries in 1..m (m defaults to the largest entry), the Bender–Knuth product t_{m-1} ... t_1',
   example: 'promotion(tableau([[1, 2], [3, 4]]))',
   exampleValue: 'tableau([[1, 3], [2, 4]])',
-  source: 'Schützenberger, Discrete Math. 2 (1972); order n on rectangles: Haiman, Discrete Math. 99 (1992), Rhoades, J. Combin. Theory A 117 (2010)',
-  impl: (t) => new Tableau(promotionRows(standardArg(t, 'promotion(T)').rows)),
+  source: 'Schützenberger, Discrete Math. 2 (1972); Stanley, "Promotion and evacuation", Electron. J. Combin. 16(2) (2009); order m on rectangles: Rhoades, J. Combin. Theory A 117 (2010)',
+  impl: (t, m) => {
+    const T = t as Tableau;
+    if (m === undefined && T.isStandard()) return new Tableau(promotionRows(T.rows));
+    return new Tableau(promotionBK(T.rows, alphabetArg(T, m, 'promotion(T, m)')));
+  },
 });
 
 defineFunction({
   name: 'evacuation',
   topic,
-  params: [{ name: 'T', type: 'tableau' }],
+  params: [{ name: 'T', type: 'tableau' }, { name: 'm', type: 'integer', optional: true }],
   returns: 'tableau',
-  description: 'Schützenberger evacuation of a standard tableau (an involution preserving the shape)',
+  description: 'Schützenberger evacuation (an involution preserving the shape): of a standard tableau by jeu de taquin; of a semistandard tableau with entries in 1..m (m defaults to the largest entry) by Bender–Knuth involutions',
   example: 'evacuation(tableau([[1, 2, 3], [4]]))',
   exampleValue: 'tableau([[1, 3, 4], [2]])',
-  source: 'Schützenberger, Math. Scand. 12 (1963); Stanley, Enumerative Combinatorics 2, A1.2',
-  impl: (t) => new Tableau(evacuationRows(standardArg(t, 'evacuation(T)').rows)),
+  source: 'Schützenberger, Math. Scand. 12 (1963); Stanley, Enumerative Combinatorics 2, A1.2, and "Promotion and evacuation", Electron. J. Combin. 16(2) (2009)',
+  impl: (t, m) => {
+    const T = t as Tableau;
+    if (m === undefined && T.isStandard()) return new Tableau(evacuationRows(T.rows));
+    return new Tableau(evacuationBK(T.rows, alphabetArg(T, m, 'evacuation(T, m)')));
+  },
 });

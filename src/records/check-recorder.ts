@@ -1,11 +1,11 @@
 // What `hunch check` records, in one object the command drives: the ledger line of every finished
-// piece, the counterexample file of every failure, the regression cases to try first, the JUnit
-// report. Records are written from the main thread only.
+// piece, the counterexample file of every failure, the regression cases to try first. Records are
+// written from the main thread only.
 
 import type { CompiledConjecture } from '../language/conjecture/compiled.js';
 import type { CheckedPiece, ConjectureResult } from '../runner/result.js';
-import { readRegressionEncoded, writeCounterexampleFile } from './counterexample-file.js';
-import { writeJUnitReport } from './junit.js';
+import { counterexamplePath, readRegressionEncoded, writeCounterexampleFile } from './counterexample-file.js';
+import { checkWritablePath } from './atomic-write.js';
 import { LedgerWriter } from './ledger.js';
 import type { Project } from './open-project.js';
 import { pluginsUsedBy } from './plugins.js';
@@ -18,7 +18,6 @@ export interface CheckRecorder {
   piece(id: string, piece: CheckedPiece): void;
   /** Record a finished result; returns the path of its counterexample file, if there is one. */
   result(r: ConjectureResult): string | null;
-  junit(path: string, results: ConjectureResult[]): void;
   /** Messages for standard error (a damaged saved counterexample, ...). */
   warnings: string[];
   close(): void;
@@ -34,7 +33,12 @@ export interface RecorderOptions {
 export function createCheckRecorder(project: Project, compiled: CompiledConjecture[], opts: RecorderOptions): CheckRecorder {
   const byId = new Map(compiled.map((cc) => [cc.spec.id, cc]));
   const ledgerPath = opts.ledger === false ? null : typeof opts.ledger === 'string' ? opts.ledger : project.config.ledger;
-  const writer = ledgerPath ? new LedgerWriter(ledgerPath) : null;
+  // The project's ledger must really lie inside the project; one the user named on the command line may lie anywhere.
+  const writer = ledgerPath ? new LedgerWriter(ledgerPath, undefined, typeof opts.ledger === 'string' ? undefined : project.root) : null;
+  // A counterexample file that would be written through a link or outside the project.
+  if (opts.counterexamples !== false)
+    for (const cc of compiled) checkWritablePath(counterexamplePath(project.root, cc.spec.id), { within: project.root, what: 'the counterexample file' });
+  writer?.open(); // a ledger that cannot be written is reported before any work is done
   const warnings: string[] = [];
   return {
     warnings,
@@ -57,9 +61,6 @@ export function createCheckRecorder(project: Project, compiled: CompiledConjectu
       if (!cc || !r.counterexample || opts.counterexamples === false) return null;
       // The main thread's hash (canonical, with plugins) is the one the ledger uses.
       return writeCounterexampleFile(project.root, cc.spec, { ...r, hash: cc.hash }, pluginsUsedBy(cc.spec));
-    },
-    junit(path, results) {
-      writeJUnitReport(path, results);
     },
     close() {
       writer?.close();

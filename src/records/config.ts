@@ -14,6 +14,7 @@ import { InputError } from '../base/errors.js';
 import { nearest } from '../base/suggest.js';
 import { mapEntries, scalarString, seqItems, YamlFile } from '../language/conjecture/yaml-reader.js';
 import { CONFIG_FILE, DEFAULT_LEDGER } from './project.js';
+import { isInside } from './atomic-write.js';
 
 export const CONFIG_KEYS = ['plugins', 'ledger', 'conjectures'] as const;
 
@@ -52,9 +53,19 @@ export function parseConfig(root: string, file: string, text: string): ProjectCo
       case 'plugins':
         cfg.plugins = value === null ? [] : strings(value, 'a plugin path').map((p) => under(root, p));
         break;
-      case 'ledger':
-        cfg.ledger = under(root, scalarString(y, value, 'ledger'));
+      case 'ledger': {
+        const text = scalarString(y, value, 'ledger');
+        cfg.ledger = under(root, text);
+        // A received hunch.yaml must not make hunch write elsewhere (--ledger PATH is the user's own choice).
+        if (!isInside(root, cfg.ledger) || cfg.ledger === root)
+          throw new InputError(
+            `the ledger "${text}" lies outside the project ${root}; hunch writes only inside the project. ` +
+              'Give a path inside it, or pass --ledger PATH on the command line to write elsewhere',
+            value ? y.nodePos(value) : y.nodePos(keyNode),
+            text,
+          );
         break;
+      }
       case 'conjectures':
         cfg.conjectures = strings(value, 'a conjecture path').map((p) => under(root, p));
         break;

@@ -7,7 +7,9 @@
 // killed between records leaves only whole lines; a torn line (a crash inside the kernel write, a
 // full disk, a network filesystem) is recognised when reading, reported and ignored.
 
-import { closeSync, fstatSync, openSync, readFileSync, readSync, writeSync } from 'node:fs';
+import { parseShard } from '../runner/work/slicing.js';
+import { closeSync, constants, fstatSync, openSync, readFileSync, readSync, writeSync } from 'node:fs';
+import { checkWritablePath } from './atomic-write.js';
 import { hostname } from 'node:os';
 import { randomBytes } from 'node:crypto';
 import { InputError } from '../base/errors.js';
@@ -52,7 +54,6 @@ const PHASES: readonly string[] = ['exhaustive', 'sample', 'regression'];
 const OUTCOMES: readonly string[] = ['holds', 'fails', 'incomplete'];
 const ID = /^[a-z0-9][a-z0-9-]*$/;
 const HASH = /^[0-9a-f]{64}$/;
-const SHARD = /^([1-9][0-9]*)\/([1-9][0-9]*)$/;
 
 /** A record as one line, keys in a fixed order (so identical records are identical lines). */
 export function recordLine(r: LedgerRecord): string {
@@ -71,14 +72,6 @@ function sortedSize(s: Record<string, number>): Record<string, number> {
   const out: Record<string, number> = {};
   for (const k of Object.keys(s).sort()) out[k] = s[k];
   return out;
-}
-
-/** Parse "3/8" into [3, 8], or null when it is not a valid slice. */
-export function parseShard(s: string): [number, number] | null {
-  const m = SHARD.exec(s);
-  if (!m) return null;
-  const i = Number(m[1]), k = Number(m[2]);
-  return Number.isSafeInteger(k) && i <= k ? [i, k] : null;
 }
 
 export interface RunContext {
@@ -120,16 +113,31 @@ export class LedgerWriter {
   constructor(
     readonly path: string,
     ctx?: RunContext,
+    /** The project root the ledger must lie in (links resolved), when it comes from hunch.yaml. */
+    readonly within?: string,
   ) {
     this.ctx = ctx ?? newRunContext();
   }
 
-  private open(): number {
+  /**
+   * Open (creating) the ledger now, so that a ledger hunch cannot write is reported before any work
+   * is done. A link is never followed: the ledger is appended to only as the file it names.
+   */
+  open(): number {
     if (this.fd !== null) return this.fd;
+    checkWritablePath(this.path, { within: this.within, what: 'the ledger' });
     try {
-      this.fd = openSync(this.path, 'a+'); // O_APPEND | O_CREAT, readable for the tail check below
+      // O_APPEND | O_CREAT, readable for the tail check below; O_NOFOLLOW: a link is refused.
+      this.fd = openSync(this.path, constants.O_APPEND | constants.O_CREAT | constants.O_RDWR | constants.O_NOFOLLOW, 0o644);
     } catch (e) {
-      throw new InputError(`cannot open the ledger ${this.path} for writing: ${(e as Error).message}`);
+      const code = (e as NodeJS.ErrnoException).code;
+      const why = code === 'ELOOP' ? 'it is a symbolic link, and hunch never writes through a link' : code === 'EISDIR' ? 'it is a folder' : (e as Error).message;
+      throw new InputError(`cannot open the ledger ${this.path} for writing: ${why}`);
+    }
+    if (!fstatSync(this.fd).isFile()) {
+      closeSync(this.fd);
+      this.fd = null;
+      throw new InputError(`cannot use ${this.path} as the ledger: it is not a regular file`);
     }
     return this.fd;
   }

@@ -8,13 +8,14 @@ import { compileConjecture } from '../language/conjecture/compile-conjecture.js'
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
 import { loadConjectureFile } from '../language/conjecture/load-file.js';
 import { loadConjectures } from '../language/conjecture/project.js';
+import { traceWitnesses, type Witness } from '../language/conjecture/witnesses.js';
 import { getFunction } from '../library/registry.js';
 import { bindingTexts, explainCase, frameFor } from '../runner/case-report.js';
 import { evaluateCase, SKIPPED } from '../runner/evaluate-case.js';
 import { notACaseReason } from '../runner/case-validity.js';
-import { sampleSettingsOf } from '../runner/check.js';
+import { sampleSettingsOf } from '../runner/check-options.js';
 import { decodeValue } from '../values/decode.js';
-import { canonicalForm, conjectureHash } from './hash.js';
+import { canonicalForm, conjectureHash } from '../language/conjecture/conjecture-hash.js';
 import { conjectureText, readCounterexampleFile, type CounterexampleFile, type PluginNeed } from './counterexample-file.js';
 import { pluginHashes } from './plugins.js';
 import type { Project } from './open-project.js';
@@ -29,6 +30,8 @@ export interface ReplayResult {
   bindings: Record<string, string>;
   values: Record<string, unknown>;
   sides: [unknown, unknown] | null;
+  /** What decided the failure, computed again from the file's case. */
+  witnesses: Witness[];
   /** When the verdict is 'error' or 'not-a-case': why. */
   error: string | null;
   /** Plugins the file needs that the local project does not provide. */
@@ -81,7 +84,7 @@ function localConjecture(project: Project | null, id: string): ConjectureSpec | 
 export function replayCounterexample(path: string, project: Project | null): ReplayResult {
   const f = readCounterexampleFile(path);
   const base: ReplayResult = {
-    file: f, verdict: 'error', bindings: {}, values: {}, sides: null, error: null,
+    file: f, verdict: 'error', bindings: {}, values: {}, sides: null, witnesses: [], error: null,
     missingPlugins: [], changedPlugins: [], embeddedHashMatches: true, local: null,
   };
   const local = pluginHashes();
@@ -121,7 +124,8 @@ export function replayCounterexample(path: string, project: Project | null): Rep
     const r = evaluateCase(cc, frame);
     if (r === SKIPPED) return { ...base, verdict: 'not-a-case', error: '"where" excludes it' };
     const { values, sides } = explainCase(cc, frameFor(cc, vals));
-    return { ...base, values, sides, verdict: r === 0 ? 'refutes' : 'holds' };
+    const witnesses = r === 0 ? traceWitnesses(cc, frameFor(cc, vals)) : [];
+    return { ...base, values, sides, witnesses, verdict: r === 0 ? 'refutes' : 'holds' };
   } catch (e) {
     if (e instanceof EvalError) return { ...base, verdict: 'error', error: e.message };
     throw e;

@@ -16,7 +16,7 @@ import { join, relative } from 'node:path';
 import { InputError } from '../base/errors.js';
 import { writeFileAtomic } from './atomic-write.js';
 import type { ProjectConfig } from './config.js';
-import { fileHash } from './hash.js';
+import { fileHash } from '../language/conjecture/conjecture-hash.js';
 
 export const TRUST_FILE = 'trusted-projects.json';
 const TRUST_FORMAT = 1;
@@ -129,7 +129,7 @@ export function trustProject(config: ProjectConfig): TrustEntry {
   };
   const list = readTrustList();
   list.projects = [...list.projects.filter((p) => p.config !== entry.config), entry];
-  writeFileAtomic(trustListPath(), JSON.stringify(list, null, 2) + '\n');
+  writeFileAtomic(trustListPath(), JSON.stringify(list, null, 2) + '\n', { what: 'the list of trusted projects' });
   return entry;
 }
 
@@ -139,6 +139,6 @@ export function distrustProject(config: ProjectConfig): boolean {
   const list = readTrustList();
   const kept = list.projects.filter((p) => p.config !== key);
   if (kept.length === list.projects.length) return false;
-  writeFileAtomic(trustListPath(), JSON.stringify({ ...list, projects: kept }, null, 2) + '\n');
+  writeFileAtomic(trustListPath(), JSON.stringify({ ...list, projects: kept }, null, 2) + '\n', { what: 'the list of trusted projects' });
   return true;
 }

@@ -1,6 +1,6 @@
 // A distribution: a finite multiset of values (kind 'distribution'). Two distributions are equal
 // when every value occurs the same number of times in both, which is how one states that two
-// statistics are equidistributed: distribution(w in S: inv(w)) == distribution(w in S: maj(w)).
+// statistics are equidistributed: distribution(inv(w) for w in S) == distribution(maj(w) for w in S).
 
 import { fail } from '../base/errors.js';
 import { registerDecoder, decodeValue } from './decode.js';

@@ -16,7 +16,7 @@ import '../../dist/families/index.js';
 import '../../dist/library/index.js';
 import { loadConjectureFile } from '../../dist/language/conjecture/load-file.js';
 import { compileConjecture } from '../../dist/language/conjecture/compile-conjecture.js';
-import { checkConjecture } from '../../dist/runner/check.js';
+import { checkConjecture } from '../../dist/runner/in-process-executor.js';
 
 const N = Number(process.argv[2] ?? 10);
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..', '..');

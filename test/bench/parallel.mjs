@@ -29,8 +29,8 @@ if (process.argv[2] === '--child') {
   const N = Number(process.argv[3]);
   await import('../../dist/families/index.js');
   await import('../../dist/library/index.js');
-  const { prepareRun } = await import('../../dist/runner/session.js');
-  const { startCheckRun } = await import('../../dist/runner/parallel/run-check.js');
+  const { prepareRun } = await import('../../dist/runner/run-request.js');
+  const { startCheckRun } = await import('../../dist/runner/threaded-run.js');
   const file = join(mkdtempSync(join(tmpdir(), 'hunch-mem-')), 'c.yaml');
   writeFileSync(file, conjecture(N));
   const req = { paths: [file], ids: null, sizes: [], sampleRanges: [], exhaustive: true, count: null, seed: null, budgetMs: null, root: null, regression: {} };

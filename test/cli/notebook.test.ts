@@ -14,7 +14,7 @@ function copyNotebook(): string {
   return dir;
 }
 
-describe('the bundled notebook', () => {
+describe('the bundled notebook', { timeout: 120_000 }, () => {
   test('a sampled failure at n >= 20 is shrunk, drawn, written and replayed from the file alone', () => {
     const dir = copyNotebook();
     const r = runCli(['check', 'conjectures/permutation-statistics.yaml', '--id', 'few-cycles', '--no-exhaustive', '--sample', 'n=20..24'], { cwd: dir });

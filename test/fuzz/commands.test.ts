@@ -45,7 +45,7 @@ describe('hunch eval and hunch table on random expressions', () => {
       ['n^2', '--over', 'n=1..3', '--let', 'n=4'],
       ['1/n', '--over', 'n=0..2'],
       ['perm([n])', '--over', 'n=1..3'],
-      ['sum(i in 1..n: i', '--over', 'n=1..3'],
+      ['sum(i for i in 1..n', '--over', 'n=1..3'],
     ]) {
       const r = runCli(['table', ...args]);
       expectClean(r, args.join(' '), [2]);

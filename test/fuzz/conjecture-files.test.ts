@@ -15,7 +15,7 @@ import '../../src/library/index.js';
 import { InputError } from '../../src/base/errors.js';
 import { compileConjecture, MAX_EXHAUSTIVE_SIZES } from '../../src/language/conjecture/compile-conjecture.js';
 import { loadConjectureFile } from '../../src/language/conjecture/load-file.js';
-import { checkConjecture } from '../../src/runner/check.js';
+import { checkConjecture } from '../../src/runner/in-process-executor.js';
 import { runCli, tempDir } from '../cli/run-cli.js';
 import { conjectureFile } from './conjecture-documents.js';
 import { expectCleanError, timed } from './outcome.js';

@@ -102,7 +102,7 @@ describe('operators', () => {
     expect((ops.pow(w, 7) as Permutation).equals(w)).toBe(true);
   });
   test('partitions index to 0 past their length, from 1', () => {
-    const lets: Array<[string, string]> = [['lam', 'list(p in partitions(4) where p[1] == 3: p)[1]']];
+    const lets: Array<[string, string]> = [['lam', 'list(p for p in partitions(4) where p[1] == 3)[1]']];
     expect(ev('[lam[1], lam[2], lam[3]]', lets)).toEqual([3, 1, 0]);
     expect(() => ev('lam[0]', lets)).toThrow(/indices start at 1/);
     expect(show('count(p in partitions(5))')).toBe('7'); // p(5) = 7, OEIS A000041

@@ -23,7 +23,7 @@ const fn = (text: string, f: (v: Value) => Value) => new Lambda(1, (a) => f(a[0]
 const matchings = (n: number) => allMatchings(n).map((p) => new Matching(p.map((j) => j + 1)));
 
 function loop(n: number, join: Value, cross: Value): MarkovChain {
-  const moves = fn('m -> concat(i in 1..2n: [[joinAt(m, i), join], [crossAt(m, i), cross]])', (m) => {
+  const moves = fn('m -> concat([[joinAt(m, i), join], [crossAt(m, i), cross]] for i in 1..2*n)', (m) => {
     const out: Value[] = [];
     for (let i = 1; i <= 2 * n; i++) out.push([call('joinAt', m, i), join], [call('crossAt', m, i), cross]);
     return out;

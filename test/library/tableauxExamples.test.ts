@@ -49,10 +49,10 @@ describe('examples', () => {
     expect(ev('partition([3, 1])[2]')).toBe('1');
     expect(ev('partition([3, 1])[5]')).toBe('0');
     expect(ev('tableau([[1, 2], [3]])[2]')).toBe('[3]');
-    expect(ev('list(T in standardTableaux(partition([2, 1])): T[1])')).toBe('[[1, 2], [1, 3]]');
-    expect(ev('list(T in standardTableaux(partition([2, 1])): T)')).toBe('[tableau([[1, 2], [3]]), tableau([[1, 3], [2]])]');
+    expect(ev('list(T[1] for T in standardTableaux(partition([2, 1])))')).toBe('[[1, 2], [1, 3]]');
+    expect(ev('list(T for T in standardTableaux(partition([2, 1])))')).toBe('[tableau([[1, 2], [3]]), tableau([[1, 3], [2]])]');
     expect(ev('setPartition([[1, 3], [2]])[2]')).toBe('[2]');
-    expect(ev('sum(l in partitions(6): syt(l)^2)')).toBe('720');
+    expect(ev('sum(syt(l)^2 for l in partitions(6))')).toBe('720');
     expect(ev('count(T in standardTableaux([3, 2]))')).toBe('5');
     expect(() => ev('tableau([[1, 2], [3]])[3]')).toThrow(/out of range/);
   });

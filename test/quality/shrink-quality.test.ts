@@ -99,7 +99,7 @@ describe('shrink quality over 50 seeds', () => {
     const m = bruteMinimum((n) => B.wordsOf(n, 3), run, (a, b) => a.length - b.length || B.lex(a, b), 5);
     expect(m).toEqual({ n: 3, simplest: [1, 1, 1], count: 3 });
     const q = measure(
-      doc({ id: 'no-triples', for: ['n: 1..2', 'u: words(n, 3)'], claim: 'all(i in 1..n-2: not (u[i] == u[i+1] and u[i+1] == u[i+2]))', sample: ['n: 15..25'] }),
+      doc({ id: 'no-triples', for: ['n: 1..2', 'u: words(n, 3)'], claim: 'all(not (u[i] == u[i+1] and u[i+1] == u[i+2]) for i in 1..n-2)', sample: ['n: 15..25'] }),
       'n', 3, { n: 3, u: { word: [1, 1, 1] } },
     );
     report('no three equal adjacent letters in words(n, 3) at n = 15..25', q);

@@ -8,7 +8,7 @@ import type { ConjectureResult } from '../../src/runner/result.js';
 import {
   conjectureText, counterexampleRecord, counterexampleText, parseCounterexampleFile, readRegressionCase, readRegressionEncoded, writeCounterexampleFile,
 } from '../../src/records/counterexample-file.js';
-import { conjectureHash } from '../../src/records/hash.js';
+import { conjectureHash } from '../../src/language/conjecture/conjecture-hash.js';
 
 const TEXT = `
 define:

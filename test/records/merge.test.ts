@@ -4,7 +4,8 @@ import { join } from 'node:path';
 import { Chalk } from 'chalk';
 import { describe, expect, test } from 'vitest';
 import { appendRecords, readLedger, recordLine } from '../../src/records/ledger.js';
-import { coverageOf, formatMerge, mergeLedgers, mergeRecords } from '../../src/records/merge.js';
+import { coverageOf, mergeLedgers, mergeRecords } from '../../src/records/merge.js';
+import { formatMerge } from '../../src/reports/merge-summary.js';
 import { rec } from './fixtures.js';
 
 const tmp = () => mkdtempSync(join(tmpdir(), 'hunch-merge-'));

@@ -73,7 +73,7 @@ describe('plugins', () => {
     expect(uses.stale.records).toBe(5);
     expect(not.exhaustive).toHaveLength(5);
     expect(not.stale).toBeNull();
-  });
+  }, 60_000);
 
   test('bad plugins are clear errors', async () => {
     const d = mkdtempSync(join(tmpdir(), 'hunch-plugin-'));

@@ -5,7 +5,8 @@ import '../../src/library/index.js';
 import { compileConjecture } from '../../src/language/conjecture/compile-conjecture.js';
 import type { CompiledConjecture } from '../../src/language/conjecture/compiled.js';
 import { loadConjectureFile } from '../../src/language/conjecture/load-file.js';
-import { checkConjecture, type CheckOptions } from '../../src/runner/check.js';
+import type { CheckOptions } from '../../src/runner/check-options.js';
+import { checkConjecture } from '../../src/runner/in-process-executor.js';
 import type { RunHooks } from '../../src/runner/hooks.js';
 import type { ConjectureResult } from '../../src/runner/result.js';
 

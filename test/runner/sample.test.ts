@@ -8,7 +8,7 @@
 
 import { describe, expect, it } from 'vitest';
 import { check, compileAll, compileOne, doc } from './helpers.js';
-import { checkConjecture } from '../../src/runner/check.js';
+import { checkConjecture } from '../../src/runner/in-process-executor.js';
 import type { ConjectureResult } from '../../src/runner/result.js';
 
 /** A true claim whose `where` skips about half the draws: the skipped counts fingerprint the cases. */
@@ -19,7 +19,7 @@ const skips = (r: ConjectureResult) => Object.fromEntries(r.checked.filter((p) =
 
 /** Fails at n = 8 only, for about one draw in 13; j (a list binding) is reported as drawn. */
 function listDoc(id = 'lst', sample = 'n: 8..8') {
-  return doc({ id, for: ['n: 1..3', "j: 'list(i in 1..1000: i)'"], claim: 'n != 8 or mod(j, 13) != 0', sample: [sample, 'count: 200'] });
+  return doc({ id, for: ['n: 1..3', "j: 'list(i for i in 1..1000)'"], claim: 'n != 8 or mod(j, 13) != 0', sample: [sample, 'count: 200'] });
 }
 const firstJ = (r: ConjectureResult) => r.counterexample?.bindings.j;
 

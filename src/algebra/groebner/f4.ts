@@ -10,6 +10,7 @@
 // K (p-1)^2 + p < 2^53 keeps every partial sum exact; above p ≈ 9.4·10^7 no sum is safe and each
 // addition is reduced through the split multiplication of primeField.ts.
 
+import { fail } from '../../base/errors.js';
 import type { Limits } from './bounds.js';
 import { MonomialTable } from './monomialTable.js';
 import { invModP, mulModP } from './primeField.js';
@@ -44,6 +45,7 @@ export interface F4Stats {
 export let lastF4Stats: F4Stats = { steps: 0, pairs: 0, zeroRows: 0, maxColumns: 0 };
 
 const TWO53 = 2 ** 53;
+const TRACE = typeof process !== 'undefined' && process.env.HUNCH_GB_TRACE === '1';
 
 class F4 {
   readonly T: MonomialTable;
@@ -55,9 +57,12 @@ class F4 {
   private seen = new Int32Array(0);
   private pivotRow = new Int32Array(0);
   private colOf = new Int32Array(0);
+  private divisor = new Int32Array(0); // 1 + the remembered reducer of a monomial, 0 if none
+  private checkedUpTo = new Int32Array(0); // basis elements already known not to divide it
   private stamp = 0;
   readonly lazyK: number;
   stats: F4Stats = { steps: 0, pairs: 0, zeroRows: 0, maxColumns: 0 };
+  lastShape = '';
 
   constructor(readonly p: number, order: TermOrder, readonly limits: Limits) {
     this.T = new MonomialTable(order);
@@ -77,6 +82,8 @@ class F4 {
     this.seen = grow(this.seen);
     this.pivotRow = grow(this.pivotRow);
     this.colOf = grow(this.colOf);
+    this.divisor = grow(this.divisor);
+    this.checkedUpTo = grow(this.checkedUpTo);
   }
 
   fromSparse(f: Sparse<number>): Poly {
@@ -144,17 +151,30 @@ class F4 {
     this.activeList = still;
   }
 
-  /** A basis element whose leading monomial divides m (the shortest), or -1. */
+  /**
+   * A basis element whose leading monomial divides m (the shortest), or -1. Remembered per
+   * monomial: a found reducer is reused while it stays active, and a monomial without one is
+   * re-tested only against the elements added since.
+   */
   private reducerFor(m: number): number {
     const T = this.T, polys = this.polys;
+    this.scratch();
+    const cached = this.divisor[m] - 1;
+    if (cached >= 0 && this.active[cached]) return cached;
+    const from = cached === -1 ? this.checkedUpTo[m] : 0;
     let best = -1, bestLen = Infinity;
-    for (const i of this.activeList) {
+    const list = this.activeList;
+    for (let k = 0; k < list.length; k++) {
+      const i = list[k];
+      if (i < from) continue;
       const g = polys[i];
       if (g.mons.length < bestLen && T.divides(g.mons[0], m)) {
         best = i;
         bestLen = g.mons.length;
       }
     }
+    this.divisor[m] = best + 1;
+    if (best < 0) this.checkedUpTo[m] = polys.length;
     return best;
   }
 
@@ -169,12 +189,16 @@ class F4 {
     this.stamp++;
     const stamp = this.stamp;
     const rowsMult: number[] = [], rowsPoly: number[] = [];
+    const rowsMons: Int32Array[] = [];
     const toReduce: number[] = [];
     const allMons: number[] = [];
     const addRowMons = (r: number) => {
       const g = this.polys[rowsPoly[r]], mult = rowsMult[r];
+      const mons = new Int32Array(g.mons.length);
+      rowsMons[r] = mons;
       for (let t = 0; t < g.mons.length; t++) {
         const m = T.product(mult, g.mons[t]);
+        mons[t] = m;
         this.scratch();
         if (this.seen[m] !== stamp) {
           this.seen[m] = stamp;
@@ -183,9 +207,10 @@ class F4 {
         }
       }
     };
-    const rowKeys = new Map<string, number>();
+    // A row is (basis element, multiplier): one number key, exact while poly < 2^21.
+    const rowKeys = new Map<number, number>();
     for (const s of start) {
-      const key = `${s.poly}:${s.mult}`;
+      const key = s.poly * 4294967296 + s.mult;
       if (rowKeys.has(key)) continue;
       const r = rowsMult.length;
       rowKeys.set(key, r);
@@ -204,7 +229,7 @@ class F4 {
       const g = this.reducerFor(m);
       if (g < 0) continue;
       const mult = T.quotient(m, this.polys[g].mons[0]);
-      const key = `${g}:${mult}`;
+      const key = g * 4294967296 + mult;
       let r = rowKeys.get(key);
       if (r === undefined) {
         r = rowsMult.length;
@@ -224,10 +249,11 @@ class F4 {
     this.scratch();
     for (let c = 0; c < ncols; c++) this.colOf[cols[c]] = c;
     if (ncols > this.stats.maxColumns) this.stats.maxColumns = ncols;
+    this.lastShape = `rows ${rowsMult.length} (reduce ${toReduce.length}) cols ${ncols}`;
     const makeRow = (r: number): Row => {
-      const g = this.polys[rowsPoly[r]], mult = rowsMult[r], n = g.mons.length;
+      const g = this.polys[rowsPoly[r]], mons = rowsMons[r], n = mons.length;
       const rc = new Int32Array(n);
-      for (let t = 0; t < n; t++) rc[t] = this.colOf[T.product(mult, g.mons[t])];
+      for (let t = 0; t < n; t++) rc[t] = this.colOf[mons[t]];
       return { cols: rc, coefs: g.coefs };
     };
     const pivots: (Row | undefined)[] = new Array(ncols);
@@ -327,7 +353,9 @@ class F4 {
         start.push({ mult: T.quotient(pr.lcm, this.polys[pr.i].mons[0]), poly: pr.i });
         start.push({ mult: T.quotient(pr.lcm, this.polys[pr.j].mons[0]), poly: pr.j });
       }
+      const t0 = TRACE ? performance.now() : 0, c0 = TRACE ? process.cpuUsage().user : 0;
       const fresh = this.reduceRows(start, false);
+      if (TRACE) console.error(`step ${this.stats.steps} sugar ${sugar} pairs ${chosen.length} new ${fresh.length} basis ${this.activeList.length} monomials ${T.count} ${this.lastShape} ${(performance.now() - t0).toFixed(0)} ms (${((process.cpuUsage().user - c0) / 1000).toFixed(0)} ms CPU)`);
       if (fresh.some((f) => T.deg[f.mons[0]] === 0)) return [unitBasis(T.nv)];
       fresh.sort((a, b) => T.cmp(a.mons[0], b.mons[0]));
       for (const f of fresh) {
@@ -335,6 +363,7 @@ class F4 {
         this.insert(f);
       }
       this.limits.size(this.activeList.length);
+      if (this.polys.length >= 2 ** 21) fail('the Gröbner basis computation produced more than 2^21 polynomials');
     }
     return this.finish();
   }
@@ -355,6 +384,7 @@ class F4 {
         }
       }
       if (!redundant) minimal.push(a);
+      else this.active[a] = false;
     }
     this.activeList = minimal;
     const one = T.id(new Int32Array(T.nv));

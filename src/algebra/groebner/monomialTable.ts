@@ -13,6 +13,7 @@ export class MonomialTable {
   hash: Int32Array;
   count = 0;
   private slots: Int32Array;
+  private shift: number;
   private readonly rnd: Int32Array;
   private readonly tmp: Int32Array;
   readonly cmp: (a: number, b: number) => number;
@@ -24,6 +25,7 @@ export class MonomialTable {
     this.mask = new Int32Array(capacity);
     this.hash = new Int32Array(capacity);
     this.slots = new Int32Array(capacity * 2).fill(-1);
+    this.shift = 32 - Math.log2(capacity * 2);
     this.rnd = new Int32Array(nv);
     // A fixed pseudo-random sequence (xorshift), so runs repeat exactly.
     let s = 0x9e3779b9 | 0;
@@ -34,9 +36,37 @@ export class MonomialTable {
       this.rnd[v] = s | 1;
     }
     this.tmp = new Int32Array(nv);
+    // Comparisons by id: the stored degree decides first for the graded orders.
     const at = order.compareAt;
-    const ex = () => this.exps;
-    this.cmp = (a, b) => at(ex(), a * nv, ex(), b * nv);
+    if (order.kind === 'grevlex')
+      this.cmp = (a, b) => {
+        const d = this.deg[a] - this.deg[b];
+        if (d !== 0) return d;
+        const ex = this.exps, ia = a * nv, ib = b * nv;
+        for (let v = nv - 1; v >= 0; v--) {
+          const x = ex[ia + v] - ex[ib + v];
+          if (x !== 0) return -x;
+        }
+        return 0;
+      };
+    else if (order.kind === 'deglex')
+      this.cmp = (a, b) => {
+        const d = this.deg[a] - this.deg[b];
+        if (d !== 0) return d;
+        const ex = this.exps, ia = a * nv, ib = b * nv;
+        for (let v = 0; v < nv; v++) {
+          const x = ex[ia + v] - ex[ib + v];
+          if (x !== 0) return x;
+        }
+        return 0;
+      };
+    else this.cmp = (a, b) => at(this.exps, a * nv, this.exps, b * nv);
+  }
+
+  /** The first slot to probe: the top bits of a multiplicative scramble of the hash (the low
+   * bits of the additive hash alone are poor: bit 0 is the parity of the degree). */
+  private slotOf(h: number): number {
+    return Math.imul(h, 0x9e3779b1) >>> this.shift;
   }
 
   private grow(): void {
@@ -44,15 +74,19 @@ export class MonomialTable {
     const e = new Int32Array(cap * Math.max(nv, 1));
     e.set(this.exps);
     this.exps = e;
-    for (const key of ['deg', 'mask', 'hash'] as const) {
-      const a = new Int32Array(cap);
-      a.set(this[key]);
-      this[key] = a;
-    }
+    const widen = (a: Int32Array) => {
+      const b = new Int32Array(cap);
+      b.set(a);
+      return b;
+    };
+    this.deg = widen(this.deg);
+    this.mask = widen(this.mask);
+    this.hash = widen(this.hash);
     this.slots = new Int32Array(cap * 2).fill(-1);
+    this.shift = 32 - Math.log2(cap * 2);
     const m = this.slots.length - 1;
     for (let id = 0; id < this.count; id++) {
-      let s = this.hash[id] & m;
+      let s = this.slotOf(this.hash[id]);
       while (this.slots[s] !== -1) s = (s + 1) & m;
       this.slots[s] = id;
     }
@@ -72,7 +106,7 @@ export class MonomialTable {
     this.mask[id] = mask;
     this.hash[id] = h;
     const m = this.slots.length - 1;
-    let s = h & m;
+    let s = this.slotOf(h);
     while (this.slots[s] !== -1) s = (s + 1) & m;
     this.slots[s] = id;
     return id;
@@ -84,7 +118,7 @@ export class MonomialTable {
     let h = 0;
     for (let v = 0; v < nv; v++) h = (h + Math.imul(row[off + v], this.rnd[v])) | 0;
     const m = this.slots.length - 1, ex = this.exps;
-    for (let s = h & m; ; s = (s + 1) & m) {
+    for (let s = this.slotOf(h); ; s = (s + 1) & m) {
       const c = this.slots[s];
       if (c === -1) break;
       if (this.hash[c] !== h) continue;
@@ -101,7 +135,7 @@ export class MonomialTable {
     const h = (this.hash[a] + this.hash[b]) | 0;
     const m = this.slots.length - 1;
     const ia = a * nv, ib = b * nv;
-    for (let s = h & m; ; s = (s + 1) & m) {
+    for (let s = this.slotOf(h); ; s = (s + 1) & m) {
       const c = this.slots[s];
       if (c === -1) break;
       if (this.hash[c] !== h) continue;

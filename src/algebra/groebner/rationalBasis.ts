@@ -6,12 +6,9 @@
 // candidate G over Q, which must agree with the basis of one further prime. Then G is proven
 // to be the reduced Gröbner basis of I = <F> over Q:
 //   1. every f in F reduces to 0 by G (exactly, over Q), so I ⊆ J = <G>;
-//   2. every S-pair of G reduces to 0 (exactly), apart from those the product criterion and the
-//      chain criterion dismiss (a pair (i, j) is dismissed by k only when lm(k) divides
-//      lcm(i, j) and both lcm(i, k) and lcm(j, k) are proper divisors of lcm(i, j), so the
-//      dismissals are well founded); by Buchberger's criterion in its syzygy form (Cox, Little
-//      and O'Shea, *Ideals, Varieties, and Algorithms*, Chapter 2, Section 10, Theorem 6 and
-//      Proposition 8) G is a Gröbner basis of J, and J is homogeneous (G is checked homogeneous);
+//   2. every S-pair of G reduces to 0 (exactly, fraction free over Z: integerReduction.ts),
+//      apart from those the product and chain criteria dismiss (criterion.ts), so G is a
+//      Gröbner basis of J, and J is homogeneous (G is checked homogeneous);
 //   3. lm(G) = lm(G_p). Let H(K, d) = dim of degree d of R/K. For every degree d the space I_d
 //      is spanned by the products m f (deg = d); the integer matrix of their coefficients has
 //      rank over F_p at most its rank over Q, so H(I_p, d) >= H(I, d). From 1, H(I, d) >= H(J, d)
@@ -38,7 +35,9 @@ import { reduceBasis } from './buchberger.js';
 import { f4 } from './f4.js';
 import { rationals } from './field.js';
 import { reconstructionPrime, scalarModPOrNone } from './primeField.js';
-import { dividesRow, remainder, sPolynomial, sparseFromTerms, type Sparse } from './sparse.js';
+import { pairsToCheck } from './criterion.js';
+import { reducesToZero, toZ, zSPolynomial } from './integerReduction.js';
+import { sparseFromTerms, type Sparse } from './sparse.js';
 import { matrixOrder, type TermOrder } from './termOrder.js';
 
 const MAX_PRIMES = 400;
@@ -171,31 +170,14 @@ function agreesWith(G: readonly Sparse<Scalar>[], Gp: readonly Sparse<number>[],
 
 /** The exact proof of the header (steps 1 and 2; step 3 holds by construction of the candidate). */
 function provenBasis(order: TermOrder, F: readonly Sparse<Scalar>[], G: readonly Sparse<Scalar>[], limits: Limits): boolean {
-  const nv = order.nv, K = rationals;
-  const tick = () => limits.tick();
+  const nv = order.nv;
   for (const g of G) if (!isHomogeneous(g, nv)) return false;
-  for (const f of F) if (remainder(K, order, f, G, tick).coefs.length > 0) return false;
-  const lcm = (a: number, b: number) => {
-    const l = new Int32Array(nv);
-    for (let v = 0; v < nv; v++) l[v] = Math.max(G[a].exps[v], G[b].exps[v]);
-    return l;
-  };
-  const same = (a: Int32Array, b: Int32Array) => a.every((x, v) => x === b[v]);
-  for (let i = 0; i < G.length; i++)
-    for (let j = i + 1; j < G.length; j++) {
-      limits.poll();
-      let coprime = true;
-      for (let v = 0; v < nv; v++) if (G[i].exps[v] > 0 && G[j].exps[v] > 0) coprime = false;
-      if (coprime) continue;
-      const lij = lcm(i, j);
-      let chain = false;
-      for (let k = 0; k < G.length && !chain; k++) {
-        if (k === i || k === j || !dividesRow(G[k].exps, 0, lij, 0, nv)) continue;
-        if (!same(lcm(i, k), lij) && !same(lcm(j, k), lij)) chain = true;
-      }
-      if (chain) continue;
-      if (remainder(K, order, sPolynomial(K, order, G[i], G[j]), G, tick).coefs.length > 0) return false;
-    }
+  const GZ = G.map(toZ);
+  for (const f of F) if (!reducesToZero(order, toZ(f), GZ, limits)) return false;
+  for (const [i, j] of pairsToCheck(G.map((g) => g.exps.subarray(0, nv)), nv)) {
+    limits.poll();
+    if (!reducesToZero(order, zSPolynomial(order, GZ[i], GZ[j]), GZ, limits)) return false;
+  }
   return true;
 }
 

@@ -67,7 +67,7 @@ export function kPolynomialTerms(M: MonomialIdeal, weights: readonly Int32Array[
   };
   const rec = (gens: Exponents[], shift: Int32Array, sign: number, factors: Int32Array[]) => {
     if (++steps > maxSteps) fail(`the Hilbert series computation passed its bound of ${maxSteps.toLocaleString('en-US')} steps`);
-    if ((steps & 1023) === 0 && opts.shouldStop?.()) fail('the Hilbert series computation was stopped');
+    if ((steps & 1023) === 1 && opts.shouldStop?.()) fail('the Hilbert series computation was stopped');
     if (gens.length === 0) return leaf(shift, sign, factors);
     const nv = gens[0].length;
     if (gens.some((g) => g.every((e) => e === 0))) return; // the unit ideal contributes 0
@@ -110,6 +110,7 @@ export function kPolynomialTerms(M: MonomialIdeal, weights: readonly Int32Array[
 
 /** The standard grading's numerator: coefficients c_0..c_D of K(t) = sum c_d t^d (all weights 1). */
 export function hilbertNumeratorCoefficients(M: MonomialIdeal, opts: HilbertOptions = {}): Int[] {
+  if (M.nv === 0) return M.isUnit() ? [] : [1]; // the ring is the field itself
   const ones = Array.from({ length: M.nv }, () => Int32Array.of(1));
   const terms = kPolynomialTerms(M, ones, opts);
   let top = -1;

@@ -25,10 +25,11 @@ export function toPolynomialIn(f: SymLike, x: string, m: number): PolyLike {
 }
 
 /** Split p into x-exponent vectors (length m) with coefficients in the other variables. */
-function byXExponents(p: PolyLike, x: string, m: number, call: string): Map<string, { e: number[]; coef: PolyLike }> {
+export function xCoefficients(p: PolyLike, x: string, m: number, call: string): Map<string, { e: number[]; coef: PolyLike }> {
   const out = new Map<string, { e: number[]; coef: PolyLike }>();
   if (!isPolynomial(p)) {
-    if (!(isScalar(p) && sisZero(p))) out.set('', { e: new Array(m).fill(0), coef: p });
+    const e = new Array<number>(m).fill(0);
+    if (!(isScalar(p) && sisZero(p))) out.set(e.join(','), { e, coef: p });
     return out;
   }
   const nv = p.nv;
@@ -65,12 +66,18 @@ function byXExponents(p: PolyLike, x: string, m: number, call: string): Map<stri
 }
 
 export function fromPolynomialIn(p: PolyLike, x: string, m: number, call: string): SymLike {
-  const terms = byXExponents(p, x, m, call);
-  // Symmetric: each coefficient equals that of the sorted exponent vector.
+  const terms = xCoefficients(p, x, m, call);
+  // Symmetric: unchanged by each adjacent transposition of x[i], x[i+1] (they generate S_m).
   for (const { e, coef } of terms.values()) {
-    const sorted = e.slice().sort((a, b) => b - a);
-    const other = terms.get(sorted.join(','));
-    if (!other || !pequals(other.coef, coef)) {
+    let ok = true;
+    for (let i = 0; i + 1 < m && ok; i++) {
+      if (e[i] === e[i + 1]) continue;
+      const f = e.slice();
+      [f[i], f[i + 1]] = [f[i + 1], f[i]];
+      const other = terms.get(f.join(','));
+      ok = other !== undefined && pequals(other.coef, coef);
+    }
+    if (!ok) {
       const mono = e.map((k, i) => (k === 0 ? '' : k === 1 ? `${x}[${i + 1}]` : `${x}[${i + 1}]^${k}`)).filter((s) => s).join('*') || '1';
       fail(`${call}: ${polyText(p)} is not symmetric in ${x}[1..${m}] (compare the coefficients of ${mono} and its rearrangements)`);
     }

@@ -11,7 +11,7 @@ import { iadd, imul, ineg, normBig, type Int } from '../../numbers/integer.js';
 import { partitionsOf, sizeOfParts, type Parts } from './partitions.js';
 
 /** Beyond this degree the tables (p(n)^2 entries, p(n)^3 work for the inverse) are refused. */
-export const MAX_SYM_DEGREE = 18;
+export const MAX_SYM_DEGREE = 12;
 
 export function checkDegree(n: number, what: string): void {
   if (n > MAX_SYM_DEGREE) fail(`${what} has degree ${n}; symmetric functions are limited to degree ${MAX_SYM_DEGREE}`);
@@ -106,29 +106,55 @@ export interface DegreeTables {
   readonly X: readonly (readonly Int[])[];
 }
 
+/** Each table of a degree is computed on first use (characters are not needed for Kostka work). */
+class LazyTables implements DegreeTables {
+  private k?: Int[][];
+  private kinv?: Int[][];
+  private x?: Int[][];
+  readonly parts: readonly (readonly number[])[];
+
+  constructor(readonly n: number) {
+    this.parts = partitionsOf(n);
+  }
+
+  get K(): readonly (readonly Int[])[] {
+    if (!this.k) this.k = this.parts.map((l) => this.parts.map((m) => normBig(kostka(l, m))));
+    return this.k;
+  }
+
+  get Kinv(): readonly (readonly Int[])[] {
+    if (!this.kinv) {
+      const K = this.K, N = this.parts.length;
+      const inv: Int[][] = this.parts.map(() => new Array<Int>(N).fill(0));
+      for (let i = 0; i < N; i++) {
+        inv[i][i] = 1;
+        for (let j = i + 1; j < N; j++) {
+          let s: Int = 0;
+          for (let k = i; k < j; k++) {
+            const a = inv[i][k], b = K[k][j];
+            if (a !== 0 && b !== 0) s = iadd(s, imul(a, b));
+          }
+          inv[i][j] = ineg(s);
+        }
+      }
+      this.kinv = inv;
+    }
+    return this.kinv;
+  }
+
+  get X(): readonly (readonly Int[])[] {
+    if (!this.x) this.x = this.parts.map((l) => this.parts.map((r) => normBig(character(l, r))));
+    return this.x;
+  }
+}
+
 const tables: DegreeTables[] = [];
 
 export function tablesOf(n: number): DegreeTables {
   const known = tables[n];
   if (known) return known;
   checkDegree(n, 'a symmetric function');
-  const parts = partitionsOf(n);
-  const N = parts.length;
-  const K: Int[][] = parts.map((l) => parts.map((m) => normBig(kostka(l, m))));
-  const Kinv: Int[][] = parts.map(() => new Array<Int>(N).fill(0));
-  for (let i = 0; i < N; i++) {
-    Kinv[i][i] = 1;
-    for (let j = i + 1; j < N; j++) {
-      let s: Int = 0;
-      for (let k = i; k < j; k++) {
-        const a = Kinv[i][k], b = K[k][j];
-        if (a !== 0 && b !== 0) s = iadd(s, imul(a, b));
-      }
-      Kinv[i][j] = ineg(s);
-    }
-  }
-  const X: Int[][] = parts.map((l) => parts.map((r) => normBig(character(l, r))));
-  const t: DegreeTables = { n, parts, K, Kinv, X };
+  const t = new LazyTables(n);
   tables[n] = t;
   return t;
 }

@@ -3,8 +3,8 @@
 import { InputError } from '../../base/errors.js';
 import type { CompiledConjecture } from '../../language/conjecture/compiled.js';
 import { readLedger } from '../../records/ledger.js';
-import type { HeldRecord } from '../../runner/parallel/resume.js';
-import { parseShardOption, type Shard } from '../../runner/parallel/slicing.js';
+import type { HeldRecord } from '../../runner/work/resume.js';
+import { parseShardOption, type Shard } from '../../runner/work/slicing.js';
 
 export function shardFlag(text: string | undefined): Shard | null {
   if (text === undefined) return null;

@@ -1,24 +1,28 @@
 // hunch check [PATH...]: run the conjectures, print the report, record coverage and counterexamples.
 
+import { formatCount } from '../../base/format-count.js';
 import type { Command } from 'commander';
 import { InputError } from '../../base/errors.js';
 import { MAX_EXHAUSTIVE_SIZES } from '../../language/conjecture/compile-conjecture.js';
 import '../../families/index.js';
 import '../../library/index.js';
-import { prepareRun, type RunRequest } from '../../runner/session.js';
+import { prepareRun, type RunRequest } from '../../runner/run-request.js';
 import { agreesWithExpectation, type ConjectureResult } from '../../runner/result.js';
 // The worker pool, shards and resumed runs.
-import { startCheckRun, workerCount } from '../../runner/parallel/run-check.js';
+import { startCheckRun, workerCount } from '../../runner/threaded-run.js';
 import { heldRecordsForResume, shardFlag } from './check-parallel-flags.js';
+import { checkedNothing, refuseNothingToCheck } from './check-nothing.js';
 import { formatResult, formatSummary } from '../../reports/human.js';
 import { resultDocument } from '../../reports/json.js';
 import { ProgressLine } from '../../reports/progress.js';
-import { EXIT } from '../errors.js';
+import { EXIT, formatError } from '../errors.js';
 import { collect, parseCount, parseDuration, parseRangeOption } from '../options.js';
 import type { Terminal } from '../terminal.js';
 import type { AddCommand } from './index.js';
 import { createCheckRecorder, type CheckRecorder } from '../../records/check-recorder.js';
 import { approvedPlugins, explainSkippedPlugins } from '../../records/open-project.js';
+import { writeFileAtomic } from '../../records/atomic-write.js';
+import { junitXml } from '../../reports/junit.js';
 import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
 
 interface CheckFlags {
@@ -67,8 +71,8 @@ export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
 function limitSizes(r: [string, number, number]): [string, number, number] {
   if (r[2] - r[1] + 1 > MAX_EXHAUSTIVE_SIZES)
     throw new InputError(
-      `--sizes ${r[0]}=${r[1]}..${r[2]} has ${(r[2] - r[1] + 1).toLocaleString('en-US')} sizes; an exhaustive range may have at most ` +
-        `${MAX_EXHAUSTIVE_SIZES.toLocaleString('en-US')}. Check large sizes with --sample instead`,
+      `--sizes ${r[0]}=${r[1]}..${r[2]} has ${formatCount(r[2] - r[1] + 1)} sizes; an exhaustive range may have at most ` +
+        `${formatCount(MAX_EXHAUSTIVE_SIZES)}. Check large sizes with --sample instead`,
     );
   return r;
 }
@@ -106,6 +110,7 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   } catch (e) {
     throw explainSkippedPlugins(e, project);
   }
+  refuseNothingToCheck(compiled, req, paths);
   const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger });
   req.regression = recorder.regressionCases(compiled);
   if (flags.resume) req.resume = heldRecordsForResume(flags.ledger, project.config.ledger, compiled);
@@ -118,12 +123,25 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   let interrupts = 0;
 
   // One worker (--workers 1) or a pool sharing every size; either way off this thread.
+  // A record that cannot be written (a full disk, a file size limit) stops the run: what was
+  // recorded before stays, and the command ends with the reason (exit 2), never a crash.
+  let recordFailure: unknown = null;
+  const recording = <T>(f: () => T): T | null => {
+    if (recordFailure) return null;
+    try {
+      return f();
+    } catch (e) {
+      recordFailure = e;
+      Atomics.store(flag, 0, 1);
+      return null;
+    }
+  };
   const run = startCheckRun(compiled, req, workers, flag, {
     onProgress: (done, total, label) => progress.update(done, total, label),
-    onPiece: (id, piece) => recorder.piece(id, piece),
+    onPiece: (id, piece) => void recording(() => recorder.piece(id, piece)),
     onResult: (r) => {
       results.push(r);
-      const replay = recorder.result(r);
+      const replay = recording(() => recorder.result(r));
       progress.clear();
       if (!flags.json) t.out(formatResult(r, style, replay));
     },
@@ -148,8 +166,14 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
     t.err(`${t.color.red('internal error:')} ${crash}\nThis is a bug in hunch; finished work was recorded.\n`);
     return EXIT.invalid;
   }
+  if (recordFailure) {
+    recorder.close();
+    t.err(formatError(t, recordFailure));
+    t.err('Stopped: the records above could not be written; what was recorded before is kept.\n');
+    return EXIT.invalid;
+  }
   const interrupted = interrupts > 0;
-  if (flags.junit) recorder.junit(flags.junit, results);
+  if (flags.junit) writeFileAtomic(flags.junit, junitXml(results), { what: 'the JUnit report', makeFolder: false });
   for (const w of recorder.warnings) t.err(`${t.color.yellow('warning:')} ${w}\n`);
   recorder.close();
   if (flags.json) t.out(JSON.stringify(resultDocument(results), null, 2) + '\n');
@@ -160,7 +184,12 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
       t.out(t.color.yellow(`Interrupted${left ? `: ${left} conjecture${left === 1 ? '' : 's'} not started` : ''}; what was finished is recorded.\n`));
     }
   }
+  // A "holds" over no case at all (a family found empty only while running) is no pass.
+  const nothing = results.filter(checkedNothing);
+  for (const r of nothing)
+    t.err(`${t.color.red('nothing checked:')} ${r.id} had no case at any size it was checked at; it is not counted as holding.\n`);
   if (interrupted) return EXIT.interrupted;
+  if (nothing.length) return EXIT.contradicted;
   return results.every((r) => agreesWithExpectation(r) || (r.outcome === 'incomplete' && r.expect !== 'fails'))
     ? EXIT.ok
     : EXIT.contradicted;

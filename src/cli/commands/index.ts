@@ -15,6 +15,8 @@ import { addSlurmCommand } from './slurm.js';
 import { addTrustCommand } from './trust.js';
 import { addSampleCommand } from './sample.js';
 import { addGuessCommand } from './guess.js';
+import { addExportCommand } from './export.js';
+import { addReportCommand } from './report.js';
 
 /** Adds a command; the action reports its exit code through setExit. */
 export type AddCommand = (program: Command, t: Terminal, setExit: (code: number) => void) => void;
@@ -32,4 +34,6 @@ export const commands: AddCommand[] = [
   addTrustCommand,
   addSampleCommand,
   addGuessCommand,
+  addExportCommand,
+  addReportCommand,
 ];

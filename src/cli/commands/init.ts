@@ -48,6 +48,16 @@ let:
   a: maj(w)
   b: inv(w)
 claim: a <= b
+---
+conjecture: inv-maj-equidistributed
+statement: Inversions and the major index have the same distribution on S_n.
+expect: holds
+for:
+  n: 1..7
+# A comprehension puts its body first: distribution(BODY for VARIABLE in SOURCE).
+claim: distribution(inv(w) for w in permutations(n)) == distribution(maj(w) for w in permutations(n))
+references:
+  - "P. A. MacMahon, Combinatory Analysis (1915), vol. I; OEIS A008302"
 `;
 
 export const GITATTRIBUTES_LINE = `${DEFAULT_LEDGER} merge=union`;

@@ -64,12 +64,12 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
       if (showForms) {
         t.out(c.bold('Language forms') + ' (comprehensions; each also reduces a plain list: sum([1,2,3]))\n');
         t.out(`  ${REDUCERS.join(', ')}\n`);
-        t.out('    e.g. sum(i in 1..n: i^2), count(w in permutations(n) where des(w) == 1), all(x in L: x > 0)\n\n');
+        t.out('    e.g. sum(i^2 for i in 1..n), count(w in permutations(n) where des(w) == 1), all(x > 0 for x in L)\n\n');
       }
       if (selF.length) {
         t.out(c.bold('Families') + '\n');
         for (const f of selF) {
-          t.out(`  ${c.cyan(f.signature)}${f.arbitrary ? '' : c.dim('  (no random sampler yet)')}\n    ${f.description}\n    example: ${f.example}\n    source: ${c.dim(f.source)}\n`);
+          t.out(`  ${c.cyan(f.signature)}\n    ${f.description}\n    example: ${f.example}\n    source: ${c.dim(f.source)}\n`);
         }
       }
       if (selFn.length) {

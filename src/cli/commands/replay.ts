@@ -10,6 +10,7 @@ import { valueToText } from '../../values/operations.js';
 import { openCommandProject } from '../project.js';
 import { replayCounterexample } from '../../records/replay.js';
 import { EXIT } from '../errors.js';
+import { witnessLines } from '../../reports/witnesses.js';
 import type { AddCommand } from './index.js';
 
 function text(x: unknown): string {
@@ -68,6 +69,7 @@ export const addReplayCommand: AddCommand = (program, t, setExit) => {
           t.out(`${c.green('still refutes')} ${id}\n${caseText}\n`);
           for (const [k, v] of Object.entries(r.values)) t.out(`    ${c.cyan(k)} = ${text(v)}\n`);
           if (r.sides) t.out(`    the two sides: ${text(r.sides[0])} and ${text(r.sides[1])}\n`);
+          for (const l of witnessLines(r.witnesses, t)) t.out(`    ${l}\n`);
           break;
         case 'holds':
           t.out(`${c.red('no longer refutes')} ${id}: the claim holds for this case\n${caseText}\n`);

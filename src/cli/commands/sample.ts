@@ -13,7 +13,6 @@ import { encodeValue, valueToText } from '../../values/operations.js';
 import type { Structured } from '../../values/structured.js';
 import type { Value } from '../../values/value.js';
 import { EXIT } from '../errors.js';
-import { openProject } from '../../records/open-project.js';
 import type { AddCommand } from './index.js';
 
 const MAX_COUNT = 10_000;
@@ -35,8 +34,7 @@ export const addSampleCommand: AddCommand = (program, t, setExit) => {
     .option('--seed <S>', `the seed (default ${DEFAULT_SEED}: the same objects every time)`)
     .option('--json', 'one line per object in the record encoding')
     .option('--ascii', 'plain ASCII pictures')
-    .action(async (text: string, flags: { count?: string; seed?: string; json?: boolean }) => {
-      await openProject(); // plugins may use the families too; keep the language as in check
+    .action((text: string, flags: { count?: string; seed?: string; json?: boolean }) => {
       const count = countOption(flags.count);
       const seed = flags.seed ?? DEFAULT_SEED;
       const e = parseExpression(text, textOrigin('<family>', text));

@@ -27,7 +27,10 @@ export interface ClusterPlan {
   sshScript: string;
 }
 
-export const q = (s: string) => (/^[A-Za-z0-9_@%+=:,./-]+$/.test(s) ? s : `'${s.replace(/'/g, `'\\''`)}'`);
+/** One shell word: left as it is when it holds only safe characters, else single-quoted. */
+export const q = (s: string) => (/^[A-Za-z0-9_@%+=:,./-]+$/.test(s) ? s : sq(s));
+/** Always single-quoted: the shell expands nothing inside. */
+export const sq = (s: string) => `'${s.replace(/'/g, `'\\''`)}'`;
 
 function sbatchHeader(p: ClusterPlan, name: string, extra: string[]): string {
   const lines = ['#!/bin/bash', `#SBATCH --job-name=${name}`, `#SBATCH --chdir=${p.workdir}`];
@@ -95,8 +98,10 @@ export function sshScript(p: ClusterPlan): string {
     `HUNCH=\${HUNCH:-${q(p.hunch)}}\n` +
     `cd ${q(p.workdir)}\n` +
     `mkdir -p ${q(p.ledgerDir)}\n` +
+    // The command GNU parallel hands to the remote shell, quoted for that shell, then as a whole
+    // single-quoted for this one: nothing in a path is expanded on either side.
     `seq 1 ${p.shards} | parallel --sshlogin "$HOSTS" --workdir ${q(p.workdir)} \\\n` +
-    `  "$HUNCH check ${p.checkArgs.replace(/"/g, '\\"')} --shard {}/${p.shards} --workers ${p.cpus} --resume --ledger ${q(p.ledgerDir)}/shard-{}.jsonl; test \\$? -le 1" \\\n` +
+    `  "$HUNCH "${sq(`check ${p.checkArgs} --shard {}/${p.shards} --workers ${p.cpus} --resume --ledger ${q(p.ledgerDir)}/shard-{}.jsonl; test $? -le 1`)} \\\n` +
     '  || echo "some shards failed; run this script again to resume them" >&2\n' +
     `$HUNCH merge ${q(p.ledgerDir)}/shard-*.jsonl -o ${q(p.ledger)}\n`
   );

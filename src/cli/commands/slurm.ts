@@ -94,6 +94,10 @@ export const addSlurmCommand: AddCommand = (program, t, setExit) => {
         submitScript: `${stem}-submit.sh`,
         sshScript: `${stem}-ssh.sh`,
       };
+      // A newline or control byte in a path would end a line of the script and start a command.
+      for (const s of [plan.hunch, plan.workdir, plan.ledgerDir, plan.ledger, plan.arrayScript, ...absPaths])
+        if (/[\u0000-\u001f\u007f]/.test(s))
+          throw new InputError(`the path ${JSON.stringify(s)} holds a newline or control character and cannot be written into a job script safely; rename it`);
       mkdirSync(dirname(arrayPath), { recursive: true });
       const files: Array<[string, string]> = [
         [plan.arrayScript, arrayScript(plan)],

@@ -1,5 +1,6 @@
 // hunch table EXPR --over NAME=A..B: tabulate an expression and say what it notices.
 
+import { formatCount } from '../../base/format-count.js';
 import { InputError } from '../../base/errors.js';
 import '../../families/index.js';
 import '../../library/index.js';
@@ -35,7 +36,7 @@ export const addTableCommand: AddCommand = (program, t, setExit) => {
       const vars = flags.indeterminates ? flags.indeterminates.split(',').map((s) => s.trim()).filter(Boolean) : [];
       const extra: Array<[string, string]> = (flags.let ?? []).map(parseLetOption);
       if (hi - lo + 1 > MAX_TABLE_ROWS)
-        throw new InputError(`--over ${flags.over} has ${(hi - lo + 1).toLocaleString('en-US')} rows; a table may have at most ${MAX_TABLE_ROWS.toLocaleString('en-US')}`);
+        throw new InputError(`--over ${flags.over} has ${formatCount(hi - lo + 1)} rows; a table may have at most ${formatCount(MAX_TABLE_ROWS)}`);
       const clash = extra.find(([n]) => n === name);
       if (clash) throw new InputError(`--let ${name}=... names the variable of --over ${flags.over}; give it another name`);
       const rows: Array<[number, Value]> = [];

@@ -3,9 +3,10 @@
 // Each subclass keeps its own field name (parts, letters, elems) and says how to rebuild itself.
 
 import type { Structured } from '../../values/structured.js';
+import type { ObjectKind } from '../../values/types.js';
 
 export abstract class IntegerSequence implements Structured {
-  abstract readonly kind: string;
+  abstract readonly kind: ObjectKind;
   transient = false;
 
   /** The integers, in the object's own order. */
@@ -13,7 +14,7 @@ export abstract class IntegerSequence implements Structured {
   /** A new object of the same class over these integers (trusted, already valid). */
   protected abstract rebuild(values: number[]): IntegerSequence;
 
-  /** A source after `in`: sum(c), max(lambda), all(i in S: ...). */
+  /** A source after `in`: sum(c), max(lambda), all(c > 0 for c in S). */
   elements(): readonly number[] {
     return this.sequence();
   }

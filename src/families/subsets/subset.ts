@@ -46,7 +46,7 @@ export class Subset implements Structured {
     return new Subset(s);
   }
 
-  /** The elements in increasing order: a subset is a source after `in` (sum(S), all(i in S: ...)). */
+  /** The elements in increasing order: a subset is a source after `in` (sum(S), all(i > 0 for i in S)). */
   elements(): readonly number[] {
     return this.elems;
   }

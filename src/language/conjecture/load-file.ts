@@ -6,7 +6,7 @@ import { InputError } from '../../base/errors.js';
 import { nearest } from '../../base/suggest.js';
 import { CONJECTURE_KEYS, ConjectureSpec, DefineSpec, EXPECTATIONS, SampleSpec } from './conjecture.js';
 import { mapEntries, scalarString, seqItems, YamlFile } from './yaml-reader.js';
-import type { Expectation } from '../../runner/result.js';
+import type { Expectation } from './conjecture.js';
 
 const ID = /^[a-z0-9][a-z0-9-]*$/;
 const NAME = /^[A-Za-z_][A-Za-z0-9_]*$/;
@@ -66,6 +66,9 @@ export interface LoadedFile {
   conjectures: ConjectureSpec[];
 }
 
+/** The longest conjecture id (it names a file: most file systems allow 255 bytes). */
+export const MAX_ID_LENGTH = 200;
+
 export function loadConjectureFile(file: string, source: string): LoadedFile {
   const y = new YamlFile(file, source);
   const fileDefines: DefineSpec[] = [];
@@ -123,6 +126,9 @@ function readConjecture(
   const id = scalarString(y, idE.value, 'conjecture (the id)');
   if (!ID.test(id))
     throw new InputError(`the id "${id}" may use only lowercase letters, digits and '-'`, y.nodePos(idE.value), id);
+  // The id names counterexamples/<id>.yaml: keep it well inside every file system's name limit.
+  if (id.length > MAX_ID_LENGTH)
+    throw new InputError(`the id is ${id.length} characters long; an id may have at most ${MAX_ID_LENGTH}`, y.nodePos(idE.value), id.slice(0, 40) + '...');
 
   const expectE = get('expect');
   let expect: Expectation = 'open';

@@ -2,7 +2,8 @@
 // error inside an expression points at the line and column of the file, not of the scalar.
 
 import { isAlias, isMap, isScalar, isSeq, LineCounter, parseAllDocuments, Scalar, YAMLMap, type Document, type Node } from 'yaml';
-import { InputError, SourcePos } from '../../base/errors.js';
+import { InputError, InputErrors, SourcePos } from '../../base/errors.js';
+import { yamlHazards } from './yaml-hazards.js';
 
 /** Maps an offset inside an expression's text to its position in the file. */
 export interface Origin {
@@ -33,6 +34,11 @@ export class YamlFile {
       throw e;
     }
     if (!Array.isArray(this.docs)) this.docs = [this.docs as unknown as Document.Parsed];
+    // Values YAML misreads (a ": " or " #" inside an expression, a reserved first character) are
+    // named with their fix, every one of the file at once, before YAML's own first complaint.
+    const hazards = yamlHazards(file, source);
+    if (hazards.length === 1) throw hazards[0];
+    if (hazards.length > 1) throw new InputErrors(hazards);
     for (const d of this.docs) {
       const err = d.errors[0];
       if (err) {
@@ -40,9 +46,9 @@ export class YamlFile {
         if (/call stack/i.test(err.message)) throw new InputError('the YAML is nested too deeply to read', p);
         const firstLine = err.message.split('\n')[0];
         const line = this.lineText(p.line);
-        // The commonest slip: a comprehension's ": " inside a plain YAML value starts a mapping.
+        // Inside { } (which the hazard scan leaves to YAML) a comprehension's ": " still misleads it.
         const hint = /\(.*: .*\)/.test(line)
-          ? '. A ": " inside an expression starts a YAML mapping: put the expression in quotes (\'...\') or write it as a block (claim: >-, then the expression on the next line)'
+          ? '. A ": " inside an expression starts a YAML mapping: write the comprehension body first, sum(q^inv(w) for w in S), which needs no quotes, or put the expression in quotes (\'...\')'
           : '';
         throw new InputError(`YAML syntax: ${firstLine.replace(/ at line \d+, column \d+:?$/, '')}${hint}`, p, line);
       }

@@ -25,10 +25,10 @@ interface NodeBase {
 
 export type ArithOp = '+' | '-' | '*' | '/' | '^';
 export type CompareOp = '==' | '!=' | '<' | '<=' | '>' | '>=';
-export type LogicOp = 'and' | 'or' | 'implies';
+export type LogicOp = 'and' | 'or' | 'implies' | 'iff';
 export type BinaryOp = ArithOp | CompareOp | LogicOp;
 
-/** The reducers that take comprehensions: sum(i in 1..n: i^2), count(w in S where ...), ... */
+/** The reducers that take comprehensions: sum(i^2 for i in 1..n), count(w in S where ...), ... */
 export const REDUCERS = [
   'sum', 'product', 'count', 'all', 'any', 'min', 'max', 'list', 'set', 'concat', 'distribution',
 ] as const;
@@ -59,7 +59,8 @@ export type Expr =
   | (NodeBase & { type: 'if'; cond: Expr; then: Expr; else: Expr })
   | (NodeBase & { type: 'lambda'; params: string[]; body: Expr })
   | (NodeBase & { type: 'call'; callee: string; args: Expr[] })
-  | (NodeBase & { type: 'index'; target: Expr; index: Expr })
+  /** L[i]; z[i, j] (index2 set) only on a declared indeterminate: the variable z[i,j]. */
+  | (NodeBase & { type: 'index'; target: Expr; index: Expr; index2?: Expr })
   | (NodeBase & { type: 'comprehension'; reducer: Reducer; generators: Generator[]; body?: Expr });
 
 export type ExprOf<T extends Expr['type']> = Extract<Expr, { type: T }>;

@@ -1,4 +1,4 @@
-// Compiling operators and literals: lists, ranges, not/and/or/implies, ==, order comparisons,
+// Compiling operators and literals: lists, ranges, not/and/or/implies/iff, ==, order comparisons,
 // arithmetic (with a `typeof` fast path for small integers), if, and indexing.
 
 import { EvalError } from '../../base/errors.js';
@@ -106,7 +106,7 @@ export function compileNegate(cx: CompileContext, e: ExprOf<'unary'>): Compiled 
       if (typeof a === 'number') return a === 0 ? 0 : -a;
       return at1(ops.neg, a, pos);
     },
-    type: c.type === 'integer' || isNumericish(c.type) || c.type === 'matrix' ? c.type : 'any',
+    type: c.type === 'integer' || isNumericish(c.type) || c.type === 'matrix' || c.type === 'symmetric' ? c.type : 'any',
   };
 }
 
@@ -118,6 +118,8 @@ export function compileLogic(cx: CompileContext, e: ExprOf<'binary'>): Compiled 
       return { fn: (fr) => a(fr) && b(fr), type: 'boolean' };
     case 'or':
       return { fn: (fr) => a(fr) || b(fr), type: 'boolean' };
+    case 'iff':
+      return { fn: (fr) => a(fr) === b(fr), type: 'boolean' };
     default:
       return { fn: (fr) => !a(fr) || b(fr), type: 'boolean' };
   }
@@ -193,8 +195,20 @@ export function checkArith(cx: CompileContext, op: string, a: TypeName, b: TypeN
     throw errorAt(cx, `${op} is not defined for ${what}`, e,
       why ?? (op === '+' && a === 'list' && (b === 'list' || b === 'any') ? 'to join lists use concat([A, B])' : undefined));
   };
-  const arithmetic = (t: TypeName) => t === 'any' || isNumericish(t) || t === 'permutation' || t === 'matrix';
+  const arithmetic = (t: TypeName) => t === 'any' || isNumericish(t) || t === 'permutation' || t === 'matrix' || t === 'symmetric';
   if (!arithmetic(a) || (b !== undefined && !arithmetic(b))) bad();
+  // Symmetric functions: a ring over the numbers and polynomials (division only by those).
+  if (a === 'symmetric' || b === 'symmetric') {
+    if (b === undefined) return a;
+    const other = a === 'symmetric' ? b : a;
+    if (op === '^') {
+      if (b === 'symmetric' || !mayAccept('integer', b)) bad('an exponent must be an integer');
+      return 'symmetric';
+    }
+    if (op === '/' && b === 'symmetric') bad('a symmetric function can be divided only by a number or a polynomial');
+    if (other !== 'any' && other !== 'symmetric' && !isNumericish(other)) bad();
+    return 'symmetric';
+  }
   if (b === undefined) {
     if (a === 'permutation') bad('use inverse(w) or w^-1');
     return a;
@@ -287,6 +301,7 @@ export function compileIf(cx: CompileContext, e: ExprOf<'if'>): Compiled {
 export function compileIndex(cx: CompileContext, e: ExprOf<'index'>): Compiled {
   const t = e.target;
   if (t.type === 'name' && cx.indeterminates.has(t.name) && !cx.layout.lookup(t.name)) return indexedVariable(cx, t.name, e);
+  if (e.index2) throw errorAt(cx, 'two indices [i, j] name a doubly indexed indeterminate such as z[i, j] (declared under indeterminates:); to index a list twice write L[i][j]', e);
   const target = cx.expr(t), idx = cx.expr(e.index);
   const notIndexable = ['integer', 'rational', 'number', 'boolean', 'polynomial', 'scalarOrPolynomial', 'function', 'distribution'];
   if (notIndexable.includes(target.type)) throw errorAt(cx, `${describeType(target.type)} cannot be indexed`, t);
@@ -299,6 +314,7 @@ export function compileIndex(cx: CompileContext, e: ExprOf<'index'>): Compiled {
 
 /** x[i] for a declared indeterminate x: the polynomial variable named 'x[i]'. */
 export function indexedVariable(cx: CompileContext, base: string, e: ExprOf<'index'>): Compiled {
+  if (e.index2) return doublyIndexedVariable(cx, base, e, e.index2);
   const idx = cx.expr(e.index);
   if (!mayAccept('integer', idx.type)) throw errorAt(cx, `the index of ${base}[...] must be an integer, but this is ${describeType(idx.type)}`, e.index);
   const xf = idx.fn;
@@ -310,6 +326,28 @@ export function indexedVariable(cx: CompileContext, base: string, e: ExprOf<'ind
       if (typeof i !== 'number') throw new EvalError(`the index of ${base}[...] must be a small integer, got ${short(i)}`, pos);
       let v = cache.get(i);
       if (!v) cache.set(i, (v = variable(`${base}[${i}]`)));
+      return v;
+    },
+    type: 'polynomial',
+  };
+}
+
+/** z[i, j] for a declared indeterminate z: the polynomial variable named 'z[i,j]'. */
+function doublyIndexedVariable(cx: CompileContext, base: string, e: ExprOf<'index'>, second: Expr): Compiled {
+  const a = cx.expr(e.index), b = cx.expr(second);
+  for (const [c, x] of [[a, e.index], [b, second]] as const)
+    if (!mayAccept('integer', c.type)) throw errorAt(cx, `the indices of ${base}[i, j] must be integers, but this is ${describeType(c.type)}`, x);
+  const af = a.fn, bf = b.fn;
+  const pos = posOf(cx, e);
+  const cache = new Map<string, Polynomial>();
+  return {
+    fn: (fr) => {
+      const i = af(fr), j = bf(fr);
+      if (typeof i !== 'number' || typeof j !== 'number')
+        throw new EvalError(`the indices of ${base}[i, j] must be small integers, got ${short(typeof i !== 'number' ? i : j)}`, pos);
+      const name = `${base}[${i},${j}]`;
+      let v = cache.get(name);
+      if (!v) cache.set(name, (v = variable(name)));
       return v;
     },
     type: 'polynomial',

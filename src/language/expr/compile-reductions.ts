@@ -39,7 +39,7 @@ export function elementType(cx: CompileContext, plan: SourcePlan): TypeName {
   return plan.kind === 'range' ? 'integer' : plan.kind === 'family' ? plan.family.objectKind : 'any';
 }
 
-/** Reducer comprehension sum(i in S where C: E). */
+/** Reducer comprehension sum(E for i in S where C). */
 export function compileComprehension(cx: CompileContext, e: ExprOf<'comprehension'>): Compiled {
   return reduction(cx, e.reducer, e.generators, e.body, e);
 }
@@ -52,8 +52,8 @@ export function reducerCall(cx: CompileContext, name: Reducer, e: ExprOf<'call'>
   }
   if (e.args.length !== 1) {
     const tail = name === 'min' || name === 'max' ? `, several values ${name}(a, b, ...)` : '';
-    throw errorAt(cx, `${name} takes one list${tail}, or a comprehension ${name}(v in S: ...); got ${plural(e.args.length, 'argument')}`, e,
-      `${name}(v in S: ...)`);
+    throw errorAt(cx, `${name} takes one list${tail}, or a comprehension ${name}(... for v in S); got ${plural(e.args.length, 'argument')}`, e,
+      `${name}(... for v in S)`);
   }
   const arg = e.args[0];
   if (name === 'count' && arg.type === 'call' && !cx.layout.lookup(arg.callee) && !cx.defines.has(arg.callee) && getFamily(arg.callee)) {
@@ -98,7 +98,8 @@ export function reduction(cx: CompileContext, reducer: Reducer, gens: Generator[
       const k = plans[0].slot;
       body = { fn: (fr) => fr[k], type: elementType(cx, plans[0].source) };
     } else {
-      throw errorAt(cx, `${reducer}(...) with several generators needs ": expression" to say what to ${reducer === 'sum' || reducer === 'product' ? 'combine' : 'collect'}`, e);
+      throw errorAt(cx, `${reducer}(...) with several generators needs a body to say what to ${reducer === 'sum' || reducer === 'product' ? 'combine' : 'collect'}`, e,
+        `${reducer}(E for ${gens.map((g) => `${g.name} in ...`).join(', ')})`);
     }
     if ((reducer === 'all' || reducer === 'any' || (reducer === 'count' && bodyExpr)) && !mayAccept('boolean', body.type)) {
       throw errorAt(cx, `the body of ${reducer} must be true or false, but it is ${describeType(body.type)}`, bodyExpr ?? e);

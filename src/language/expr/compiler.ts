@@ -46,7 +46,7 @@ export interface CompilerOptions {
   defines: DefineDecl[];
 }
 
-const BOOLEAN_OPS = new Set(['and', 'or', 'implies']);
+const BOOLEAN_OPS = new Set(['and', 'or', 'implies', 'iff']);
 const ORDER_OPS = new Set(['<', '<=', '>', '>=']);
 
 
@@ -198,7 +198,7 @@ export function compileName(cx: CompileContext, e: ExprOf<'name'>): Compiled {
   if (getFamily(n)) {
     throw errorAt(cx, `${n} is a family: write it with its arguments, e.g. ${getFamily(n)!.signature}, after "in" or inside count(...)`, e);
   }
-  if (isReducer(n)) throw errorAt(cx, `${n} needs arguments, e.g. ${n}(i in 1..n: i)`, e);
+  if (isReducer(n)) throw errorAt(cx, `${n} needs arguments, e.g. ${n}(i for i in 1..n)`, e);
   throw unknownName(cx, n, e, false);
 }
 

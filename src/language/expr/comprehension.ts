@@ -33,7 +33,7 @@ interface Iterable_ {
 }
 
 /** The elements of a value used as a source. */
-function elementsOf(v: Value, pos: SourcePos | undefined): readonly Value[] {
+export function elementsOf(v: Value, pos: SourcePos | undefined): readonly Value[] {
   if (Array.isArray(v)) return v;
   if (isStructured(v) && typeof (v as unknown as Iterable_).elements === 'function') {
     try {

@@ -14,7 +14,7 @@ export interface Token {
   end: number;
 }
 
-export const KEYWORDS = new Set(['if', 'then', 'else', 'and', 'or', 'not', 'implies', 'in', 'for', 'where', 'true', 'false']);
+export const KEYWORDS = new Set(['if', 'then', 'else', 'and', 'or', 'not', 'implies', 'iff', 'in', 'for', 'where', 'true', 'false']);
 
 // Longest first, so that '..' wins over '.', '<=' over '<', '->' over '-'.
 const OPERATORS = ['..', '->', '==', '!=', '<=', '>=', '(', ')', '[', ']', ',', ':', '+', '-', '*', '/', '^', '<', '>'];

@@ -1,6 +1,6 @@
 // Recursive-descent parser for FORMAT.md §3. Precedence, lowest first:
 //   1  if C then A else B,  v -> E,  (a, b) -> E
-//   2  A implies B          (right-associative; its operands are `or` chains)
+//   2  A implies B, A iff B (implies right-associative; iff does not chain; operands are `or` chains)
 //   3  A or B
 //   4  A and B
 //   5  not A
@@ -165,17 +165,35 @@ class Parser {
   // Level 2.
   private implication(): Expr {
     const left = this.disjunction();
+    if (this.is('iff')) {
+      const op = this.next();
+      const right = this.disjunction();
+      if (this.is('iff') || this.is('implies')) {
+        throw this.err(`${op.text} does not chain with ${this.tok.text}`, this.tok, 'add parentheses: (A iff B) iff C, or A iff (B implies C)');
+      }
+      return this.node({ type: 'binary', op: 'iff', left, right, start: left.start, end: right.end });
+    }
     if (this.is('implies')) {
       this.next();
       this.enter();
       try {
         const right = this.implication();
+        if (right.type === 'binary' && right.op === 'iff' && !this.parenthesized(right)) {
+          throw inputError('implies does not chain with iff', this.src, right.start, right.end, 'add parentheses: A implies (B iff C), or (A implies B) iff C');
+        }
         return this.node({ type: 'binary', op: 'implies', left, right, start: left.start, end: right.end });
       } finally {
         this.depth--;
       }
     }
     return left;
+  }
+
+  /** Nodes written inside their own parentheses (a tree does not keep them otherwise). */
+  private readonly grouped = new Set<Expr>();
+
+  private parenthesized(e: Expr): boolean {
+    return this.grouped.has(e);
   }
 
   private leftAssoc(ops: string[], operand: () => Expr): Expr {
@@ -304,9 +322,15 @@ class Parser {
       const open = this.next();
       this.enter();
       const index = this.expr();
+      // A second index, z[i, j], names a doubly indexed indeterminate (the compiler checks).
+      let index2: Expr | undefined;
+      if (this.is(',')) {
+        this.next();
+        index2 = this.expr();
+      }
       this.depth--;
       const close = this.expect(']', 'to close the index', open);
-      e = this.node({ type: 'index', target: e, index, start: e.start, end: close.end });
+      e = this.node(index2 ? { type: 'index', target: e, index, index2, start: e.start, end: close.end } : { type: 'index', target: e, index, start: e.start, end: close.end });
     }
     return e;
   }
@@ -339,6 +363,7 @@ class Parser {
           const e = this.expr();
           this.depth--;
           this.expect(')', 'to close the parenthesis', t);
+          this.grouped.add(e);
           return e;
         }
         if (t.text === '[') {
@@ -464,7 +489,7 @@ class Parser {
 }
 
 /** The children of a node, in no particular order. */
-function children(e: Expr): Expr[] {
+export function children(e: Expr): Expr[] {
   switch (e.type) {
     case 'int':
     case 'string':
@@ -486,7 +511,7 @@ function children(e: Expr): Expr[] {
     case 'call':
       return e.args;
     case 'index':
-      return [e.target, e.index];
+      return e.index2 ? [e.target, e.index, e.index2] : [e.target, e.index];
     case 'comprehension': {
       const out: Expr[] = [];
       for (const g of e.generators) out.push(g.source, ...(g.where ? [g.where] : []));

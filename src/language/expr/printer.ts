@@ -8,7 +8,7 @@
 import type { BinaryOp, Expr } from './ast.js';
 
 const LEVEL_OF_BINARY: Record<BinaryOp, number> = {
-  implies: 2, or: 3, and: 4,
+  implies: 2, iff: 2, or: 3, and: 4,
   '==': 6, '!=': 6, '<': 6, '<=': 6, '>': 6, '>=': 6,
   '+': 8, '-': 8, '*': 9, '/': 9, '^': 10,
 };
@@ -61,7 +61,11 @@ function print(e: Expr, m: Mode): string {
     case 'binary': {
       const L = LEVEL_OF_BINARY[e.op];
       if (e.op === '^') return `${at(e.left, 11, m)}^${exponent(e.right, m)}`;
-      if (e.op === 'implies') return `${at(e.left, 3, m)} implies ${at(e.right, 2, m)}`;
+      if (e.op === 'implies') {
+        const right = e.right.type === 'binary' && e.right.op === 'iff' ? `(${print(e.right, m)})` : at(e.right, 2, m);
+        return `${at(e.left, 3, m)} implies ${right}`;
+      }
+      if (e.op === 'iff') return `${at(e.left, 3, m)} iff ${at(e.right, 3, m)}`;
       if (L === 6) return `${at(e.left, 7, m)} ${e.op} ${at(e.right, 7, m)}`;
       return `${at(e.left, L, m)} ${e.op} ${at(e.right, L + 1, m)}`;
     }
@@ -72,7 +76,7 @@ function print(e: Expr, m: Mode): string {
     case 'call':
       return `${e.callee}(${e.args.map((x) => at(x, 1, m)).join(', ')})`;
     case 'index':
-      return `${at(e.target, 11, m)}[${at(e.index, 1, m)}]`;
+      return `${at(e.target, 11, m)}[${at(e.index, 1, m)}${e.index2 ? `, ${at(e.index2, 1, m)}` : ''}]`;
     case 'comprehension': {
       const gens = e.generators.map((g) => `${g.name} in ${at(g.source, 1, m)}${g.where ? ` where ${at(g.where, 1, m)}` : ''}`).join(', ');
       if (!e.body) return `${e.reducer}(${gens})`;

@@ -22,6 +22,9 @@ export function located(e: unknown, pos: SourcePos | undefined): unknown {
   if (e instanceof RangeError && /call stack/i.test(e.message)) {
     return new EvalError('the computation nested too deeply (a recursion without end?)', pos);
   }
+  if (e instanceof RangeError && /BigInt|Invalid array length|Array buffer allocation/i.test(e.message)) {
+    return new EvalError('a number or list here is too large to compute exactly (it would not fit in memory)', pos);
+  }
   if (e instanceof Error) return new EvalError(`internal error: ${e.message}`, pos);
   return e;
 }

@@ -72,6 +72,8 @@ export function describeType(t: TypeName): string {
       return 'a number or polynomial';
     case 'any':
       return 'a value';
+    case 'symmetric':
+      return 'a symmetric function';
     default:
       return /^[aeiou]/.test(t) ? `an ${t}` : `a ${t}`;
   }

@@ -4,15 +4,19 @@
 
 import { inversions, Permutation } from '../../families/permutations/permutation.js';
 import { Partition } from '../../families/partitions/partition.js';
-import { defineFunction } from '../registry.js';
+import { defineFunction, type ParamDecl } from '../registry.js';
 import type { Value } from '../../values/value.js';
 import { Scratch } from './scratch.js';
 import { Word } from '../../families/words/word.js';
+import { Tableau } from '../../families/tableaux/tableau.js';
+import { tableauDescents } from '../tableaux/descents.js';
 
 const topic = 'permutations';
-const P = [{ name: 'w', type: 'permutation' }];
+const P: ParamDecl[] = [{ name: 'w', type: 'permutation' }];
 /** inv, maj, des and descents also take words (sequences with repeated letters). */
-const PW = [{ name: 'w', type: ['permutation', 'word'] }];
+const PW: ParamDecl[] = [{ name: 'w', type: ['permutation', 'word'] }];
+/** maj, des and descents also take standard tableaux (i + 1 in a lower row than i). */
+const PWT: ParamDecl[] = [{ name: 'w', type: ['permutation', 'word', 'tableau'] }];
 const arr = (w: Value): number[] => (w instanceof Word ? w.letters : (w as Permutation).a);
 
 /** Fenwick-tree counts for long permutations, where the quadratic loop would be slow. */
@@ -173,37 +177,37 @@ defineFunction({
 defineFunction({
   name: 'maj',
   topic,
-  params: PW,
+  params: PWT,
   returns: 'integer',
-  description: 'the major index: the sum of the descent positions i, where w[i] > w[i+1] (of a permutation or a word)',
+  description: 'the major index: the sum of the descent positions i, where w[i] > w[i+1] (of a permutation or a word); of a standard tableau, the sum of its descents i (i + 1 in a lower row)',
   example: 'maj(perm([3, 1, 4, 2]))',
   exampleValue: '4',
-  source: 'OEIS A008302 (MacMahon: maj and inv are equidistributed, on permutations and on the rearrangements of a word)',
-  impl: (w) => maj(arr(w)),
+  source: 'OEIS A008302 (MacMahon: maj and inv are equidistributed, on permutations and on the rearrangements of a word); on standard tableaux, q^n(lambda) [n]_q! / prod [h]_q (Stanley, Enumerative Combinatorics 2, Cor. 7.21.5)',
+  impl: (w) => (w instanceof Tableau ? tableauDescents(w, 'maj(T)').reduce((a, b) => a + b, 0) : maj(arr(w))),
 });
 
 defineFunction({
   name: 'des',
   topic,
-  params: PW,
+  params: PWT,
   returns: 'integer',
-  description: 'the number of descents: positions i with w[i] > w[i+1] (of a permutation or a word)',
+  description: 'the number of descents: positions i with w[i] > w[i+1] (of a permutation or a word); of a standard tableau, the i with i + 1 in a lower row',
   example: 'des(perm([3, 1, 4, 2]))',
   exampleValue: '2',
   source: 'OEIS A008292 (Eulerian numbers)',
-  impl: (w) => des(arr(w)),
+  impl: (w) => (w instanceof Tableau ? tableauDescents(w, 'des(T)').length : des(arr(w))),
 });
 
 defineFunction({
   name: 'descents',
   topic,
-  params: PW,
+  params: PWT,
   returns: 'list',
-  description: 'the list of descent positions i (w[i] > w[i+1]), increasing (of a permutation or a word)',
+  description: 'the list of descent positions i (w[i] > w[i+1]), increasing (of a permutation or a word); of a standard tableau, the i with i + 1 in a lower row than i',
   example: 'descents(perm([3, 1, 4, 2]))',
   exampleValue: '[1, 3]',
   source: 'definition; OEIS A008292 (Eulerian numbers) for their number',
-  impl: (w) => descents(arr(w)),
+  impl: (w) => (w instanceof Tableau ? tableauDescents(w, 'descents(T)') : descents(arr(w))),
 });
 
 defineFunction({

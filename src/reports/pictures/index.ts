@@ -8,12 +8,17 @@ import type { Value } from '../../values/value.js';
 import { drawDyckPath } from './dyckPath.js';
 import { glyphsFor, type Glyphs } from './glyphs.js';
 import { drawAsm, drawMatrix } from './grids.js';
+import { drawIdeal } from './ideal.js';
 import { sideBySide, width } from './layout.js';
 import { drawMatching } from './matching.js';
 import { drawPermutation } from './permutation.js';
 import { drawPipeDream } from './pipeDream.js';
 import { drawSetPartition } from './setPartition.js';
+import { drawSignedPermutation } from './signedPermutation.js';
+import { drawMotzkinPath } from './motzkinPath.js';
+import { drawParkingFunction } from './parkingFunction.js';
 import { drawSubset, drawWord } from './strips.js';
+import { drawSymmetric } from './symmetric.js';
 import { drawComposition, drawPartition, drawTableau } from './youngDiagrams.js';
 
 export interface PictureOptions {
@@ -70,6 +75,12 @@ function draw(v: Value, g: Glyphs): string | null {
       return drawMatching(o.p, g); // p[i-1]: partner of point i
     case 'dyck':
       return drawDyckPath(o.steps, g); // steps: +1 (U) / -1 (D)
+    case 'signedPermutation':
+      return drawSignedPermutation(o.a, g); // a: the window w(1), ..., w(n)
+    case 'motzkin':
+      return drawMotzkinPath(o.steps, g); // steps: +1 (U) / 0 (F) / -1 (D)
+    case 'parkingFunction':
+      return drawParkingFunction(o.values, g); // values: a_1, ..., a_n
     case 'setPartition':
       return drawSetPartition(o.rgs, g); // rgs: restricted growth string
     case 'word':
@@ -82,6 +93,10 @@ function draw(v: Value, g: Glyphs): string | null {
       return drawPipeDream(o.crosses, g, typeof o.n === 'number' ? o.n : 0); // crosses: [row, column][]
     case 'matrix':
       return drawMatrix(o.rows, o.cols, o.entries, g); // rows, cols: numbers; entries: row-major scalars (partialPermutations are matrices)
+    case 'ideal':
+      return drawIdeal(o.gens, o.ring.length, o.prime, () => o.leadingTerms(), g); // gens, ring (ids), prime, leadingTerms()
+    case 'symmetric':
+      return drawSymmetric(o.terms, g); // terms: { parts, coef }[] in the Schur basis
     default:
       return null;
   }
@@ -92,7 +107,11 @@ function tooBig(kind: string, o: Fields): boolean {
   const big = (x: number) => x > MAX_SIDE;
   switch (kind) {
     case 'permutation':
+    case 'signedPermutation':
       return big(o.a.length);
+    case 'motzkin':
+    case 'parkingFunction':
+      return big((o.steps ?? o.values).length);
     case 'partition':
     case 'composition':
       return big(o.parts.length) || o.parts.some(big);

@@ -2,7 +2,15 @@
 // exit code and the message it must produce. Every one must end without a stack trace or an
 // internal error, and write nothing it should not.
 
+import { chmodSync, mkdirSync, symlinkSync } from 'node:fs';
+import { join } from 'node:path';
 import { forgedFile, TRUE_BOUND } from './forge.js';
+
+/** A conjecture that fails at n = 3 (the major index of 132 is 2, its inversions 1). */
+const FAILS = 'conjecture: maj-bounded\nexpect: fails\nfor:\n  n: 1..4\n  w: permutations(n)\nclaim: maj(w) <= inv(w)\n';
+const HOLDS = 'conjecture: trivial\nexpect: holds\nfor:\n  n: 1..3\nclaim: n == n\n';
+/** A folder outside the test's folder, made fresh for one case (the test removes only its own folder). */
+const outside = (dir: string) => `${dir}-outside`;
 
 export interface HostileCase {
   name: string;
@@ -18,6 +26,8 @@ export interface HostileCase {
   /** Paths (relative to the folder, or absolute) that must not exist afterwards. */
   absent?: string[] | ((dir: string) => string[]);
   env?: Record<string, string>;
+  /** Files (relative) that must exist afterwards and hold no raw control byte. */
+  clean?: string[];
   /** Skip when the test runs as root (permissions do not bind it). */
   notAsRoot?: boolean;
 }
@@ -85,5 +95,263 @@ export const corpus: HostileCase[] = [
     args: ['replay', 'x.yaml'],
     code: 2,
     stderr: ['not a case of this conjecture', 'k = 9 is not in its list'],
+  },
+
+  // --- no writes outside the project --------------------------------------------------------------
+  {
+    name: 'hunch.yaml: a ledger path that leaves the project',
+    files: { 'hunch.yaml': 'ledger: ../stolen.jsonl\n', 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['hunch.yaml:1:9', 'lies outside the project', '--ledger PATH'],
+    absent: ['../stolen.jsonl', 'hunch-ledger.jsonl'],
+  },
+  {
+    name: 'hunch.yaml: an absolute ledger path elsewhere',
+    files: { 'hunch.yaml': 'ledger: /tmp/hunch-stolen-ledger.jsonl\n', 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['lies outside the project'],
+    absent: ['/tmp/hunch-stolen-ledger.jsonl'],
+  },
+  {
+    name: 'hunch.yaml: a ledger inside a linked folder that points out of the project',
+    files: { 'hunch.yaml': 'ledger: records/ledger.jsonl\n', 'a.yaml': HOLDS },
+    setup: (d) => {
+      mkdirSync(outside(d));
+      symlinkSync(outside(d), join(d, 'records'));
+    },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['outside the project'],
+    absent: (d) => [join(outside(d), 'ledger.jsonl')],
+  },
+  {
+    name: 'a ledger that is a symbolic link',
+    files: { 'a.yaml': HOLDS },
+    setup: (d) => symlinkSync(join(d, 'target.jsonl'), join(d, 'hunch-ledger.jsonl')),
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['symbolic link', 'never writes through a link'],
+    absent: ['target.jsonl'],
+  },
+  {
+    name: '--ledger naming a symbolic link',
+    files: { 'a.yaml': HOLDS },
+    setup: (d) => symlinkSync(join(d, 'target.jsonl'), join(d, 'mine.jsonl')),
+    args: ['check', 'a.yaml', '--ledger', 'mine.jsonl'],
+    code: 2,
+    stderr: ['symbolic link'],
+    absent: ['target.jsonl'],
+  },
+  {
+    name: 'counterexamples/<id>.yaml is a symbolic link out of the project',
+    files: { 'a.yaml': FAILS },
+    setup: (d) => {
+      mkdirSync(join(d, 'counterexamples'));
+      mkdirSync(outside(d));
+      symlinkSync(join(outside(d), 'planted.yaml'), join(d, 'counterexamples', 'maj-bounded.yaml'));
+    },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['refusing to write the counterexample file', 'symbolic link'],
+    absent: (d) => [join(outside(d), 'planted.yaml'), 'hunch-ledger.jsonl'],
+  },
+  {
+    name: 'counterexamples/ is a link to a folder out of the project',
+    files: { 'a.yaml': FAILS },
+    setup: (d) => {
+      mkdirSync(outside(d));
+      symlinkSync(outside(d), join(d, 'counterexamples'));
+    },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['would land outside the project'],
+    absent: (d) => [join(outside(d), 'maj-bounded.yaml')],
+  },
+  // --- records that cannot be written ----------------------------------------------------------
+  {
+    name: 'the ledger is a folder',
+    files: { 'a.yaml': HOLDS },
+    setup: (d) => mkdirSync(join(d, 'hunch-ledger.jsonl')),
+    args: ['check', 'a.yaml', '--workers', '1'],
+    code: 2,
+    stderr: ['the ledger', 'not a regular file'],
+  },
+  {
+    name: '--ledger /dev/full',
+    files: { 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml', '--ledger', '/dev/full', '--workers', '1'],
+    code: 2,
+    stderr: ['/dev/full', 'not a regular file'],
+  },
+  {
+    name: 'a read-only project folder',
+    files: { 'a.yaml': HOLDS },
+    setup: (d) => chmodSync(d, 0o555),
+    args: ['check', 'a.yaml', '--workers', '1'],
+    code: 2,
+    stderr: ['cannot open the ledger'],
+    notAsRoot: true,
+  },
+
+  // --- no raw control bytes reach the terminal or a written file ------------------------------
+  {
+    name: 'a statement with terminal escape sequences and a carriage return',
+    files: { 'a.yaml': FAILS.replace('expect: fails', 'statement: "clear \\e[2J\\rhidden \\e]0;title\\a and a\\nnew: line"\nexpect: fails') },
+    args: ['check', 'a.yaml'],
+    code: 0,
+    clean: ['counterexamples/maj-bounded.yaml'],
+  },
+  {
+    name: 'an escape sequence inside a claim',
+    files: { 'a.yaml': 'conjecture: esc\nexpect: holds\nclaim: "1 == \\e[2J1"\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a.yaml:3:', '\\x1b'],
+  },
+  {
+    name: 'a file name with control bytes',
+    args: ['check', 'no\u001b[2Jsuch\r.yaml'],
+    code: 2,
+    stderr: ['no\\x1b[2Jsuch\\x0d.yaml'],
+  },
+  {
+    name: 'replay: a conjecture id with control bytes',
+    files: { 'x.yaml': forgedFile(TRUE_BOUND, { n: 2, w: { permutation: [2, 1] } }).replace(/inv-bounded/g, '"inv\\e[2Jbounded"') },
+    args: ['replay', 'x.yaml'],
+    code: 2,
+    stderr: ['\\x1b[2J'],
+  },
+  {
+    name: 'a --junit report of a statement and a message with control bytes',
+    files: { 'a.yaml': FAILS.replace('expect: fails', 'statement: "bell \\a here"\nexpect: holds') },
+    args: ['check', 'a.yaml', '--junit', 'report.xml'],
+    code: 1,
+    clean: ['report.xml', 'counterexamples/maj-bounded.yaml'],
+  },
+
+  // --- no stack trace, no internal error --------------------------------------------------------
+  {
+    name: 'an id of more than 200 characters is refused at load',
+    files: { 'a.yaml': `conjecture: ${'a'.repeat(250)}\nexpect: holds\nclaim: true\n` },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a.yaml:1:13', 'an id may have at most 200'],
+    absent: ['hunch-ledger.jsonl', 'counterexamples'],
+  },
+  {
+    name: 'eval 2^(2^40)',
+    args: ['eval', '2^(2^40)'],
+    code: 2,
+    stderr: ['<expression>:1:', 'would have about', 'digits'],
+  },
+  {
+    name: 'a claim computing 2^(2^40) is a located error of the case',
+    files: { 'a.yaml': 'conjecture: big\nexpect: holds\nfor:\n  n: 1..3\nclaim: 2^(2^40) > n\n' },
+    args: ['check', 'a.yaml'],
+    code: 1,
+    stdout: ['a.yaml:5:8', 'would have about'],
+  },
+  {
+    name: 'a range bound of 10^(10^10)',
+    files: { 'a.yaml': 'conjecture: big-range\nexpect: holds\nfor:\n  n: 1..10^(10^10)\nclaim: n > 0\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a.yaml:4:'],
+  },
+  {
+    name: 'replay: a file whose bindings are of an unknown object kind',
+    files: { 'x.yaml': forgedFile(TRUE_BOUND, { n: 2, w: { gadget: [1, 2] } }) },
+    args: ['replay', 'x.yaml'],
+    code: 2,
+    stderr: ['x.yaml'],
+  },
+  {
+    name: 'replay: a file that is a YAML list, not a counterexample',
+    files: { 'x.yaml': '- 1\n- 2\n' },
+    args: ['replay', 'x.yaml'],
+    code: 2,
+    stderr: ['not a readable counterexample file'],
+  },
+  {
+    name: 'replay: a folder instead of a file',
+    setup: (d) => mkdirSync(join(d, 'x.yaml')),
+    args: ['replay', 'x.yaml'],
+    code: 2,
+    stderr: ['x.yaml'],
+  },
+  // --- no silent pass -------------------------------------------------------------------------------
+  {
+    name: 'an empty size range n: 5..1',
+    files: { 'a.yaml': 'conjecture: empty-range\nexpect: holds\nfor:\n  n: 5..1\n  w: permutations(n)\nclaim: inv(w) >= 0\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a.yaml:4:3', 'the range of n is empty'],
+    absent: ['hunch-ledger.jsonl'],
+  },
+  {
+    name: '--sizes n=5..1 (the same rule on the command line)',
+    files: { 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml', '--sizes', 'n=5..1'],
+    code: 2,
+    stderr: ['the range is empty'],
+  },
+  {
+    name: 'a family empty at every size',
+    files: { 'a.yaml': 'conjecture: empty-family\nexpect: holds\nfor:\n  n: 1..5\n  w: avoiders(n, [1])\nclaim: inv(w) < 0\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a.yaml:4:3', 'no size n = 1..5 has any case'],
+    absent: ['hunch-ledger.jsonl'],
+  },
+  {
+    name: 'an inner range empty at every size',
+    files: { 'a.yaml': 'conjecture: inner-empty\nexpect: holds\nfor:\n  n: 1..5\n  k: n+1..n\nclaim: false\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['no size n = 1..5 has any case'],
+  },
+  {
+    name: 'an empty file',
+    files: { 'a.yaml': '' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['nothing to check: a.yaml holds no conjecture'],
+  },
+  {
+    name: 'a file of comments only',
+    files: { 'a.yaml': '# nothing here yet\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['nothing to check'],
+  },
+  {
+    name: 'a folder with no conjecture file',
+    setup: (d) => mkdirSync(join(d, 'empty')),
+    args: ['check', 'empty'],
+    code: 2,
+    stderr: ['nothing to check: empty holds no conjecture'],
+  },
+  {
+    name: '--sizes naming no binding',
+    files: { 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml', '--sizes', 'm=1..3'],
+    code: 2,
+    stderr: ['--sizes m=1..3 names no range binding', 'did you mean n?'],
+  },
+  {
+    name: '--sample naming no binding',
+    files: { 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml', '--sample', 'k=5..9'],
+    code: 2,
+    stderr: ['--sample k=5..9 names no range binding'],
+  },
+  {
+    name: 'every case excluded by where: nothing checked, not holds',
+    files: { 'a.yaml': 'conjecture: all-excluded\nexpect: holds\nfor:\n  n: 1..4\n  w: permutations(n)\nwhere: n > 10\nclaim: false\n' },
+    args: ['check', 'a.yaml', '--no-ledger'],
+    code: 1,
+    stderr: ['nothing checked: all-excluded'],
   },
 ];

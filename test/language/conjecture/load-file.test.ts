@@ -9,7 +9,7 @@ import '../../../src/library/index.js';
 import { InputError } from '../../../src/base/errors.js';
 import { compileConjecture } from '../../../src/language/conjecture/compile-conjecture.js';
 import { loadConjectureFile } from '../../../src/language/conjecture/load-file.js';
-import { checkConjecture } from '../../../src/runner/check.js';
+import { checkConjecture } from '../../../src/runner/in-process-executor.js';
 
 const load = (text: string) => loadConjectureFile('f.yaml', text).conjectures;
 

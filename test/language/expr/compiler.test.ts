@@ -34,7 +34,7 @@ describe('exact arithmetic through the language', () => {
     expect(ev('(q + 1)^2 - q^2 - 2*q')).toBe(1);
     expect(ev('q - q')).toBe(0);
     expect(ev('(q^2 - 1) / (q - 1) == q + 1')).toBe(true);
-    expect(ev('sum(i in 1..3: x[i]) == x[1] + x[2] + x[3]')).toBe(true);
+    expect(ev('sum(x[i] for i in 1..3) == x[1] + x[2] + x[3]')).toBe(true);
     expect(ev('x[2] == x[1+1]')).toBe(true);
     expect(() => ev('q / (q + 1)')).toThrow(/divisible/);
   });
@@ -54,7 +54,7 @@ describe('exact arithmetic through the language', () => {
 describe('permutations: * composes, ^ powers, ^-1 inverts', () => {
   const lets: Array<[string, string]> = [['u', 't_perm([2, 3, 1, 4])'], ['v', 't_perm([1, 4, 2, 3])']];
   test('(u*v)[i] == u[v[i]]', () => {
-    expect(ev('all(i in 1..4: (u*v)[i] == u[v[i]])', lets)).toBe(true);
+    expect(ev('all((u*v)[i] == u[v[i]] for i in 1..4)', lets)).toBe(true);
     expect(show('u*v', lets)).toBe('perm([2, 4, 3, 1])');
   });
   test('powers and inverses', () => {
@@ -73,39 +73,39 @@ describe('permutations: * composes, ^ powers, ^-1 inverts', () => {
 
 describe('comprehensions', () => {
   test('every reducer', () => {
-    expect(ev('sum(i in 1..10: i^2)')).toBe(385); // 10*11*21/6
-    expect(ev('product(i in 1..5: i)')).toBe(120);
+    expect(ev('sum(i^2 for i in 1..10)')).toBe(385); // 10*11*21/6
+    expect(ev('product(i for i in 1..5)')).toBe(120);
     expect(ev('count(w in permutations(4))')).toBe(24); // 4!, OEIS A000142
     expect(ev('count(w in permutations(4) where t_inv(w) == 1)')).toBe(3); // Mahonian T(4,1), OEIS A008302
-    expect(ev('count(w in permutations(4): t_inv(w) == 2)')).toBe(5); // Mahonian T(4,2), OEIS A008302
-    expect(ev('all(i in 1..5: i > 0)')).toBe(true);
-    expect(ev('any(i in 1..5: i > 5)')).toBe(false);
-    expect(ev('min(i in 1..5: (i - 3)^2)')).toBe(0);
-    expect(ev('max(w in permutations(4): t_inv(w))')).toBe(6);
-    expect(show('list(i in 1..3: i * 2)')).toBe('[2, 4, 6]');
-    expect(show('set(i in 1..6: t_mod(i, 3))')).toBe('[0, 1, 2]');
-    expect(show('concat(i in 1..3: 1..i)')).toBe('[1, 1, 2, 1, 2, 3]');
-    const d = ev('distribution(w in permutations(3): t_inv(w))') as Distribution;
+    expect(ev('count(t_inv(w) == 2 for w in permutations(4))')).toBe(5); // Mahonian T(4,2), OEIS A008302
+    expect(ev('all(i > 0 for i in 1..5)')).toBe(true);
+    expect(ev('any(i > 5 for i in 1..5)')).toBe(false);
+    expect(ev('min((i - 3)^2 for i in 1..5)')).toBe(0);
+    expect(ev('max(t_inv(w) for w in permutations(4))')).toBe(6);
+    expect(show('list(i * 2 for i in 1..3)')).toBe('[2, 4, 6]');
+    expect(show('set(t_mod(i, 3) for i in 1..6)')).toBe('[0, 1, 2]');
+    expect(show('concat(1..i for i in 1..3)')).toBe('[1, 1, 2, 1, 2, 3]');
+    const d = ev('distribution(t_inv(w) for w in permutations(3))') as Distribution;
     expect(d).toBeInstanceOf(Distribution);
     expect(d.toText()).toBe('distribution({0: 1, 1: 2, 2: 2, 3: 1})'); // Mahonian row n=3, OEIS A008302
   });
   test('several generators and where clauses', () => {
     // Pairs 1 <= i <= j <= 6 with gcd 1: sum_{j<=6} phi(j), with (1,1): 1+1+2+2+4+2 = 12 (OEIS A002088).
-    expect(ev('sum(i in 1..6, j in i..6 where t_mod(j, i) == 0 implies i == 1 or i == j: 1)')).toBe(
+    expect(ev('sum(1 for i in 1..6, j in i..6 where t_mod(j, i) == 0 implies i == 1 or i == j)')).toBe(
       ev('count(i in 1..6, j in i..6 where t_mod(j, i) != 0 or i == 1 or i == j)'),
     );
-    expect(show('list(i in 1..3 where i != 2, j in 1..i: [i, j])')).toBe('[[1, 1], [3, 1], [3, 2], [3, 3]]');
+    expect(show('list([i, j] for i in 1..3 where i != 2, j in 1..i)')).toBe('[[1, 1], [3, 1], [3, 2], [3, 3]]');
   });
   test('sources: ranges, lists, families, distributions', () => {
-    expect(ev('sum(v in [3, 4, 5]: v)')).toBe(12);
-    expect(ev('sum(i in 1..0: i)')).toBe(0);
-    expect(ev('product(i in 1..0: i)')).toBe(1);
-    expect(show('list(v in distribution([2, 1, 2]): v)')).toBe('[1, 2]');
-    expect(errorOf(() => ev('sum(i in 5: i)')).suggestion).toBe('1..5');
+    expect(ev('sum(v for v in [3, 4, 5])')).toBe(12);
+    expect(ev('sum(i for i in 1..0)')).toBe(0);
+    expect(ev('product(i for i in 1..0)')).toBe(1);
+    expect(show('list(v for v in distribution([2, 1, 2]))')).toBe('[1, 2]');
+    expect(errorOf(() => ev('sum(i for i in 5)')).suggestion).toBe('1..5');
   });
   test('equidistribution: inv on S_4 equals a Mahonian row', () => {
     // OEIS A008302 row n=4: 1, 3, 5, 6, 5, 3, 1.
-    expect(ev('distribution(w in permutations(4): t_inv(w)) == distribution(concat([[0], [1,1,1], [2,2,2,2,2], [3,3,3,3,3,3], [4,4,4,4,4], [5,5,5], [6]]))')).toBe(true);
+    expect(ev('distribution(t_inv(w) for w in permutations(4)) == distribution(concat([[0], [1,1,1], [2,2,2,2,2], [3,3,3,3,3,3], [4,4,4,4,4], [5,5,5], [6]]))')).toBe(true);
     expect(ev('distribution([1, 2]) == distribution([2, 1])')).toBe(true);
     expect(ev('distribution([1, 2]) == distribution([2, 2])')).toBe(false);
   });
@@ -121,23 +121,24 @@ describe('comprehensions', () => {
     expect(ev('sum(1..100)')).toBe(5050);
   });
   test('kept objects are copies, not the enumerator\'s transient object', () => {
-    expect(show('list(w in permutations(3): w)')).toBe(
+    expect(show('list(w for w in permutations(3))')).toBe(
       '[perm([1, 2, 3]), perm([1, 3, 2]), perm([2, 1, 3]), perm([2, 3, 1]), perm([3, 1, 2]), perm([3, 2, 1])]');
-    expect(show('max(w in permutations(3): [t_inv(w), w])')).toBe('[3, perm([3, 2, 1])]');
-    expect(show('set(w in permutations(3): w^2)')).toBe('[perm([1, 2, 3]), perm([2, 3, 1]), perm([3, 1, 2])]');
+    expect(show('max([t_inv(w), w] for w in permutations(3))')).toBe('[3, perm([3, 2, 1])]');
+    expect(show('set(w^2 for w in permutations(3))')).toBe('[perm([1, 2, 3]), perm([2, 3, 1]), perm([3, 1, 2])]');
   });
   test('all/any stop early', () => {
-    expect(ev('any(i in 1..1000000000: i == 3)')).toBe(true);
-    expect(ev('all(w in permutations(12): t_inv(w) == 0)')).toBe(false);
+    expect(ev('any(i == 3 for i in 1..1000000000)')).toBe(true);
+    expect(ev('all(t_inv(w) == 0 for w in permutations(12))')).toBe(false);
   });
   test('an empty min or max names the comprehension', () => {
-    const e = errorOf(() => ev('1 + min(i in 1..0: i)'));
+    const e = errorOf(() => ev('1 + min(i for i in 1..0)'));
     expect(e).toBeInstanceOf(EvalError);
-    expect(e.message).toBe('min of nothing: min(i in 1..0: i) has no elements');
+    expect(e.message).toBe('min of nothing: min(i for i in 1..0) has no elements');
     expect(e.pos).toMatchObject({ line: 1, column: 5 });
   });
   test('several generators need a body except for count', () => {
-    expect(() => ev('sum(i in 1..2, j in 1..2)')).toThrow(/needs ": expression"/);
+    expect(() => ev('sum(i in 1..2, j in 1..2)')).toThrow(/needs a body/);
+    expect(errorOf(() => ev('sum(i in 1..2, j in 1..2)')).suggestion).toBe('sum(E for i in ..., j in ...)');
     expect(ev('count(i in 1..2, j in 1..3)')).toBe(6);
   });
 });
@@ -148,6 +149,10 @@ describe('conditionals, logic, strings', () => {
     expect(ev('false and 1/0 == 1')).toBe(false);
     expect(ev('true or 1/0 == 1')).toBe(true);
     expect(ev('false implies 1/0 == 1')).toBe(true);
+    // iff: both sides are evaluated; the truth table
+    expect([ev('true iff true'), ev('true iff false'), ev('false iff true'), ev('false iff false')]).toEqual([true, false, false, true]);
+    expect(ev('all((t_mod(n, 2) == 0) iff (t_mod(n*n, 2) == 0) for n in 1..20)')).toBe(true);
+    expect(errorOf(() => ev('1 iff true')).message).toMatch(/left side of iff must be true or false/);
     expect(ev('not (1 == 2)')).toBe(true);
     expect(ev('"abc"[2]')).toBe('b');
   });
@@ -164,7 +169,7 @@ describe('names and load-time checks', () => {
     expect(e.message).toBe('unknown function t_iv; did you mean t_inv?');
     expect(e.suggestion).toBe('t_inv');
     expect(e.pos).toMatchObject({ line: 1, column: 34 });
-    const f = errorOf(() => ev('sum(i in 1..3: ii)'));
+    const f = errorOf(() => ev('sum(ii for i in 1..3)'));
     expect(f.message).toBe('unknown name ii; did you mean i?');
     expect(errorOf(() => ev('permutatons(3)')).suggestion).toBe('permutations');
   });
@@ -195,11 +200,13 @@ describe('names and load-time checks', () => {
     expect(f.message).toBe('cannot compare a permutation with an integer');
   });
   test('run-time errors carry the innermost position', () => {
-    const t = 'sum(i in 1..3: 1 / (i - 2))';
+    const t = 'sum(1 / (i - 2) for i in 1..3)';
     const e = errorOf(() => ev(t));
     expect(e).toBeInstanceOf(EvalError);
     expect(e.message).toMatch(/division by zero/);
-    expect(e.pos).toMatchObject({ line: 1, column: 16 });
+    expect(e.pos).toMatchObject({ line: 1, column: 5 });
+    const old = errorOf(() => ev('sum(i in 1..3: 1 / (i - 2))'));
+    expect(old.pos).toMatchObject({ line: 1, column: 16 });
     const g = errorOf(() => ev('2 + t_mod(3, 0)'));
     expect(g.message).toBe('mod by zero');
     expect(g.pos).toMatchObject({ column: 5 });
@@ -227,7 +234,7 @@ describe('define: functions', () => {
       'peaks(w)': 'count(i in 2..t_len(w) - 1 where w[i-1] < w[i] and w[i] > w[i+1])',
       'fact(n)': 'if n == 0 then 1 else n * fact(n - 1)',
       'twice(n)': 'fact(n) + fact(n)',
-      'qint(n)': 'sum(i in 0..n-1: q^i)',
+      'qint(n)': 'sum(q^i for i in 0..n-1)',
       'c': '7',
     };
     expect(compileWith(defs, 'peaks([1, 3, 2, 5, 4])')).toBe(2);

@@ -26,6 +26,9 @@ describe('precedence (FORMAT.md §3)', () => {
     ['a or b and c', 'a or (b and c)'],
     ['a or b implies c', '(a or b) implies c'],
     ['a implies b implies c', 'a implies (b implies c)'],
+    ['a or b iff c and d', '(a or b) iff (c and d)'],
+    ['a iff (b iff c)', 'a iff (b iff c)'],
+    ['a implies (b iff c)', 'a implies (b iff c)'],
     ['if a then b else c + 1', 'if a then b else (c + 1)'],
     ['v -> v + 1', 'v -> (v + 1)'],
     ['-a * b', '(-a) * b'],
@@ -151,6 +154,10 @@ describe('syntax errors carry line, column, snippet and a suggestion', () => {
     expect(errorOf(() => parse('1 +')).message).toMatch(/ends too early/);
     expect(errorOf(() => parse('f(x in L)')).suggestion).toMatch(/comprehensions are sum/);
     expect(errorOf(() => parse('1..2..3')).message).toMatch(/two ends/);
+    expect(errorOf(() => parse('a iff b iff c')).suggestion).toMatch(/parentheses/);
+    expect(errorOf(() => parse('a implies b iff c')).suggestion).toMatch(/parentheses/);
+    expect(errorOf(() => parse('a iff b implies c')).suggestion).toMatch(/parentheses/);
+    expect(errorOf(() => parse('a implies (b) iff c')).message).toMatch(/does not chain/);
     expect(errorOf(() => parse('f(a b)')).message).toMatch(/expected , or \)/);
   });
   test('deep nesting fails fast', () => {
@@ -175,7 +182,7 @@ describe('define headers', () => {
 
 // ---- Round trips on generated trees ----
 
-const KEYWORDS = new Set(['if', 'then', 'else', 'and', 'or', 'not', 'implies', 'in', 'for', 'where', 'true', 'false']);
+const KEYWORDS = new Set(['if', 'then', 'else', 'and', 'or', 'not', 'implies', 'iff', 'in', 'for', 'where', 'true', 'false']);
 const ident = fc.stringMatching(/^[a-z][a-zA-Z0-9_]{0,4}$/).filter((s) => !KEYWORDS.has(s));
 const P = { start: 0, end: 0 };
 
@@ -190,7 +197,7 @@ const exprArb: fc.Arbitrary<Expr> = fc.letrec<{ e: Expr }>((tie) => ({
     ),
     fc.array(tie('e'), { maxLength: 3 }).map((items) => ({ type: 'list', items, ...P }) as Expr),
     fc.tuple(tie('e'), tie('e')).map(([lo, hi]) => ({ type: 'range', lo, hi, ...P }) as Expr),
-    fc.tuple(fc.constantFrom('+', '-', '*', '/', '^', '==', '!=', '<', '<=', '>', '>=', 'and', 'or', 'implies'), tie('e'), tie('e'))
+    fc.tuple(fc.constantFrom('+', '-', '*', '/', '^', '==', '!=', '<', '<=', '>', '>=', 'and', 'or', 'implies', 'iff'), tie('e'), tie('e'))
       .map(([op, left, right]) => ({ type: 'binary', op, left, right, ...P }) as Expr),
     fc.tuple(fc.constantFrom('-', 'not'), tie('e')).map(([op, operand]) => ({ type: 'unary', op, operand, ...P }) as Expr),
     fc.tuple(tie('e'), tie('e'), tie('e')).map(([cond, then, els]) => ({ type: 'if', cond, then, else: els, ...P }) as Expr),

@@ -12,6 +12,9 @@ import { SetPartition } from '../../../src/families/setPartitions/setPartition.j
 import { Subset } from '../../../src/families/subsets/subset.js';
 import { Tableau } from '../../../src/families/tableaux/tableau.js';
 import { Word } from '../../../src/families/words/word.js';
+import { SignedPermutation } from '../../../src/families/signedPermutations/signedPermutation.js';
+import { MotzkinPath } from '../../../src/families/motzkinPaths/motzkinPath.js';
+import { ParkingFunction } from '../../../src/families/parkingFunctions/parkingFunction.js';
 import { makeRat } from '../../../src/numbers/rational.js';
 import type { Value } from '../../../src/values/value.js';
 
@@ -28,6 +31,9 @@ export const EXAMPLES: Record<string, readonly Value[]> = {
     Matching.fromArcs([]),
   ],
   dyck: [DyckPath.from('UUDUDDUD'), DyckPath.from('UD'), DyckPath.from('')],
+  signedPermutation: [SignedPermutation.from([-2, 3, 1]), SignedPermutation.from([-1]), SignedPermutation.from([])],
+  motzkin: [MotzkinPath.from('UFUDDF'), MotzkinPath.from('F'), MotzkinPath.from('UUFDD'), MotzkinPath.from('')],
+  parkingFunction: [ParkingFunction.from([3, 1, 1, 2]), ParkingFunction.from([1]), ParkingFunction.from([])],
   setPartition: [SetPartition.fromBlocks([[1, 3], [2], [4, 5]]), SetPartition.fromBlocks([[1, 2, 3]]), SetPartition.fromBlocks([])],
   word: [Word.from([2, 1, 3, 1]), Word.from([10, 2]), Word.from([])],
   subset: [Subset.from([1, 3, 5]), Subset.from([2, 11]), Subset.from([])],
