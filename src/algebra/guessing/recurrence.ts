@@ -96,10 +96,12 @@ export function searchRecurrence(seq: Sequence, opts: RecurrenceSearch = {}): { 
     const fit = fitRecurrence(seq, r, d);
     if (fit) return { fit, tried: null };
   }
-  const extent = opts.constantOnly
-    ? `order <= ${maxR}`
-    : `order r and degree d with at most ${Math.max(...cands.map(([r, d]) => (r + 1) * (d + 1) - 1))} unknowns (r <= ${maxR}, d <= ${Math.max(...cands.map((c) => c[1]))})`;
-  return { fit: null, tried: { guessClass: opts.constantOnly ? 'C-finite recurrences' : 'P-recursive recurrences', extent, terms: seq.terms.length } };
+  const maxD = Math.max(...cands.map((c) => c[1]));
+  const maxU = Math.max(...cands.map(([r, d]) => (r + 1) * (d + 1) - 1));
+  // With only constant coefficients within reach, say so rather than "degree <= 0".
+  if (opts.constantOnly || maxD === 0) return { fit: null, tried: { guessClass: 'C-finite recurrences', extent: `order <= ${maxR}`, terms: seq.terms.length } };
+  const extent = `order r and degree d with at most ${maxU} unknown${maxU === 1 ? '' : 's'} (r <= ${maxR}, d <= ${maxD})`;
+  return { fit: null, tried: { guessClass: 'P-recursive recurrences', extent, terms: seq.terms.length } };
 }
 
 /** "p_r(n)*a(n + r) == -p_{r-1}(n)*a(n + r - 1) - ...", with the highest shift on the left. */
