@@ -4,7 +4,6 @@
 // that `hunch replay` needs nothing else.
 
 import type { Witness } from '../language/conjecture/witnesses.js';
-import { readFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { Document, isMap, isScalar, isSeq, parseAllDocuments, stringify, visit } from 'yaml';
 import { InputError } from '../base/errors.js';

@@ -5,7 +5,6 @@ import type { ConjectureResult } from '../runner/result.js';
 import { agreesWithExpectation } from '../runner/result.js';
 import { decodeValue } from '../values/decode.js';
 import { valueToText } from '../values/operations.js';
-import { escapeControl } from '../base/escape.js';
 import { formatCount } from '../base/format-count.js';
 import { xmlEscape } from './markup/xml.js';
 

@@ -2,7 +2,7 @@
 // more is shrunk, written to counterexamples/, drawn, and replayed from the file alone; the
 // plugin example works and editing it makes its conjectures stale.
 
-import { cpSync, existsSync, readFileSync, writeFileSync, appendFileSync } from 'node:fs';
+import { cpSync, existsSync, appendFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import { ROOT, runCli, tempDir } from './run-cli.js';

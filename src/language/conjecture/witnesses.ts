@@ -141,7 +141,10 @@ function letTree(ctx: Ctx, bound: Name[], e: Expr): Expr | null {
 function explain(ctx: Ctx, env: Name[], bound: Name[], e: Expr, top: boolean, root = false): void {
   if (ctx.out.length >= MAX_WITNESSES) return;
   const viaLet = letTree(ctx, bound, e);
-  if (viaLet) return explain(ctx, env, bound, viaLet, top);
+  if (viaLet) {
+    explain(ctx, env, bound, viaLet, top);
+    return;
+  }
   switch (e.type) {
     case 'unary':
       if (e.op === 'not') explain(ctx, env, bound, e.operand, top);
@@ -184,7 +187,10 @@ function explain(ctx: Ctx, env: Name[], bound: Name[], e: Expr, top: boolean, ro
 /** The min/max comprehensions inside an operand of a comparison (through arithmetic and lets). */
 function extremes(ctx: Ctx, env: Name[], bound: Name[], e: Expr): void {
   const viaLet = letTree(ctx, bound, e);
-  if (viaLet) return extremes(ctx, env, bound, viaLet);
+  if (viaLet) {
+    extremes(ctx, env, bound, viaLet);
+    return;
+  }
   if (e.type === 'comprehension' && (e.reducer === 'min' || e.reducer === 'max')) return void search(ctx, env, bound, e, e.reducer);
   if (e.type === 'binary' && !COMPARISONS.has(e.op) && !CONNECTIVES.has(e.op)) {
     extremes(ctx, env, bound, e.left);
