@@ -6,7 +6,7 @@ import { basename } from 'node:path';
 import { existsSync } from 'node:fs';
 import { relative } from 'node:path';
 import { InputError } from '../../base/errors.js';
-import { loadConjectures } from '../../language/conjecture/project.js';
+import { loadConjectures } from '../../language/conjecture/load-conjectures.js';
 import { counterexamplePath, readCounterexampleFile } from '../../records/counterexample-file.js';
 import { conjectureHash } from '../../language/conjecture/conjecture-hash.js';
 import { readLedger } from '../../records/ledger.js';
