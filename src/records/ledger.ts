@@ -24,7 +24,7 @@ export type PieceOutcome = 'holds' | 'fails' | 'incomplete';
 export interface LedgerRecord {
   v: number;
   id: string;
-  /** The conjecture hash (src/records/hash.ts) when the piece was checked. */
+  /** The conjecture hash (src/language/conjecture/conjecture-hash.ts) when the piece was checked. */
   hash: string;
   /** The tool version that checked it. */
   tool: string;
