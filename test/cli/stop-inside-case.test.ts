@@ -24,6 +24,23 @@ describe('stopping inside a long case', { timeout: 120_000 }, () => {
     }
   });
 
+  test('--budget stops a long Gröbner basis computation inside one case (the commuting ideal of 4 × 4 matrices)', () => {
+    const d = tempDir('hunch-stop-');
+    try {
+      writeFileSync(
+        join(d, 'a.yaml'),
+        'conjecture: slow-ideal\nexpect: holds\nindeterminates: [a, b]\nfor:\n  n: 4..4\nlet:\n  X: genericMatrix(a, n, n)\n  Y: genericMatrix(b, n, n)\nclaim: degree(ideal(entries(X*Y - Y*X))) == 1145\n',
+      );
+      const r = runCli(['check', 'a.yaml', '--budget', '3s', '--workers', '1', '--json'], { cwd: d, timeout: 90_000 });
+      expect(r.code, r.stderr).toBe(0);
+      const res = JSON.parse(r.stdout).results[0];
+      expect(res.outcome).toBe('incomplete');
+      expect(res.error).toBeNull();
+    } finally {
+      rmSync(d, { recursive: true, force: true });
+    }
+  });
+
   test('SIGTERM stops count(i in 1..10^12): exit 3, interrupted, no internal error', async () => {
     const d = tempDir('hunch-stop-');
     try {

@@ -4,6 +4,7 @@
 // common call is one increment and one mask test, so exhaustive loops keep their speed.
 
 import { StopSignal } from '../../base/errors.js';
+import { setIdealStop } from '../../algebra/ideals/stop.js';
 
 export type StopPoll = () => 'budget' | 'interrupt' | null;
 
@@ -20,9 +21,19 @@ export function tick(): void {
 export function withStopPoll<T>(p: StopPoll | null | undefined, body: () => T): T {
   const before = poll;
   poll = p ?? null;
+  // Long ideal computations (Gröbner bases, Hilbert series) poll the same stop between steps.
+  setIdealStop(poll === null ? undefined : idealStop);
   try {
     return body();
   } finally {
     poll = before;
+    setIdealStop(poll === null ? undefined : idealStop);
   }
+}
+
+/** The ideal computations' stop check: throws the run's StopSignal instead of answering true. */
+function idealStop(): boolean {
+  const r = poll?.() ?? null;
+  if (r) throw new StopSignal(r);
+  return false;
 }
