@@ -162,10 +162,10 @@ describe('syntax errors carry line, column, snippet and a suggestion', () => {
   });
   test('deep nesting fails fast', () => {
     const t = '('.repeat(5000) + '1' + ')'.repeat(5000);
-    const start = performance.now();
+    // The depth bound refuses the text before any deep recursion (no wall-clock assertion: the
+    // suite runs on loaded machines; test/bench is where times are measured).
     expect(errorOf(() => parse(t)).message).toMatch(/nested more than/);
     expect(errorOf(() => parse('-'.repeat(5000) + '1')).message).toMatch(/nested more than/);
-    expect(performance.now() - start).toBeLessThan(500);
   });
 });
 
