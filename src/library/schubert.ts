@@ -82,7 +82,7 @@ defineFunction({
   ],
   returns: 'scalarOrPolynomial',
   description:
-    'the Grothendieck polynomial G_w in x[1], x[2], ...: G_{w0} = x[1]^(n-1) ... x[n-1], G_{w s_i} = pi_i G_w with pi_i f = d_i((1 - x[i+1]) f); its lowest-degree part is S_w',
+    'the Grothendieck polynomial G_w in x[1], x[2], ...: G_{w0} = x[1]^(n-1) ... x[n-1], G_{w s_i} = pi_i G_w with pi_i f = d_i((1 - x[i+1]) f); its lowest-degree part is S_w (the β = −1 convention: the β-Grothendieck polynomial at β = −1)',
   example: 'grothendieck(perm([1, 3, 2]), x)',
   exampleValue: '-x[1]*x[2] + x[1] + x[2]',
   source:

@@ -109,7 +109,7 @@ defineFunction({
   topic: 'pipe dreams',
   params: [{ name: 'crosses', type: 'list' }],
   returns: 'pipeDream',
-  description: 'the pipe dream with crosses at the given cells [row, column] (elbows elsewhere)',
+  description: 'the pipe dream with crosses at the given cells [row, column] (elbows elsewhere); the pipe entering at the left of row i exits at the top of column w(i)',
   example: 'pipeDream([[1, 2], [1, 1]])',
   exampleValue: 'pipeDream([[1, 1], [1, 2]])',
   source: 'definition; "Gröbner geometry of Schubert polynomials", Ann. of Math. 161 (2005), §1.4',

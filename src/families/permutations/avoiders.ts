@@ -54,6 +54,63 @@ function generate(n: number, pats: number[][], a: number[], leaf: () => boolean)
   return grow(0);
 }
 
+/** Whether a[0..len) has an occurrence of `pat` whose last entry is at position len - 1. */
+function endsWithPattern(a: ArrayLike<number>, len: number, pat: readonly number[]): boolean {
+  const k = pat.length;
+  if (k > len) return false;
+  const last = len - 1, top = pat[k - 1], y = a[last];
+  const pos = new Int32Array(k);
+  const go = (t: number, from: number): boolean => {
+    if (t === k - 1) return true;
+    for (let i = from; i <= last - (k - 1 - t); i++) {
+      const x = a[i];
+      if ((x < y) !== (pat[t] < top)) continue;
+      let ok = true;
+      for (let s = 0; s < t; s++) {
+        if ((a[pos[s]] < x) !== (pat[s] < pat[t])) {
+          ok = false;
+          break;
+        }
+      }
+      if (!ok) continue;
+      pos[t] = i;
+      if (go(t + 1, i + 1)) return true;
+    }
+    return false;
+  };
+  return go(0, 0);
+}
+
+/**
+ * The class in lexicographic order, like permutations(n): fill a left to right with the unused
+ * values in increasing order, keeping only prefixes that avoid the patterns (an occurrence in a
+ * prefix stays in every completion, so only occurrences ending at the new entry need a search).
+ */
+function generateLex(n: number, pats: number[][], a: number[], leaf: () => boolean): boolean {
+  const used = new Uint8Array(n + 1);
+  const fill = (k: number): boolean => {
+    if (k === n) return leaf();
+    for (let v = 1; v <= n; v++) {
+      if (used[v]) continue;
+      a[k] = v;
+      let ok = true;
+      for (const p of pats) {
+        if (endsWithPattern(a, k + 1, p)) {
+          ok = false;
+          break;
+        }
+      }
+      if (!ok) continue;
+      used[v] = 1;
+      const stop = fill(k + 1);
+      used[v] = 0;
+      if (stop) return true;
+    }
+    return false;
+  };
+  return fill(0);
+}
+
 const countCache = new Map<string, bigint>();
 const tableCache = new Map<string, Uint8Array>();
 
@@ -102,7 +159,7 @@ export const avoiders: Family<AvoidersParam, Permutation> = defineFamily<Avoider
   ],
   objectKind: 'permutation',
   signature: 'avoiders(n: integer, p: list|permutation|string, ...)',
-  description: 'the permutations of 1..n avoiding every given pattern (lists, permutations or digit strings like "1342")',
+  description: 'the permutations of 1..n avoiding every given pattern (lists, permutations or digit strings like "1342"), enumerated in lexicographic order like permutations(n)',
   example: 'count(w in avoiders(5, "132"))',
   source: 'OEIS A000108 (one pattern of length 3), A022558 (1342), A005802 (1234)',
   prepare(args) {
@@ -120,7 +177,7 @@ export const avoiders: Family<AvoidersParam, Permutation> = defineFamily<Avoider
   enumerate({ n, pats }, visit) {
     const w = new Permutation(new Array<number>(n).fill(0));
     w.transient = true;
-    return generate(n, pats, w.a, () => visit(w) === true);
+    return generateLex(n, pats, w.a, () => visit(w) === true);
   },
   isMember({ n, pats }, obj: Structured) {
     return obj instanceof Permutation && obj.n === n && avoidsAll(obj.a, n, pats);

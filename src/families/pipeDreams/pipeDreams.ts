@@ -128,7 +128,7 @@ export const pipeDreams = defineFamily<PipeParam, PipeDream>({
   params: [{ name: 'w', type: 'any' }],
   objectKind: 'pipeDream',
   signature: 'pipeDreams(w: permutation)',
-  description: 'every reduced pipe dream of w: crosses (i, j) with i + j <= n whose pipes read w, no two crossing twice',
+  description: 'every reduced pipe dream of w: crosses (i, j) with i + j <= n whose pipes read w, no two crossing twice; the pipe entering at the left of row i exits at the top of column w(i)',
   example: 'count(P in pipeDreams(perm([1, 4, 3, 2])))',
   source:
     'S_w(1,...,1); Billey, Jockusch and Stanley, J. Algebraic Combin. 2 (1993); Bergeron and Billey, Experiment. Math. 2 (1993)',
