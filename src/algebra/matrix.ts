@@ -8,8 +8,8 @@ import { fail } from '../base/errors.js';
 import { normBig } from '../numbers/integer.js';
 import { isScalar, parseScalar, Rat, type Scalar } from '../numbers/rational.js';
 import { sadd, sdiv, seq, sisZero, smul, sneg, ssub } from '../numbers/scalar.js';
-import { registerDecoder } from '../values/decode.js';
-import type { Structured } from '../values/structured.js';
+import { registerDecoder } from '../protocol/decode.js';
+import type { Structured } from '../protocol/structured.js';
 import { isPolynomial, padd, pmul, pneg, polyText, psub, type PolyLike } from './polynomial.js';
 import { parsePolynomialText } from './polynomialText.js';
 
@@ -171,6 +171,9 @@ function range(n: number): number[] {
   return Array.from({ length: n }, (_, i) => i);
 }
 
+/** Largest size of a determinant of polynomials (8! = 40,320 terms at most). */
+export const POLYNOMIAL_DETERMINANT_MAX = 8;
+
 /**
  * det of the submatrix of a (row-major, `cols` columns) on the given rows and columns (0-based,
  * increasing), by expansion along the rows: the minor on the last k rows and a k-subset of the
@@ -180,6 +183,8 @@ export function polynomialDeterminant(a: readonly PolyLike[], cols: number, rows
   const k = rows.length;
   if (columns.length !== k) fail('a minor needs as many rows as columns');
   if (k === 0) return 1;
+  if (k > POLYNOMIAL_DETERMINANT_MAX)
+    fail(`a determinant of a ${k}×${k} matrix of polynomials can have ${k}! terms; sizes up to ${POLYNOMIAL_DETERMINANT_MAX} are supported`);
   // memo over bitmasks of positions in `columns`, for the rows rows[k - popcount .. k-1].
   const memo = new Map<number, PolyLike>();
   const det = (mask: number, depth: number): PolyLike => {
@@ -269,6 +274,7 @@ export function matrixScale(c: PolyLike, m: Matrix): Matrix {
 export function matrixPower(m: Matrix, k: number): Matrix {
   requireSquare(m, 'a matrix power');
   if (k < 0) fail(`negative powers of matrices are not supported (power ${k})`);
+  if (k > 16 && !m.isNumeric()) fail(`powers of a matrix of polynomials are limited to 16 (power ${k}): the entries grow too fast`);
   let r = Matrix.identity(m.rows), b = m;
   while (k > 0) {
     if (k & 1) r = matrixProduct(r, b);

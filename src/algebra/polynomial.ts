@@ -10,7 +10,7 @@
 import { fail } from '../base/errors.js';
 import { isScalar, Rat, type Scalar } from '../numbers/rational.js';
 import { sdiv, seq, sisZero, sneg, spow } from '../numbers/scalar.js';
-import type { Structured } from '../values/structured.js';
+import type { Structured } from '../protocol/structured.js';
 import { addScalars, compareMonomials, mulScalars, TermCollector } from './terms.js';
 import { rankOf, varId, varName } from './variables.js';
 

@@ -5,7 +5,8 @@ import { fail } from '../base/errors.js';
 import type { Scalar } from '../numbers/rational.js';
 import { sisZero } from '../numbers/scalar.js';
 import {
-  fromCollector, fromTerms, isPolynomial, makePolynomial, padd, pmul, polyText, ppow, type PolyLike,
+  expandExps, fromCollector, fromTerms, isPolynomial, makePolynomial, maxOver, padd, pmul, polyText, ppow, unionVars,
+  type Polynomial, type PolyLike,
 } from './polynomial.js';
 import { mulScalars, TermCollector } from './terms.js';
 import { varName } from './variables.js';
@@ -109,25 +110,81 @@ export function substitute(p: PolyLike, values: Map<number, PolyLike>): PolyLike
     }
     return fromCollector(p.vars, c);
   }
-  let sum: PolyLike = 0;
-  const powers = target.map(() => new Map<number, PolyLike>());
+  return substitutePolynomials(p, target);
+}
+
+/**
+ * The general case of substitute: some values are polynomials. Every term of p expands into the
+ * products of the powers of its substituted values (cached per variable and exponent), laid out
+ * over the union of all variables, and every product term goes into one collector that is sorted
+ * once: linear in the number of terms produced (x[1] -> -x[1] on a polynomial of N terms is N
+ * single-term products), never a running sum that is re-merged term after term.
+ */
+function substitutePolynomials(p: Polynomial, target: (PolyLike | undefined)[]): PolyLike {
+  const nv = p.nv;
+  let vars = p.vars;
+  for (const t of target) if (isPolynomial(t)) vars = unionVars(vars, t.vars);
+  const NV = vars.length;
+  const where = Array.from(p.vars, (id) => vars.indexOf(id));
+  // Upper bounds of the exponents of the result, to choose the collector's packing.
+  const pMax = p.maxExps();
+  const bound = new Int32Array(NV);
+  for (let v = 0; v < nv; v++) {
+    const t = target[v];
+    if (t === undefined) bound[where[v]] += pMax[v];
+    else if (isPolynomial(t)) {
+      const tm = maxOver(expandExps(t, vars), NV);
+      for (let u = 0; u < NV; u++) bound[u] += pMax[v] * tm[u];
+    }
+  }
+  // Powers of the substituted values, laid out over vars: [flat exponent rows, coefficients].
+  const powers = target.map(() => new Map<number, { exps: Int32Array; coefs: readonly Scalar[] }>());
+  const powerOf = (v: number, e: number) => {
+    let pw = powers[v].get(e);
+    if (pw === undefined) {
+      const x = ppow(target[v]!, e);
+      pw = isPolynomial(x) ? { exps: expandExps(x, vars), coefs: x.coefs } : { exps: new Int32Array(NV), coefs: sisZero(x) ? [] : [x] };
+      powers[v].set(e, pw);
+    }
+    return pw;
+  };
+  const c = new TermCollector(NV, bound, p.length);
+  // The partial products of one term: rows over vars with their coefficients.
+  const single = new Int32Array(NV);
+  let rows = single, coefs: Scalar[] = [];
   for (let t = 0; t < p.length; t++) {
-    let term: PolyLike = p.coefs[t];
-    const keep = new Int32Array(nv);
+    rows = single;
+    rows.fill(0);
+    coefs = [p.coefs[t]];
+    // The kept variables first, while there is a single partial product.
+    for (let v = 0; v < nv; v++) if (target[v] === undefined) rows[where[v]] += p.exps[t * nv + v];
     for (let v = 0; v < nv; v++) {
       const e = p.exps[t * nv + v];
-      const val = target[v];
-      if (val === undefined) keep[v] = e;
-      else if (e > 0) {
-        let pw = powers[v].get(e);
-        if (pw === undefined) powers[v].set(e, (pw = ppow(val, e)));
-        term = pmul(term, pw);
+      if (e === 0 || target[v] === undefined) continue;
+      const pw = powerOf(v, e);
+      const k = coefs.length, m = pw.coefs.length;
+      if (m === 1) {
+        // A monomial value: every partial product stays one product.
+        for (let a = 0; a < k; a++) {
+          for (let u = 0; u < NV; u++) rows[a * NV + u] += pw.exps[u];
+          coefs[a] = mulScalars(coefs[a], pw.coefs[0]);
+        }
+        continue;
       }
+      const nextRows = new Int32Array(k * m * NV);
+      const nextCoefs: Scalar[] = new Array(k * m);
+      for (let a = 0; a < k; a++)
+        for (let b = 0; b < m; b++) {
+          const o = (a * m + b) * NV;
+          for (let u = 0; u < NV; u++) nextRows[o + u] = rows[a * NV + u] + pw.exps[b * NV + u];
+          nextCoefs[a * m + b] = mulScalars(coefs[a], pw.coefs[b]);
+        }
+      rows = nextRows;
+      coefs = nextCoefs;
     }
-    term = pmul(term, makePolynomial(p.vars, keep, [1]));
-    sum = padd(sum, term);
+    for (let a = 0; a < coefs.length; a++) if (!sisZero(coefs[a])) c.add(rows, a * NV, coefs[a]);
   }
-  return sum;
+  return fromCollector(vars, c);
 }
 
 /** Rename variables (a bijection on the ids it mentions, e.g. a swap), exactly. */

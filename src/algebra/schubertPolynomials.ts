@@ -3,7 +3,7 @@
 //   F_{w s_i} = D_i F_w  whenever w(i) > w(i+1)  (so inv(w s_i) = inv(w) - 1),
 // with D_i the divided difference in x[i], x[i+1] (isobaric for Grothendieck polynomials).
 //
-// Speed through structure (issue 5): results are memoised per permutation and shared by every
+// Speed through structure: results are memoised per permutation and shared by every
 // case. All three families are stable under S_n ⊂ S_{n+1} (F_w = F_{w×1}), so a permutation
 // is trimmed of trailing fixed points for the memo key and computed in the smallest S_m that
 // holds it. To reach w we climb from w by its first ascent (w -> w s_i with w(i) < w(i+1)) until

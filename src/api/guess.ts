@@ -3,7 +3,8 @@
 
 import '../families/index.js';
 import '../library/index.js';
-import { guessSequence, type Guess, type GuessReport } from '../algebra/guessing/index.js';
+import { InputError } from '../base/errors.js';
+import { guessSequence, MAX_GUESS_TERMS, type Guess, type GuessReport } from '../algebra/guessing/index.js';
 import type { Scalar } from '../numbers/rational.js';
 import { guessConjectureFile, type GuessOrigin } from '../reports/guess-conjecture.js';
 import { scalarColumn, tabulate } from '../reports/tabulate.js';
@@ -28,11 +29,13 @@ function result(report: GuessReport, origin: GuessOrigin): GuessResult {
 
 /** Guesses for EXPR over name = lo..hi (the expression is evaluated as `hunch table` does). */
 export function guessExpression(expr: string, name: string, lo: number, hi: number): GuessResult {
+  if (hi - lo + 1 > MAX_GUESS_TERMS) throw new InputError(`guessing takes at most ${MAX_GUESS_TERMS} terms, not ${hi - lo + 1}`);
   const terms = scalarColumn(tabulate(expr, name, lo, hi), name, expr);
   return result(guessSequence({ offset: lo, terms }), { expr, variable: name, lo, hi });
 }
 
 /** Guesses for the terms a(offset), a(offset + 1), ... */
 export function guessTerms(terms: readonly Scalar[], offset = 0): GuessResult {
+  if (terms.length > MAX_GUESS_TERMS) throw new InputError(`guessing takes at most ${MAX_GUESS_TERMS} terms, not ${terms.length}`);
   return result(guessSequence({ offset, terms }), { variable: 'n', lo: offset, hi: offset + terms.length - 1, terms });
 }

@@ -61,3 +61,15 @@ export class InputErrors extends InputError {
     this.name = 'InputError';
   }
 }
+
+/**
+ * Thrown from inside a long evaluation (a comprehension, an enumeration) when the run must stop:
+ * its budget is spent or the user interrupted it. Not an error of the case: the case is simply not
+ * finished, so it is neither a pass nor a failure.
+ */
+export class StopSignal extends Error {
+  constructor(public readonly reason: 'budget' | 'interrupt') {
+    super(reason === 'budget' ? 'the budget was reached inside a case' : 'interrupted inside a case');
+    this.name = 'StopSignal';
+  }
+}

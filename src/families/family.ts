@@ -5,7 +5,7 @@
 
 import type * as fc from 'fast-check';
 import type { Structured } from '../values/structured.js';
-import type { TypeName } from '../values/types.js';
+import type { ObjectKind, TypeName } from '../values/types.js';
 import type { Value } from '../values/value.js';
 
 export interface ParamSpec {
@@ -24,7 +24,7 @@ export interface Family<P = unknown, T extends Structured = Structured> {
   readonly name: string;
   readonly params: ParamSpec[];
   /** The kind of the objects, as in Structured.kind: 'permutation'. */
-  readonly objectKind: string;
+  readonly objectKind: ObjectKind;
   readonly signature: string;
   readonly description: string;
   readonly example: string;
@@ -54,14 +54,14 @@ export interface Family<P = unknown, T extends Structured = Structured> {
    */
   compare(a: T, b: T): number;
 
-  // --- Random phase (issue 3); optional until every family has them. ---
+  // --- The sample phase: drawing at random and shrinking a failure. ---
   /** An exactly uniform fast-check arbitrary over the family at these parameters. */
-  arbitrary?(p: P): fc.Arbitrary<T>;
+  arbitrary(p: P): fc.Arbitrary<T>;
   /**
    * Candidate shrinks of obj, size-reducing ones first. Each is a strictly simpler member of the
    * family, possibly at smaller parameters (then `params` says which, and `size` the new size).
    */
-  shrink?(p: P, obj: T): Iterable<Shrunk<P, T>>;
+  shrink(p: P, obj: T): Iterable<Shrunk<P, T>>;
 }
 
 export interface Shrunk<P, T> {

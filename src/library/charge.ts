@@ -11,10 +11,10 @@ import { readingWordOf } from '../families/tableaux/tableauOrder.js';
 import { partitionArg, sizeOf } from '../families/tableaux/shapes.js';
 import { valueToText } from '../values/operations.js';
 import type { Value } from '../values/value.js';
-import { defineFunction } from './registry.js';
+import { defineFunction, type ParamDecl } from './registry.js';
 import { charge, kostkaFoulkesCoefficients, nOf, partitionContent } from './words/charge.js';
 
-const X = [{ name: 'w', type: ['word', 'permutation', 'tableau', 'list'] }];
+const X: ParamDecl[] = [{ name: 'w', type: ['word', 'permutation', 'tableau', 'list'] }];
 const KF_MAX = 14;
 
 function letters(v: Value, call: string): number[] {
@@ -55,7 +55,7 @@ defineFunction({
 
 defineFunction({
   name: 'kostkaFoulkes',
-  topic: 'tableaux',
+  topic: 'symmetric functions',
   params: [
     { name: 'lambda', type: ['partition', 'list'] },
     { name: 'mu', type: ['partition', 'list'] },

@@ -5,14 +5,14 @@
 import { DyckPath } from '../families/dyckPaths/dyckPath.js';
 import type { PolyLike } from '../algebra/polynomial.js';
 import type { Value } from '../values/value.js';
-import { defineFunction } from './registry.js';
+import { defineFunction, type ParamDecl } from './registry.js';
 import { smallIntArg } from './integerArgs.js';
 import * as S from './dyckPaths/statistics.js';
 import { qtCatalanTable } from './dyckPaths/qtCatalan.js';
 import { evaluateTable } from './bivariate.js';
 
 const topic = 'dyck paths';
-const D = [{ name: 'd', type: 'dyck' }];
+const D: ParamDecl[] = [{ name: 'd', type: 'dyck' }];
 const steps = (d: Value): number[] => (d as DyckPath).steps;
 const QT_MAX = 40;
 

@@ -47,7 +47,7 @@ defineFunction({
   source: 'definition',
   impl: (z, m, n) => {
     const call = 'genericMatrix(z, m, n)';
-    return genericMatrix(indexedBaseArg(call, 'z', z), smallIntArg(call, 'm', m, 0, 100), smallIntArg(call, 'n', n, 0, 100));
+    return genericMatrix(indexedBaseArg(call, 'z', z), smallIntArg(call, 'm', m, 0, 400), smallIntArg(call, 'n', n, 0, 400));
   },
 });
 
@@ -127,7 +127,7 @@ defineFunction({
   impl: (w, z) => {
     const call = 'matrixSchubertIdeal(w, z)';
     const a = (w as Permutation).a;
-    if (a.length > 12) fail(`${call} is limited to permutations of at most 12 points`);
+    if (a.length > 9) fail(`${call} is limited to permutations of at most 9 points`);
     const { gens, ring } = matrixSchubertGenerators(a, indexedBaseArg(call, 'z', z));
     return Ideal.of(gens, ring);
   },

@@ -7,11 +7,12 @@ import { basisFor, initialIdealOf } from '../algebra/ideals/invariants.js';
 import { isPolynomial, type PolyLike } from '../algebra/polynomial.js';
 import { polynomialListArg, primeArg } from './ideals.js';
 import { defineFunction } from './registry.js';
+import type { TypeName } from '../values/types.js';
 import { termOrderArg } from './termOrderArgs.js';
 import { DEFAULT_IDEAL_LIMITS } from '../algebra/ideals/ideal.js';
 
 const topic = 'ideals';
-const ORDER_TYPES = ['string', 'list'];
+const ORDER_TYPES: TypeName[] = ['string', 'list'];
 const ORDERS_DOC =
   'orders: "lex", "deglex", "grevlex" (variables in print order), "antidiagonal", a weight list, or blocks [[vars, order], ...]';
 const BUCHBERGER =
@@ -98,8 +99,7 @@ defineFunction({
   impl: (f, I, order) => {
     const J = I as Ideal, g = f as PolyLike;
     const ord = termOrderArg('normalForm(f, I, order)', order, ringWith(J, [g]));
-    basisFor(J, ord); // checks the order covers the ring
-    return normalForm(g, J.gens, ord, J.groebnerOptions());
+    return normalForm(g, basisFor(J, ord), ord, { ...J.groebnerOptions(), assumeBasis: true });
   },
 });
 

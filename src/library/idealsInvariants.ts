@@ -9,6 +9,7 @@ import {
   idealDimensionData, idealHilbertFunction, idealHilbertNumerator, idealKPolynomial, idealMultidegree,
 } from '../algebra/ideals/invariants.js';
 import { facetsOf } from '../algebra/monomialIdeals/stanleyReisner.js';
+import { idealShouldStop } from '../algebra/ideals/stop.js';
 import type { MonomialIdeal } from '../algebra/monomialIdeals/monomialIdeal.js';
 import { fromTerms, variable } from '../algebra/polynomial.js';
 import { varName } from '../algebra/variables.js';
@@ -160,6 +161,6 @@ defineFunction({
     'R. Stanley, Combinatorics and Commutative Algebra, 2nd ed., ch. II; tested: for matrix Schubert ideals the facets are the complements of the reduced pipe dreams ("Gröbner geometry of Schubert polynomials", Ann. of Math. 161 (2005), Thm B)',
   impl: (I) => {
     const M = monomialArg('facets(I)', I as Ideal);
-    return facetsOf(M).map((f) => f.map((v) => variable(varName(M.vars[v])))) as Value[];
+    return facetsOf(M, { shouldStop: idealShouldStop }).map((f) => f.map((v) => variable(varName(M.vars[v])))) as Value[];
   },
 });

@@ -60,7 +60,7 @@ export function weightArg(v: Value, what: string): number[] {
 
 defineFunction({
   name: 'kostka',
-  topic: 'tableaux',
+  topic: 'symmetric functions',
   params: [
     { name: 'lambda', type: ['partition', 'list'] },
     { name: 'mu', type: ['partition', 'list'] },

@@ -28,13 +28,22 @@ const LENGTHS: Record<string, (v: Structured) => number> = {
   partition: (v) => (v as unknown as { parts: number[] }).parts.length,
   dyck: (v) => (v as unknown as { steps: number[] }).steps.length,
   subset: (v) => (v as unknown as { elems: number[] }).elems.length,
+  setPartition: (v) => (v as unknown as { length: number }).length,
+  tableau: (v) => (v as unknown as { rows: number[][] }).rows.length,
+  asm: (v) => (v as unknown as { rows: number[][] }).rows.length,
+  pipeDream: (v) => (v as unknown as { crosses: unknown[] }).crosses.length,
+  matrix: (v) => (v as unknown as { rows: number }).rows,
+};
+
+/** What x[i] is and what len(x) counts, by kind (for `hunch list` and index errors). */
+export const INDEX_UNITS: Record<string, string> = {
+  permutation: 'entries', word: 'letters', composition: 'parts', partition: 'parts', dyck: 'steps', subset: 'elements',
+  setPartition: 'blocks', tableau: 'rows', asm: 'rows', pipeDream: 'crosses', matrix: 'rows',
 };
 
 /** What to use instead, for kinds whose "length" could mean two things. */
 const AMBIGUOUS: Record<string, string> = {
   matching: 'use len(arcs(m)) for the number of arcs',
-  tableau: 'use size(T) for the number of cells, or len(shape(T)) for the number of rows',
-  setPartition: 'its length could be n or the number of blocks',
 };
 
 export function lengthOf(v: Value): number {
@@ -50,7 +59,7 @@ export function lengthOf(v: Value): number {
   const hint = AMBIGUOUS[t];
   fail(
     `len(x) is not defined for ${article(t)}` +
-      (hint ? `: ${hint}` : `; it takes a list, a string, a permutation, a word, a composition, a partition, a Dyck path or a subset`),
+      (hint ? `: ${hint}` : `; it takes a list, a string, a ${Object.keys(LENGTHS).join(', a ')}`),
   );
 }
 
@@ -60,7 +69,7 @@ defineFunction({
   params: [{ name: 'x', type: 'any' }],
   returns: 'integer',
   description:
-    'the length of a list or a string, the n of a permutation of 1..n, the number of letters of a word or a Dyck path, of parts of a composition or a partition, of elements of a subset',
+    'the length of a list or a string, the n of a permutation of 1..n, the number of letters of a word, of steps of a Dyck path, of parts of a composition or a partition, of elements of a subset, of blocks of a set partition, of rows of a tableau, an ASM or a matrix, of crosses of a pipe dream: always the number of indices x[i] runs over',
   example: 'len(perm([3, 1, 2]))',
   exampleValue: '3',
   source: 'definition',

@@ -49,7 +49,7 @@ export function lrCoefficient(lam: readonly number[], mu: readonly number[], nu:
 
 defineFunction({
   name: 'lr',
-  topic: 'tableaux',
+  topic: 'symmetric functions',
   params: [
     { name: 'lambda', type: ['partition', 'list'] },
     { name: 'mu', type: ['partition', 'list'] },

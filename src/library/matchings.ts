@@ -6,16 +6,16 @@
 import { fail } from '../base/errors.js';
 import { Matching, matchingCrossings, matchingNestings } from '../families/matchings/matching.js';
 import { imod, type Int } from '../numbers/integer.js';
-import { defineFunction } from './registry.js';
+import { defineFunction, type ParamDecl } from './registry.js';
 import { SetPartition } from '../families/setPartitions/setPartition.js';
 import { partitionCrossings, partitionNestings } from '../families/setPartitions/arcs.js';
 import type { Value } from '../values/value.js';
 
 /** crossings and nestings also take set partitions, through their arc diagrams. */
-const MS = [{ name: 'm', type: ['matching', 'setPartition'] }];
+const MS: ParamDecl[] = [{ name: 'm', type: ['matching', 'setPartition'] }];
 
 const topic = 'matchings';
-const M = [{ name: 'm', type: 'matching' }];
+const M: ParamDecl[] = [{ name: 'm', type: 'matching' }];
 
 /** The point i taken mod 2n into 1..2n. */
 export function circlePoint(i: Int, points: number): number {

@@ -48,7 +48,7 @@ defineFunction({
 
 defineFunction({
   name: 'setPartition',
-  topic,
+  topic: 'set partitions',
   params: [{ name: 'blocks', type: 'list' }],
   returns: 'setPartition',
   description: 'the set partition of 1..n with the given blocks (in any order)',
@@ -63,7 +63,7 @@ defineFunction({
 
 defineFunction({
   name: 'dyck',
-  topic,
+  topic: 'dyck paths',
   params: [{ name: 'steps', type: 'string' }],
   returns: 'dyck',
   description: 'the Dyck path with the given steps U and D (never below the axis, ending at height 0)',

@@ -7,7 +7,7 @@ import type { PolyLike } from '../algebra/polynomial.js';
 import { evaluateCoefficients } from '../algebra/polynomialOps.js';
 import { iadd, isub, type Int } from '../numbers/integer.js';
 import { smallIntArg } from './integerArgs.js';
-import { defineFunction } from './registry.js';
+import { defineFunction, type ParamDecl } from './registry.js';
 
 const topic = 'polynomials';
 const Q_MAX = 2000;
@@ -69,7 +69,7 @@ export function qbinomialCoefficients(n: number, k: number): Int[] {
   return c;
 }
 
-const qParam = { name: 'q', type: 'scalarOrPolynomial' };
+const qParam: ParamDecl = { name: 'q', type: 'scalarOrPolynomial' };
 
 defineFunction({
   name: 'qint',

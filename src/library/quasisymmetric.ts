@@ -10,7 +10,7 @@ import { indexedVarId } from '../algebra/variables.js';
 import { Composition } from '../families/compositions/composition.js';
 import { valueToText } from '../values/operations.js';
 import type { Value } from '../values/value.js';
-import { defineFunction } from './registry.js';
+import { defineFunction, type ParamDecl } from './registry.js';
 import { indexedBaseArg } from './polyArgs.js';
 import { smallIntArg } from './integerArgs.js';
 
@@ -76,7 +76,7 @@ function build(terms: number[][], x: string, m: number): PolyLike {
   return fromTerms(ids, terms.map((t) => [t, 1] as [number[], number]));
 }
 
-const params = [
+const params: ParamDecl[] = [
   { name: 'alpha', type: ['composition', 'list'] },
   { name: 'x', type: 'polynomial' },
   { name: 'm', type: 'integer' },

@@ -27,6 +27,8 @@ export interface FunctionSpec {
   /** Published source (sequence number, book and page, paper), or "definition" for pure conventions. */
   source: string;
   impl: (...args: Value[]) => Value;
+  /** A plugin's function: the sha256 of the plugin file (it enters the hash of every conjecture that uses it). */
+  pluginFileSha256?: string;
 }
 
 const functions = new Map<string, FunctionSpec>();
@@ -52,4 +54,11 @@ export function signatureOf(f: FunctionSpec): string {
     return `${p.rest ? '...' : ''}${p.name}${p.optional ? '?' : ''}: ${t}`;
   });
   return `${f.name}(${ps.join(', ')}) -> ${f.returns}`;
+}
+
+/** Function name → sha256 of its plugin file, for every plugin function registered. */
+export function pluginFileHashes(): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const f of functions.values()) if (f.pluginFileSha256 !== undefined) out[f.name] = f.pluginFileSha256;
+  return out;
 }

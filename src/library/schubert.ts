@@ -1,4 +1,4 @@
-// Schubert calculus and symmetric polynomials (LIBRARY.md §2, issue 5): Schubert, double Schubert
+// Schubert calculus and symmetric polynomials (LIBRARY.md §2): Schubert, double Schubert
 // and Grothendieck polynomials, Schur polynomials, divided differences, symmetry and
 // real-rootedness tests. The indexed indeterminates are passed by their bare name (x for x[1],
 // x[2], ...; see polyArgs.ts).
@@ -110,7 +110,7 @@ function refuseHugeSchur(parts: readonly number[], m: number): void {
 
 defineFunction({
   name: 'schur',
-  topic,
+  topic: 'symmetric functions',
   params: [
     { name: 'lambda', type: 'partition' },
     { name: 'x', type: 'polynomial' },
@@ -177,7 +177,7 @@ function symmetricVars(call: string, p: PolyLike, vars: Value, m: Value | undefi
 
 defineFunction({
   name: 'isSymmetric',
-  topic,
+  topic: 'symmetric functions',
   params: [
     { name: 'p', type: 'scalarOrPolynomial' },
     { name: 'vars', type: ['list', 'polynomial'] },

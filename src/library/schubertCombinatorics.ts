@@ -9,14 +9,14 @@ import { trimFixedTail } from '../algebra/schubertPolynomials.js';
 import { Permutation } from '../families/permutations/permutation.js';
 import { PipeDream } from '../families/pipeDreams/pipeDream.js';
 import type { Value } from '../values/value.js';
-import { defineFunction } from './registry.js';
+import { defineFunction, type ParamDecl } from './registry.js';
 import { indexedBaseArg } from './polyArgs.js';
 import { demazureProduct, essentialSet, isDominant, isVexillary, rotheDiagram } from './schubert/diagrams.js';
 import { klPolynomial } from './schubert/kazhdanLusztig.js';
 import { betaGrothendieck } from './schubert/betaGrothendieck.js';
 
 const topic = 'schubert';
-const W = [{ name: 'w', type: 'permutation' }];
+const W: ParamDecl[] = [{ name: 'w', type: 'permutation' }];
 const a = (w: Value): number[] => (w as Permutation).a;
 const KL_MAX = 6;
 const BETA_MAX = 9;

@@ -3,10 +3,10 @@
 
 import { SetPartition } from '../families/setPartitions/setPartition.js';
 import { isNoncrossing, partitionArcs } from '../families/setPartitions/arcs.js';
-import { defineFunction } from './registry.js';
+import { defineFunction, type ParamDecl } from './registry.js';
 
 const topic = 'set partitions';
-const S = [{ name: 's', type: 'setPartition' }];
+const S: ParamDecl[] = [{ name: 's', type: 'setPartition' }];
 
 defineFunction({
   name: 'partitionArcs',
@@ -30,4 +30,16 @@ defineFunction({
   exampleValue: 'true',
   source: 'Kreweras, Discrete Math. 1 (1972); counted by the Catalan numbers, OEIS A000108',
   impl: (s) => isNoncrossing((s as SetPartition).rgs),
+});
+
+defineFunction({
+  name: 'blocks',
+  topic,
+  params: S,
+  returns: 'list',
+  description: 'the blocks of a set partition, each increasing, ordered by least element: blocks(s)[i] == s[i], and len(s) counts them',
+  example: 'blocks(setPartition([[2, 3], [1, 4]]))',
+  exampleValue: '[[1, 4], [2, 3]]',
+  source: 'definition (R. P. Stanley, Enumerative Combinatorics, vol. 1, 2nd ed., Section 1.9)',
+  impl: (s) => (s as SetPartition).blocks().map((b) => b.slice()),
 });

@@ -7,10 +7,10 @@ import { SignedPermutation } from '../families/signedPermutations/signedPermutat
 import { desB, fmaj, lengthB, negatives } from '../families/signedPermutations/statistics.js';
 import type { Value } from '../values/value.js';
 import { valueToText } from '../values/operations.js';
-import { defineFunction } from './registry.js';
+import { defineFunction, type ParamDecl } from './registry.js';
 
 const topic = 'signed permutations';
-const W = [{ name: 'w', type: 'signedPermutation' }];
+const W: ParamDecl[] = [{ name: 'w', type: 'signedPermutation' }];
 const a = (w: Value): number[] => (w as SignedPermutation).a;
 
 defineFunction({

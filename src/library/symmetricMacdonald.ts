@@ -1,5 +1,5 @@
 // Hall–Littlewood and modified Macdonald symmetric functions (LIBRARY.md, "Symmetric functions"):
-// Kostka–Foulkes polynomials by charge, Hall–Littlewood P and Q, the modified Macdonald
+// Hall–Littlewood P and Q (through Kostka–Foulkes polynomials by charge), the modified Macdonald
 // polynomials H~_mu(x; q, t) by the inv/maj formula on fillings, and their Schur coefficients
 // (the modified q,t-Kostka polynomials). The parameters may be indeterminates or any values.
 

@@ -94,7 +94,7 @@ defineFunction({
 
 defineFunction({
   name: 'asm',
-  topic,
+  topic: 'alternating sign matrices',
   params: [{ name: 'rows', type: 'list' }],
   returns: 'asm',
   description: 'the alternating sign matrix with the given rows (entries 0, 1, -1; nonzero entries alternate, starting and ending with 1)',
@@ -106,7 +106,7 @@ defineFunction({
 
 defineFunction({
   name: 'pipeDream',
-  topic,
+  topic: 'pipe dreams',
   params: [{ name: 'crosses', type: 'list' }],
   returns: 'pipeDream',
   description: 'the pipe dream with crosses at the given cells [row, column] (elbows elsewhere)',

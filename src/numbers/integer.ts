@@ -136,8 +136,15 @@ export function ipow(a: Int, e: number): Int {
     const p = a ** e;
     if (Number.isSafeInteger(p)) return p;
   }
+  // Refuse, before trying, a power with more bits than an exact integer here may have.
+  const bits = toBig(iabs(a)).toString(2).length;
+  if (bits > 1 && (bits - 1) * e > MAX_POWER_BITS)
+    fail(`${bits <= 64 ? intToString(a) : `(a number of ${Math.round(bits / 3.3219)} digits)`}^${e} would have about ${Math.round(((bits - 1) * e) / 3.3219)} digits; hunch computes exact integers of at most about ${Math.round(MAX_POWER_BITS / 3.3219)} digits`);
   return normBig(toBig(a) ** BigInt(e));
 }
+
+/** The largest power ipow computes, in bits (about 20 million digits). */
+export const MAX_POWER_BITS = 2 ** 26;
 
 /** Parse a decimal integer literal exactly. */
 export function parseInt10(text: string): Int {

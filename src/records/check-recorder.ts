@@ -1,17 +1,16 @@
 // What `hunch check` records, in one object the command drives: the ledger line of every finished
-// piece, the counterexample file of every failure, the regression cases to try first, the JUnit
-// report. Records are written from the main thread only.
+// piece, the counterexample file of every failure, the regression cases to try first. Records are
+// written from the main thread only.
 
 import type { CompiledConjecture } from '../language/conjecture/compiled.js';
 import type { CheckedPiece, ConjectureResult } from '../runner/result.js';
 import { counterexamplePath, readRegressionEncoded, writeCounterexampleFile } from './counterexample-file.js';
 import { checkWritablePath } from './atomic-write.js';
-import { writeJUnitReport } from './junit.js';
 import { LedgerWriter } from './ledger.js';
 import type { Project } from './open-project.js';
 import { pluginsUsedBy } from './plugins.js';
 import { readProjectConfig } from './config.js';
-import { findProjectRoot } from './project.js';
+import { findProjectRoot } from './project-root.js';
 
 export interface CheckRecorder {
   /** Encoded binding values in `for` order, by conjecture id, from counterexamples/<id>.yaml. */
@@ -19,7 +18,6 @@ export interface CheckRecorder {
   piece(id: string, piece: CheckedPiece): void;
   /** Record a finished result; returns the path of its counterexample file, if there is one. */
   result(r: ConjectureResult): string | null;
-  junit(path: string, results: ConjectureResult[]): void;
   /** Messages for standard error (a damaged saved counterexample, ...). */
   warnings: string[];
   close(): void;
@@ -63,9 +61,6 @@ export function createCheckRecorder(project: Project, compiled: CompiledConjectu
       if (!cc || !r.counterexample || opts.counterexamples === false) return null;
       // The main thread's hash (canonical, with plugins) is the one the ledger uses.
       return writeCounterexampleFile(project.root, cc.spec, { ...r, hash: cc.hash }, pluginsUsedBy(cc.spec));
-    },
-    junit(path, results) {
-      writeJUnitReport(path, results);
     },
     close() {
       writer?.close();

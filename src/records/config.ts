@@ -13,7 +13,7 @@ import { isScalar, type Node } from 'yaml';
 import { InputError } from '../base/errors.js';
 import { nearest } from '../base/suggest.js';
 import { mapEntries, scalarString, seqItems, YamlFile } from '../language/conjecture/yaml-reader.js';
-import { CONFIG_FILE, DEFAULT_LEDGER } from './project.js';
+import { CONFIG_FILE, DEFAULT_LEDGER } from './project-root.js';
 import { isInside } from './atomic-write.js';
 
 export const CONFIG_KEYS = ['plugins', 'ledger', 'conjectures'] as const;

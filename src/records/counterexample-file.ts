@@ -3,11 +3,12 @@
 // found, and the whole conjecture (with the file's definitions) exactly as it was checked, so
 // that `hunch replay` needs nothing else.
 
-import { readFileSync } from 'node:fs';
+import type { Witness } from '../language/conjecture/witnesses.js';
 import { join, relative } from 'node:path';
 import { Document, isMap, isScalar, isSeq, parseAllDocuments, stringify, visit } from 'yaml';
 import { InputError } from '../base/errors.js';
 import { escapeControl } from '../base/escape.js';
+import { readInputFile } from '../base/read-input.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
 import type { ConjectureResult, Counterexample } from '../runner/result.js';
 import { decodeValue } from '../values/decode.js';
@@ -15,7 +16,7 @@ import { valueToText } from '../values/operations.js';
 import type { Value } from '../values/value.js';
 import { TOOL_VERSION } from '../version.js';
 import { writeFileAtomic } from './atomic-write.js';
-import { COUNTEREXAMPLE_DIR } from './project.js';
+import { COUNTEREXAMPLE_DIR } from './project-root.js';
 
 export const COUNTEREXAMPLE_FORMAT = 1;
 
@@ -45,6 +46,8 @@ export interface CounterexampleFile {
   bindings: Record<string, unknown>;
   values: Record<string, unknown>;
   sides: [unknown, unknown] | null;
+  /** What decided the failure (informational: replay computes them again). */
+  witnesses?: Witness[];
   plugins: PluginNeed[];
   replay: string;
   /** The file's define documents, then the conjecture document, as checked. */
@@ -112,6 +115,8 @@ function header(f: CounterexampleFile, texts: Record<string, string>): string {
     'The case:',
     ...Object.entries(texts).map(([k, v]) => `    ${k} = ${v}`),
     ...(f.sides ? [`The two sides of the claim: ${sideText(f.sides[0])} and ${sideText(f.sides[1])}.`] : []),
+    ...(f.witnesses ?? []).filter((w) => w.kind === 'element').map((w) =>
+      `Witness: ${w.at} ${w.reducer === 'min' || w.reducer === 'max' ? `= ${sideText(w.value)}` : `is ${w.reducer === 'any' ? 'true' : 'false'}`} at ${Object.entries(w.bindings).map(([k, v]) => `${k} = ${sideText(v)}`).join(', ')}.`),
     `Found ${found}.`,
     '',
     'This file holds everything needed to check it again, including the conjecture as it was checked',
@@ -163,6 +168,7 @@ export function counterexampleRecord(
     bindings: cx.bindings,
     values: cx.values,
     sides: cx.sides,
+    ...(cx.witnesses?.length ? { witnesses: cx.witnesses } : {}),
     plugins,
     replay: `hunch replay ${replayPath}`,
     defines: exactDefineDocuments(spec),
@@ -271,6 +277,7 @@ export function parseCounterexampleFile(text: string, path: string): Counterexam
     bindings: f.bindings,
     values: isObj(f.values) ? f.values : {},
     sides: Array.isArray(f.sides) && f.sides.length === 2 ? (f.sides as [unknown, unknown]) : null,
+    ...(Array.isArray(f.witnesses) && f.witnesses.every(isObj) ? { witnesses: f.witnesses as unknown as Witness[] } : {}),
     plugins: (f.plugins as PluginNeed[] | undefined) ?? [],
     replay: typeof f.replay === 'string' ? f.replay : `hunch replay ${path}`,
     defines: (f.defines as Record<string, unknown>[] | undefined) ?? [],
@@ -279,13 +286,7 @@ export function parseCounterexampleFile(text: string, path: string): Counterexam
 }
 
 export function readCounterexampleFile(path: string): CounterexampleFile {
-  let text: string;
-  try {
-    text = readFileSync(path, 'utf8');
-  } catch (e) {
-    throw new InputError(`cannot read the counterexample file ${path}: ${(e as Error).message}`);
-  }
-  return parseCounterexampleFile(text, path);
+  return parseCounterexampleFile(readInputFile(path, 'the counterexample file'), path);
 }
 
 /**

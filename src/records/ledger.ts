@@ -7,6 +7,7 @@
 // killed between records leaves only whole lines; a torn line (a crash inside the kernel write, a
 // full disk, a network filesystem) is recognised when reading, reported and ignored.
 
+import { parseShard } from '../runner/work/slicing.js';
 import { closeSync, constants, fstatSync, openSync, readFileSync, readSync, writeSync } from 'node:fs';
 import { checkWritablePath } from './atomic-write.js';
 import { hostname } from 'node:os';
@@ -23,7 +24,7 @@ export type PieceOutcome = 'holds' | 'fails' | 'incomplete';
 export interface LedgerRecord {
   v: number;
   id: string;
-  /** The conjecture hash (src/records/hash.ts) when the piece was checked. */
+  /** The conjecture hash (src/language/conjecture/conjecture-hash.ts) when the piece was checked. */
   hash: string;
   /** The tool version that checked it. */
   tool: string;
@@ -53,7 +54,6 @@ const PHASES: readonly string[] = ['exhaustive', 'sample', 'regression'];
 const OUTCOMES: readonly string[] = ['holds', 'fails', 'incomplete'];
 const ID = /^[a-z0-9][a-z0-9-]*$/;
 const HASH = /^[0-9a-f]{64}$/;
-const SHARD = /^([1-9][0-9]*)\/([1-9][0-9]*)$/;
 
 /** A record as one line, keys in a fixed order (so identical records are identical lines). */
 export function recordLine(r: LedgerRecord): string {
@@ -72,14 +72,6 @@ function sortedSize(s: Record<string, number>): Record<string, number> {
   const out: Record<string, number> = {};
   for (const k of Object.keys(s).sort()) out[k] = s[k];
   return out;
-}
-
-/** Parse "3/8" into [3, 8], or null when it is not a valid slice. */
-export function parseShard(s: string): [number, number] | null {
-  const m = SHARD.exec(s);
-  if (!m) return null;
-  const i = Number(m[1]), k = Number(m[2]);
-  return Number.isSafeInteger(k) && i <= k ? [i, k] : null;
 }
 
 export interface RunContext {
@@ -266,7 +258,8 @@ export function parseLedger(text: string, file: string): LedgerContents {
   const lines = text.split('\n');
   const endsWithNewline = text.endsWith('\n');
   for (let i = 0; i < lines.length; i++) {
-    const raw = lines[i].replace(/\r$/, '');
+    // A byte-order mark (an editor that saved the file as "UTF-8 with BOM") is not part of the record.
+    const raw = lines[i].replace(/\r$/, '').replace(/^\ufeff/, '');
     if (raw.trim() === '') continue;
     const lineNo = i + 1;
     const isLast = i === lines.length - 1 && !endsWithNewline;

@@ -5,10 +5,10 @@
 import { existsSync } from 'node:fs';
 import { InputError } from '../base/errors.js';
 import { resolve } from 'node:path';
-import type { ChalkInstance } from 'chalk';
 import { writeFileAtomic } from './atomic-write.js';
-import { bySize, groupDigits, sizeCover } from './coverage.js';
-import { parseShard, readLedger, recordLine, type LedgerRecord } from './ledger.js';
+import { bySize, sizeCover } from '../runner/work/size-cover.js';
+import { parseShard } from '../runner/work/slicing.js';
+import { readLedger, recordLine, type LedgerRecord } from './ledger.js';
 
 export interface SizeCoverage {
   size: Record<string, number>;
@@ -76,7 +76,7 @@ export function coverageOf(records: readonly LedgerRecord[]): VersionCoverage[] 
         let of = 0, present: number[] = [];
         for (const [k, is] of Object.entries(c.partialSlices)) if (is.length > present.length) (of = Number(k)), (present = is);
         const missing = Array.from({ length: of }, (_, i) => i + 1).filter((i) => !present.includes(i));
-        const cases = sr.filter((r) => !r.partial && r.shard && parseShard(r.shard)![1] === of).reduce((a, r) => a + r.cases, 0);
+        const cases = sr.filter((r) => !r.partial && r.shard && parseShard(r.shard)?.of === of).reduce((a, r) => a + r.cases, 0);
         return { size, complete: false, slices: null, of, missing, cases };
       }),
     }));
@@ -100,28 +100,4 @@ export function mergeLedgers(paths: readonly string[], out: string | null): Merg
   const { records, duplicates } = mergeRecords(lists);
   if (out) writeFileAtomic(out, records.map((r) => recordLine(r) + '\n').join(''), { what: 'the merged ledger' });
   return { records, inputs: inputs.map((p, i) => ({ path: p, records: lists[i].length })), duplicates, coverage: coverageOf(records), warnings };
-}
-
-type Styler = Pick<ChalkInstance, 'bold' | 'red' | 'green' | 'yellow' | 'dim'>;
-
-export function formatMerge(m: MergeResult, out: string | null, color: Styler): string {
-  let s = '';
-  for (const w of m.warnings) s += `${color.yellow('warning:')} ${w}\n`;
-  s += `Merged ${m.inputs.length} ledger${m.inputs.length === 1 ? '' : 's'} (${m.inputs.map((i) => `${i.path}: ${groupDigits(i.records)}`).join(', ')}): `;
-  s += `${groupDigits(m.records.length)} records, ${groupDigits(m.duplicates)} exact duplicate${m.duplicates === 1 ? '' : 's'} removed`;
-  s += out ? `, written to ${out}.\n` : ' (nothing written: give -o FILE).\n';
-  const multi = new Map<string, number>();
-  for (const v of m.coverage) multi.set(v.id, (multi.get(v.id) ?? 0) + 1);
-  for (const v of m.coverage) {
-    s += `\n${color.bold(v.id)}${(multi.get(v.id) ?? 0) > 1 ? color.dim(` (version ${v.hash.slice(0, 12)})`) : ''}\n`;
-    for (const z of v.sizes) {
-      const label = Object.entries(z.size).map(([k, x]) => `${k} = ${x}`).join(', ') || 'the whole';
-      if (z.complete)
-        s += `  ${color.green('complete')}  ${label}: ${groupDigits(z.cases)} cases${z.slices ? ` from ${z.slices} slices` : ''}\n`;
-      else if (z.of === 0) s += `  ${color.red('missing ')}  ${label}: only pieces stopped before their end are present\n`;
-      else
-        s += `  ${color.red('missing ')}  ${label}: slices ${z.missing!.join(', ')} of ${z.of} are missing (${groupDigits(z.cases)} cases present)\n`;
-    }
-  }
-  return s;
 }

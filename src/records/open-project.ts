@@ -4,8 +4,8 @@
 
 import { InputError } from '../base/errors.js';
 import { readProjectConfig, type ProjectConfig } from './config.js';
-import { installConjectureHash, loadPlugins, type LoadedPlugin } from './plugins.js';
-import { findProjectRoot } from './project.js';
+import { loadPlugins, type LoadedPlugin } from './plugins.js';
+import { findProjectRoot } from './project-root.js';
 import { fingerprints, pluginConsent } from './trust.js';
 
 /** A plugin file the main thread decided to load, passed to worker threads (plain data). */
@@ -32,7 +32,6 @@ export interface OpenOptions {
 /** `start`: a path inside the project (a conjecture file or folder); default the current folder. */
 export async function openProject(start: string = process.cwd(), opts: OpenOptions = {}): Promise<Project> {
   const root = findProjectRoot(start);
-  installConjectureHash();
   const config = readProjectConfig(root);
   if (config.plugins.length === 0) return { root, config, plugins: [], skipped: null };
   const files = fingerprints(config).map((f) => f.file);
@@ -53,7 +52,6 @@ export function approvedPlugins(project: Project): ApprovedPlugin[] {
  * thread approved, refusing one whose file changed in between.
  */
 export async function openProjectAt(root: string, approved: readonly ApprovedPlugin[] = []): Promise<Project> {
-  installConjectureHash();
   const config = readProjectConfig(root);
   const plugins = await loadPlugins(approved.map((a) => a.path), root);
   for (const p of plugins) {

@@ -23,10 +23,11 @@ import { readFileSync } from 'node:fs';
 import { extname, relative } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { InputError } from '../base/errors.js';
-import { setConjectureHash } from '../language/conjecture/compile-conjecture.js';
+import { nearest } from '../base/suggest.js';
+import { allTypeNames, isTypeName, type TypeName } from '../protocol/type-names.js';
 import { defineFunction, getFunction, type ParamDecl } from '../library/registry.js';
 import type { Value } from '../values/value.js';
-import { conjectureHash, fileHash, namesUsed } from './hash.js';
+import { fileHash, namesUsed } from '../language/conjecture/conjecture-hash.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
 import type { PluginNeed } from './counterexample-file.js';
 
@@ -55,11 +56,6 @@ export function loadedPlugins(): LoadedPlugin[] {
   return [...loaded.values()];
 }
 
-/** Make compiled conjectures carry the canonical hash, with the loaded plugins' file hashes. */
-export function installConjectureHash(): void {
-  setConjectureHash((spec) => conjectureHash(spec, { pluginHashes: pluginHashes() }));
-}
-
 /** The plugins a conjecture uses (for its counterexample file). */
 export function pluginsUsedBy(spec: ConjectureSpec): PluginNeed[] {
   const used = namesUsed(spec);
@@ -85,10 +81,17 @@ interface RawFunction {
   impl?: unknown;
 }
 
+/** A type name from a plugin file: one of the language's, else a clear error with the nearest. */
+function readTypeName(file: string, what: string, t: string): TypeName {
+  if (isTypeName(t)) return t;
+  const near = nearest(t, allTypeNames());
+  throw pluginError(file, `declares ${what} with the unknown type '${t}'${near ? `; did you mean '${near}'?` : ''}`);
+}
+
 function readParams(file: string, fname: string, raw: unknown): ParamDecl[] {
   if (!Array.isArray(raw)) throw pluginError(file, `declares ${fname} without a "params" list (e.g. params: [{ name: 'w', type: 'permutation' }])`);
   return raw.map((p, i) => {
-    if (typeof p === 'string') return { name: `x${i + 1}`, type: p };
+    if (typeof p === 'string') return { name: `x${i + 1}`, type: readTypeName(file, `parameter ${i + 1} of ${fname}`, p) };
     if (p && typeof p === 'object') {
       const o = p as Record<string, unknown>;
       const type = o.type;
@@ -96,7 +99,9 @@ function readParams(file: string, fname: string, raw: unknown): ParamDecl[] {
       if (!ok) throw pluginError(file, `declares parameter ${i + 1} of ${fname} without a type (a type name such as 'integer' or 'permutation')`);
       return {
         name: typeof o.name === 'string' ? o.name : `x${i + 1}`,
-        type: type as string | string[],
+        type: Array.isArray(type)
+          ? type.map((t) => readTypeName(file, `parameter ${i + 1} of ${fname}`, t as string))
+          : readTypeName(file, `parameter ${i + 1} of ${fname}`, type as string),
         ...(o.optional ? { optional: true } : {}),
         ...(o.rest ? { rest: true } : {}),
       };
@@ -161,12 +166,13 @@ export async function loadPlugin(path: string, root: string): Promise<LoadedPlug
       name,
       topic: PLUGIN_TOPIC,
       params: readParams(file, name, f.params),
-      returns: typeof f.returns === 'string' ? f.returns : 'any',
+      returns: typeof f.returns === 'string' ? readTypeName(file, `the result of ${name}`, f.returns) : 'any',
       description: typeof f.description === 'string' ? f.description : `${name}, from the plugin ${file}`,
       example: typeof f.example === 'string' ? f.example : '',
       exampleValue: typeof f.exampleValue === 'string' ? f.exampleValue : '',
       source: typeof f.source === 'string' ? f.source : `plugin ${file}`,
       impl,
+      pluginFileSha256: sha256,
     };
   });
   const seen = new Set<string>();

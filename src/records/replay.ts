@@ -3,24 +3,26 @@
 // the file: the caller opens the local project (its own hunch.yaml) first, and a file that needs
 // functions the local project does not provide is reported, not run.
 
-import { EvalError, InputError } from '../base/errors.js';
+import { EvalError, InputError, StopSignal } from '../base/errors.js';
+import { withStopPoll } from '../language/expr/stop-poll.js';
 import { compileConjecture } from '../language/conjecture/compile-conjecture.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
 import { loadConjectureFile } from '../language/conjecture/load-file.js';
-import { loadConjectures } from '../language/conjecture/project.js';
+import { loadConjectures } from '../language/conjecture/load-conjectures.js';
+import { traceWitnesses, type Witness } from '../language/conjecture/witnesses.js';
 import { getFunction } from '../library/registry.js';
 import { bindingTexts, explainCase, frameFor } from '../runner/case-report.js';
 import { evaluateCase, SKIPPED } from '../runner/evaluate-case.js';
 import { notACaseReason } from '../runner/case-validity.js';
 import { sampleSettingsOf } from '../runner/check-options.js';
 import { decodeValue } from '../values/decode.js';
-import { canonicalForm, conjectureHash } from './hash.js';
+import { canonicalForm, conjectureHash } from '../language/conjecture/conjecture-hash.js';
 import { conjectureText, readCounterexampleFile, type CounterexampleFile, type PluginNeed } from './counterexample-file.js';
 import { pluginHashes } from './plugins.js';
 import type { Project } from './open-project.js';
 
 /** 'not-a-case': the bindings are not a case of the conjecture (not in their families or ranges, or excluded by where). */
-export type ReplayVerdict = 'refutes' | 'holds' | 'not-a-case' | 'error' | 'needs-plugins';
+export type ReplayVerdict = 'refutes' | 'holds' | 'not-a-case' | 'error' | 'needs-plugins' | 'stopped';
 
 export interface ReplayResult {
   file: CounterexampleFile;
@@ -29,6 +31,8 @@ export interface ReplayResult {
   bindings: Record<string, string>;
   values: Record<string, unknown>;
   sides: [unknown, unknown] | null;
+  /** What decided the failure, computed again from the file's case. */
+  witnesses: Witness[];
   /** When the verdict is 'error' or 'not-a-case': why. */
   error: string | null;
   /** Plugins the file needs that the local project does not provide. */
@@ -78,10 +82,13 @@ function localConjecture(project: Project | null, id: string): ConjectureSpec | 
   }
 }
 
-export function replayCounterexample(path: string, project: Project | null): ReplayResult {
+/** How long a replay may take by default (the case of a mailed file may be slow, but not endless). */
+export const DEFAULT_REPLAY_BUDGET_MS = 5 * 60_000;
+
+export function replayCounterexample(path: string, project: Project | null, opts: { budgetMs?: number; interrupted?: () => boolean } = {}): ReplayResult {
   const f = readCounterexampleFile(path);
   const base: ReplayResult = {
-    file: f, verdict: 'error', bindings: {}, values: {}, sides: null, error: null,
+    file: f, verdict: 'error', bindings: {}, values: {}, sides: null, witnesses: [], error: null,
     missingPlugins: [], changedPlugins: [], embeddedHashMatches: true, local: null,
   };
   const local = pluginHashes();
@@ -117,13 +124,20 @@ export function replayCounterexample(path: string, project: Project | null): Rep
   // The file's case is believed only once it is shown to be a case of the conjecture.
   const why = notACaseReason(cc, vals, sampleSettingsOf(cc, {}).ranges);
   if (why) return { ...base, verdict: 'not-a-case', error: why };
+  // The evaluation stops at the budget (or an interrupt) even inside one long case.
+  const deadline = Date.now() + (opts.budgetMs ?? DEFAULT_REPLAY_BUDGET_MS);
+  const poll = () => (opts.interrupted?.() ? 'interrupt' : Date.now() > deadline ? 'budget' : null);
   try {
-    const r = evaluateCase(cc, frame);
-    if (r === SKIPPED) return { ...base, verdict: 'not-a-case', error: '"where" excludes it' };
-    const { values, sides } = explainCase(cc, frameFor(cc, vals));
-    return { ...base, values, sides, verdict: r === 0 ? 'refutes' : 'holds' };
+    return withStopPoll(poll, () => {
+      const r = evaluateCase(cc, frame);
+      if (r === SKIPPED) return { ...base, verdict: 'not-a-case', error: '"where" excludes it' };
+      const { values, sides } = explainCase(cc, frameFor(cc, vals));
+      const witnesses = r === 0 ? traceWitnesses(cc, frameFor(cc, vals)) : [];
+      return { ...base, values, sides, witnesses, verdict: r === 0 ? 'refutes' : 'holds' };
+    });
   } catch (e) {
     if (e instanceof EvalError) return { ...base, verdict: 'error', error: e.message };
+    if (e instanceof StopSignal) return { ...base, verdict: 'stopped', error: e.reason };
     throw e;
   }
 }

@@ -16,7 +16,7 @@ import { join, relative } from 'node:path';
 import { InputError } from '../base/errors.js';
 import { writeFileAtomic } from './atomic-write.js';
 import type { ProjectConfig } from './config.js';
-import { fileHash } from './hash.js';
+import { fileHash } from '../language/conjecture/conjecture-hash.js';
 
 export const TRUST_FILE = 'trusted-projects.json';
 const TRUST_FORMAT = 1;

@@ -6,8 +6,10 @@ import type { ChalkInstance } from 'chalk';
 import { decodeValue } from '../values/decode.js';
 import { valueToText } from '../values/operations.js';
 import { agreesWithExpectation, type ConjectureResult, type Counterexample } from '../runner/result.js';
-import { describeCoverage, formatCount, formatMs } from './coverage.js';
+import { formatCount } from '../base/format-count.js';
+import { describeCoverage, formatMs } from './coverage-text.js';
 import { drawValue } from './pictures/index.js';
+import { witnessLines } from './witnesses.js';
 
 export interface ReportStyle {
   color: ChalkInstance;
@@ -86,6 +88,7 @@ function counterexampleBlock(cx: Counterexample, r: ConjectureResult, s: ReportS
   }
   for (const [name, enc] of Object.entries(cx.values)) lines.push(`  ${c.cyan(name)} = ${encodedToText(enc)}`);
   if (cx.sides) lines.push(`  ${r.claim ? `claim ${r.claim}: ` : 'the two sides: '}${encodedToText(cx.sides[0])} against ${encodedToText(cx.sides[1])}`);
+  lines.push(...witnessLines(cx.witnesses, s).map((l) => `  ${l}`));
   if (replayPath) lines.push(`  replay: hunch replay ${replayPath}`);
   return lines.join('\n');
 }

@@ -1,6 +1,8 @@
 // A progress line on standard error with an estimate of the time left, shown only on a terminal
 // and only once a check has run for about two seconds (CLI.md).
 
+import { formatCount } from '../base/format-count.js';
+
 export class ProgressLine {
   private shown = false;
   private readonly started = performance.now();
@@ -31,7 +33,7 @@ export class ProgressLine {
       const elapsed = now - this.pieceStart;
       if (frac > 0.01) eta = ` · about ${formatSeconds(((1 - frac) * elapsed) / frac)} left`;
     }
-    const counts = total ? `${done.toLocaleString('en-US')}/${total.toLocaleString('en-US')}` : done.toLocaleString('en-US');
+    const counts = total ? `${formatCount(done)}/${formatCount(total)}` : formatCount(done);
     const line = `${bar}${label} · ${counts} cases${eta}`;
     this.write(`\r\x1b[2K${line.slice(0, (process.stderr.columns || 100) - 1)}`);
   }

@@ -16,6 +16,7 @@
 import type { CompiledConjecture } from '../language/conjecture/compiled.js';
 import { exhaustiveSizes, sampleSettingsOf, sampleSizes, withSizeOverrides, type CheckOptions } from './check-options.js';
 import { buildCounterexample, regressionCounterexample } from './counterexample.js';
+import { witnessesOfBindings } from '../language/conjecture/witnesses.js';
 import { errorInfo } from './error-info.js';
 import type { RunHooks, StopReason } from './hooks.js';
 import { OrderedSizes, type SizeTicket } from './ordered-sizes.js';
@@ -147,6 +148,9 @@ export class PhaseEngine {
     this.stage = 'done';
     this.stageNo++;
     this.stoppedBy = stoppedBy;
+    // What decided the failure, computed once for the final counterexample only (free until a claim fails).
+    const cx = this.res.counterexample;
+    if (cx && !cx.witnesses) cx.witnesses = witnessesOfBindings(this.cc, cx.bindings);
     return false;
   }
 

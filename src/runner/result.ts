@@ -1,7 +1,10 @@
 // The outcome of checking one conjecture, shaped like CLI.md's result document. Values inside are
 // already encoded (encodeValue), so a result can be printed, written to JSON or to the ledger as is.
 
-export type Expectation = 'holds' | 'fails' | 'open';
+import type { Expectation } from '../language/conjecture/conjecture.js';
+import type { Witness } from '../language/conjecture/witnesses.js';
+
+export type { Expectation, Witness };
 export type Outcome = 'holds' | 'fails' | 'error' | 'incomplete';
 export type Phase = 'exhaustive' | 'sample' | 'regression';
 
@@ -49,6 +52,8 @@ export interface Counterexample {
   shrunkFrom?: Record<string, number>;
   /** The bindings as text in the language, for the human report. */
   text?: Record<string, string>;
+  /** What decided the failure: each all/any/min/max on the path to false and its simplest element (CLI.md). */
+  witnesses?: Witness[];
 }
 
 export interface ConjectureResult {

@@ -2,12 +2,13 @@
 // thread and each worker do with it: load and compile the requested conjectures, refuse sizes that
 // would take years, and derive each conjecture's check options.
 
+import { formatCount } from '../base/format-count.js';
 import { EvalError, InputError } from '../base/errors.js';
 import { nearest } from '../base/suggest.js';
 import type { CompiledConjecture } from '../language/conjecture/compiled.js';
 import { compileConjecture } from '../language/conjecture/compile-conjecture.js';
 import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
-import { loadConjectures } from '../language/conjecture/project.js';
+import { loadConjectures } from '../language/conjecture/load-conjectures.js';
 import type { Value } from '../values/value.js';
 import { sizesOf, type CheckOptions } from './check-options.js';
 import { MAX_EXHAUSTIVE_CASES, plannedCases } from './plan.js';
@@ -74,7 +75,7 @@ function refuseHugeSizes(cc: CompiledConjecture, req: RunRequest): void {
     const planned = plannedCases(cc, new Map([[cc.sizeIndex, size]]), true);
     if (planned !== null && planned > MAX_EXHAUSTIVE_CASES) {
       throw new InputError(
-        `${cc.spec.id}: ${b.name} = ${size} has ${planned.toLocaleString('en-US')} cases; checking them all would take years. ` +
+        `${cc.spec.id}: ${b.name} = ${size} has ${formatCount(planned)} cases; checking them all would take years. ` +
           `Lower the exhaustive range (e.g. --sizes ${b.name}=1..${Math.max(1, size - 3)}) and check larger sizes with "sample:"`,
         b.pos,
         b.name,

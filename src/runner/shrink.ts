@@ -67,7 +67,6 @@ function repair(cc: CompiledConjecture, vals: Value[], changed: number): Value[]
       throw e;
     }
     if (src.family.isMember(p, vals[j] as any)) continue;
-    if (!src.family.shrink) return null;
     // One shrink step of that object onto the new parameters, if the family has one.
     let found: Value | null = null;
     const oldP = currentParams(cc, vals, j, frame);
@@ -108,7 +107,7 @@ function* candidates(cc: CompiledConjecture, vals: Value[], sampleRanges: Map<st
   for (let i = 0; i < cc.bindings.length; i++) {
     const b = cc.bindings[i];
     const src = b.source;
-    if (src.kind !== 'family' || !src.family.shrink) continue;
+    if (src.kind !== 'family') continue;
     let p;
     try {
       p = src.family.prepare(src.args.map((f) => f(frame)));

@@ -4,14 +4,18 @@ import { Rat } from '../numbers/rational.js';
 import { isStructured } from './structured.js';
 import type { Value } from './value.js';
 
+import type { TypeName } from '../protocol/type-names.js';
+
 /**
  * 'integer' | 'rational' | 'boolean' | 'string' | 'list' and the kind of any Structured value
  * ('permutation', 'polynomial', 'matching', ...). Signatures may also use:
  *   'number'   an integer or a rational
  *   'scalarOrPolynomial' a number or a polynomial (constants are numbers, never polynomials)
  *   'any'      anything
+ * The closed list is src/protocol/type-names.ts.
  */
-export type TypeName = string;
+export type { TypeName };
+export { isTypeName, type ObjectKind } from '../protocol/type-names.js';
 
 /** The run-time type of a value. A rational is 'rational' only when it is not an integer. */
 export function typeOf(v: Value): TypeName {

@@ -1,11 +1,11 @@
-import { mkdtempSync, mkdirSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { tempDir } from '../helpers/temp-dirs.js';
 import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import { check, ConjectureTestFailure, defineConjectureTests, describeResult, load, passes, readLedger } from '../../src/api/index.js';
 
 function project(files: Record<string, string>): string {
-  const d = mkdtempSync(join(tmpdir(), 'hunch-api-'));
+  const d = tempDir('hunch-api-');
   for (const [p, text] of Object.entries(files)) {
     mkdirSync(join(d, p, '..'), { recursive: true });
     writeFileSync(join(d, p), text);

@@ -6,7 +6,7 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, test } from 'vitest';
 import { check, guessExpression, guessTerms, load } from '../../src/api/index.js';
 import { evaluate } from '../../src/language/expr/index.js';
-import { loadConjectures } from '../../src/language/conjecture/project.js';
+import { loadConjectures } from '../../src/language/conjecture/load-conjectures.js';
 import { compileConjecture } from '../../src/language/conjecture/compile-conjecture.js';
 import { valueToText } from '../../src/values/operations.js';
 

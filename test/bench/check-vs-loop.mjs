@@ -1,4 +1,4 @@
-// The headline benchmark of issue 2, in one run (after `npm run build`):
+// The headline benchmark of the exhaustive runner, in one run (after `npm run build`):
 //   node test/bench/check-vs-loop.mjs [maxN=10]
 // 1. `hunch check` (the exhaustive runner, one thread, in-process) on
 //    "inv(w) == inv(inverse(w)) for every w in S_1..S_maxN", against a plain hand-written loop over

@@ -11,7 +11,7 @@
 
 import { padd, pmul, psub, variable } from '../../dist/algebra/polynomial.js';
 import { varId } from '../../dist/algebra/variables.js';
-import { groebnerBasis, termOrder, leadingTerm } from '../../dist/algebra/groebner/index.js';
+import { groebnerBasis, termOrder, } from '../../dist/algebra/groebner/index.js';
 
 const arg = (name, dflt) => {
   const i = process.argv.indexOf(name);

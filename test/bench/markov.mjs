@@ -1,4 +1,4 @@
-// Benchmark (issue 6): the loop chain on perfect matchings of 2n points around a circle (uniform
+// Benchmark: the loop chain on perfect matchings of 2n points around a circle (uniform
 // position i; joinAt(m, i) with weight 2, crossAt(m, i) with weight 1), built through the library
 // (`chain` with the move functions), then its stationary measure
 //   exact:  hunch's solver (closed classes, lumping by the equitable partition, one sparse
@@ -9,7 +9,7 @@
 //   float:  Gauss–Seidel sweeps in doubles on the same full system until the largest relative
 //           change is below 1e-12 (floats are allowed here, in the benchmark only).
 // All times in one run, first calls and then a second run of both; the ratio float / exact is
-// what issue 6 asks to be above 1. Run after
+// what should be above 1. Run after
 // `npm run build`:   node test/bench/markov.mjs [n ...]    (default: 5 6)
 
 import '../../dist/library/markov.js';

@@ -1,4 +1,4 @@
-// Benchmarks of issue 7, in one run (after `npm run build`): node test/bench/parallel.mjs
+// Benchmarks of the worker pool and shards, in one run (after `npm run build`): node test/bench/parallel.mjs
 // 1. Parallel efficiency: `hunch check` of inv(w) == inv(inverse(w)) over S_1..S_10 with 2 workers
 //    against 1 worker (the conjecture's own time from --json, so process start-up is left out);
 //    target at most 0.6 on 2 cores.

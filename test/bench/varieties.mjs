@@ -12,7 +12,7 @@ import '../../dist/families/index.js';
 import '../../dist/library/index.js';
 import { loadConjectureFile } from '../../dist/language/conjecture/load-file.js';
 import { compileConjecture } from '../../dist/language/conjecture/compile-conjecture.js';
-import { checkConjecture } from '../../dist/runner/check.js';
+import { checkConjecture } from '../../dist/runner/in-process-executor.js';
 import { clearSchubertMemo, schubertPolynomial } from '../../dist/algebra/schubertPolynomials.js';
 import { evaluate } from '../../dist/language/expr/index.js';
 

@@ -38,6 +38,15 @@ describe('hunch guess', () => {
     expect(j.tried.map((t: { guessClass: string }) => t.guessClass)).toEqual(expect.arrayContaining(['polynomials in n', 'P-recursive recurrences', 'algebraic generating functions']));
   }, 60_000);
 
+  test('hunch table shows the best guess under the table, and in its JSON (Fibonacci numbers, OEIS A000045)', () => {
+    const r = runCli(['table', 'fibonacci(n)', '--over', 'n=0..12']);
+    expect(r.stdout).toContain('Best guess, with a(n) the value: a(n + 2) == a(n + 1) + a(n)  (C-finite recurrence, order 2; found from the terms n = 0..3, confirmed by n = 4..12 (9 terms))');
+    const j = JSON.parse(runCli(['table', 'fibonacci(k)', '--over', 'k=0..12', '--json']).stdout);
+    expect(j.bestGuess).toMatchObject({ kind: 'c-finite', evidence: { foundFrom: [0, 3] } });
+    const none = runCli(['table', 'perm([1])', '--over', 'n=1..3']);
+    expect(none.stdout).not.toContain('Best guess');
+  }, 60_000);
+
   test('--json gives the evidence as ranges', () => {
     const r = runCli(['guess', 'fibonacci(n)', '--over', 'n=0..12', '--json']);
     const j = JSON.parse(r.stdout);

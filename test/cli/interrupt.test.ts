@@ -1,4 +1,4 @@
-// Ctrl-C (issue 2): a check stops cleanly with outcome `incomplete`, reports what it covered,
+// Ctrl-C: a check stops cleanly with outcome `incomplete`, reports what it covered,
 // exits 3, and the ledger holds exactly the sizes it finished.
 
 import { spawn } from 'node:child_process';

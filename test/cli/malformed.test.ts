@@ -1,4 +1,4 @@
-// Bad input (issue 2): every malformed file gets one clear message with file:line:column, the
+// Bad input: every malformed file gets one clear message with file:line:column, the
 // offending text or nearest valid name, exit code 2, no stack trace, and nothing recorded.
 // Each file under malformed/ states on its first line what the message must contain and where.
 

@@ -1,8 +1,8 @@
-// End-to-end checks on the bundled notebook (issues 3 and 4): a sampled failure at size 20 or
+// End-to-end checks on the bundled notebook: a sampled failure at size 20 or
 // more is shrunk, written to counterexamples/, drawn, and replayed from the file alone; the
 // plugin example works and editing it makes its conjectures stale.
 
-import { cpSync, existsSync, readFileSync, writeFileSync, appendFileSync } from 'node:fs';
+import { cpSync, existsSync, appendFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import { ROOT, runCli, tempDir } from './run-cli.js';
@@ -14,7 +14,7 @@ function copyNotebook(): string {
   return dir;
 }
 
-describe('the bundled notebook', () => {
+describe('the bundled notebook', { timeout: 120_000 }, () => {
   test('a sampled failure at n >= 20 is shrunk, drawn, written and replayed from the file alone', () => {
     const dir = copyNotebook();
     const r = runCli(['check', 'conjectures/permutation-statistics.yaml', '--id', 'few-cycles', '--no-exhaustive', '--sample', 'n=20..24'], { cwd: dir });

@@ -1,4 +1,4 @@
-// The ledger, status, merge, replay and init end to end through the built command line (issue 4):
+// The ledger, status, merge, replay and init end to end through the built command line:
 // status after a run, an interrupted run (SIGKILL in the middle of a size), a changed conjecture and
 // a merge shows exactly the truth; concurrent writers lose and interleave nothing; damaged ledgers.
 

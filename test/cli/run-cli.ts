@@ -25,11 +25,10 @@ export function runCli(args: string[], opts: { cwd?: string; env?: Record<string
     cwd: opts.cwd ?? ROOT,
     encoding: 'utf8',
     env: { ...process.env, NO_COLOR: '1', HUNCH_CONFIG_DIR: TEST_CONFIG_DIR, ...opts.env },
-    timeout: opts.timeout ?? 60_000,
+    // Generous: on a loaded machine one run can take a minute or more; a timeout ends it with SIGTERM.
+    timeout: opts.timeout ?? 240_000,
   });
   return { code: r.status, stdout: r.stdout, stderr: r.stderr };
 }
 
-export function tempDir(prefix = 'hunch-test-'): string {
-  return mkdtempSync(join(tmpdir(), prefix));
-}
+export { tempDir } from '../helpers/temp-dirs.js';

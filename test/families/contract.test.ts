@@ -1,4 +1,4 @@
-// The generator contract of issue 3, run on every registered family that has an arbitrary:
+// The generator contract, run on every registered family that has an arbitrary:
 // reproducibility (same seed, same values, same shrink tree), membership of every value and every
 // shrink, strict simplicity of every shrink (size first, then the family's compare), termination
 // of greedy shrinking, and exact uniformity by a chi-square test at a size where every object can

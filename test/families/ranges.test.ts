@@ -1,4 +1,4 @@
-// enumerateRange (issue 7): for every family that has it, visiting [lo, hi) gives exactly the slice
+// enumerateRange: for every family that has it, visiting [lo, hi) gives exactly the slice
 // lo..hi-1 of `enumerate`'s sequence, with the same transient objects, stops when the visitor asks,
 // and works with bigint indices beyond 2^53. The reference is the family's own `enumerate` (a brute
 // force walk from the start); the known first and last objects at large parameters are stated

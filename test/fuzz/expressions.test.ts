@@ -134,7 +134,7 @@ describe('found by fuzzing', () => {
   });
 
   test('a non-number matrix entry or partition part is shown in the notation of the language', () => {
-    expect(errorOf('matrix([[perm([2, 1])]])').message).toBe('a matrix entry must be a number, not perm([2, 1])');
+    expect(errorOf('matrix([[perm([2, 1])]])').message).toBe('a matrix entry must be a number or a polynomial, not perm([2, 1])');
     expect(errorOf('kostka([q], [1])').message).toContain('got [q]');
     expect(errorOf('syt([[1]])').message).toContain('got [[1]]');
   });

@@ -74,7 +74,7 @@ describe('Distribution', () => {
     const d = new Distribution();
     d.add(w);
     w.a.reverse();
-    expect(d.toText()).toBe('distribution({perm([1, 2]): 1})');
+    expect(d.toText()).toBe('distributionOf([[perm([1, 2]), 1]])');
   });
 });
 

@@ -9,7 +9,6 @@ import { Matrix } from '../../src/algebra/matrix.js';
 import { Tableau } from '../../src/families/tableaux/tableau.js';
 import { Partition } from '../../src/families/partitions/partition.js';
 import { partitions } from '../../src/families/partitions/partitions.js';
-import { semistandardTableaux } from '../../src/families/tableaux/semistandardTableaux.js';
 import { reducedWords } from '../../src/families/reducedWords/reducedWords.js';
 import { Permutation } from '../../src/families/permutations/permutation.js';
 import { kostkaNumber } from '../../src/library/kostka.js';

@@ -41,7 +41,7 @@ describe('len', () => {
   });
   it('fails clearly where the length is ambiguous or meaningless', () => {
     expect(() => call('len', Matching.fromArcs([[1, 2]]))).toThrow(/len\(x\) is not defined for a matching: use len\(arcs\(m\)\)/);
-    expect(() => call('len', Tableau.from([[1, 2], [3]]))).toThrow(/not defined for a tableau: use size\(T\)/);
+    expect(call('len', Tableau.from([[1, 2], [3]]))).toBe(2); // its rows, what T[i] runs over
     expect(() => call('len', 5)).toThrow(/not defined for an integer; it takes a list, a string, a permutation/);
     expect(() => call('len', true)).toThrow(/not defined for a boolean/);
   });

@@ -1,4 +1,4 @@
-// chain, stationary, prob, support, values (src/library/markov.ts) and the loop chain of issue 6
+// chain, stationary, prob, support, values (src/library/markov.ts) and the loop chain on perfect matchings
 // stated the way a user states it: chain(matchings, m -> [[joinAt(m, i), 2], [crossAt(m, i), 1], ...]).
 // Source for the numbers: OEIS A029729 (1, 3, 31, 1145, 154881), with its ground-state comment (2004); see test/algebra/linear/stationary.test.ts for the full citation.
 

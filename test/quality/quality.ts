@@ -1,4 +1,4 @@
-// Shared measurement of shrink quality (issue 3, "Shrink quality"): run one sampled conjecture over
+// Shared measurement of shrink quality: run one sampled conjecture over
 // many seeds and report how often the shrunk counterexample reaches the true minimal size (found by
 // brute force in each test) and how often it is exactly the simplest failing case.
 

@@ -1,4 +1,4 @@
-// Minimal-example tests (issue 3, "Shrink quality"): a false claim sampled only at sizes far above
+// Minimal-example tests: a false claim sampled only at sizes far above
 // its smallest counterexample must shrink to that counterexample. The true minimum is found by brute
 // force here (test/runner/brute.ts, independent of src/families); over 50 seeds the shrunk case must
 // reach the true minimal size in at least 95% of them.

@@ -1,4 +1,4 @@
-// Shrinking a sampled case of size 25 takes under a second (issue 3, "Shrink quality"). Timed two
+// Shrinking a sampled case of size 25 takes under a second. Timed two
 // ways: the shrinker called directly on a failing case of size 25, and whole runs sampling only at
 // n = 25 (the sampling itself is a few cases, so the run's time bounds the shrink's).
 

@@ -1,5 +1,5 @@
-import { mkdtempSync, mkdirSync, writeFileSync, readFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync, writeFileSync, readFileSync } from 'node:fs';
+import { tempDir } from '../helpers/temp-dirs.js';
 import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import '../../src/families/index.js';
@@ -8,7 +8,7 @@ import type { ConjectureResult } from '../../src/runner/result.js';
 import {
   conjectureText, counterexampleRecord, counterexampleText, parseCounterexampleFile, readRegressionCase, readRegressionEncoded, writeCounterexampleFile,
 } from '../../src/records/counterexample-file.js';
-import { conjectureHash } from '../../src/records/hash.js';
+import { conjectureHash } from '../../src/language/conjecture/conjecture-hash.js';
 
 const TEXT = `
 define:
@@ -59,7 +59,7 @@ describe('counterexample files', () => {
   });
 
   test('written atomically under counterexamples/ with a readable header; regression case read back', () => {
-    const root = mkdtempSync(join(tmpdir(), 'hunch-cx-'));
+    const root = tempDir('hunch-cx-');
     const shown = writeCounterexampleFile(root, spec, result());
     expect(shown).toMatch(/counterexamples\/peaks-small\.yaml$/);
     const text = readFileSync(join(root, 'counterexamples', 'peaks-small.yaml'), 'utf8');
@@ -74,7 +74,7 @@ describe('counterexample files', () => {
   });
 
   test('a damaged saved counterexample is reported and skipped; a missing one is silent', () => {
-    const root = mkdtempSync(join(tmpdir(), 'hunch-cx-'));
+    const root = tempDir('hunch-cx-');
     const warnings: string[] = [];
     expect(readRegressionEncoded(root, spec, (m) => warnings.push(m))).toBeNull();
     expect(warnings).toEqual([]);

@@ -1,13 +1,14 @@
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { tempDir } from '../helpers/temp-dirs.js';
 import { join } from 'node:path';
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
 import { InputError } from '../../src/base/errors.js';
-import { appendRecords, LedgerWriter, parseLedger, pieceRecord, readLedger, recordLine, parseShard } from '../../src/records/ledger.js';
+import { appendRecords, LedgerWriter, parseLedger, pieceRecord, readLedger, recordLine } from '../../src/records/ledger.js';
+import { parseShard } from '../../src/runner/work/slicing.js';
 import { H1, rec } from './fixtures.js';
 
-const tmp = () => mkdtempSync(join(tmpdir(), 'hunch-ledger-'));
+const tmp = () => tempDir('hunch-ledger-');
 
 describe('ledger records', () => {
   test('a piece becomes a record with its outcome', () => {
@@ -20,7 +21,7 @@ describe('ledger records', () => {
   });
 
   test('shards parse', () => {
-    expect(parseShard('3/8')).toEqual([3, 8]);
+    expect(parseShard('3/8')).toEqual({ index: 3, of: 8 });
     expect(parseShard('9/8')).toBeNull();
     expect(parseShard('0/8')).toBeNull();
     expect(parseShard('x')).toBeNull();

@@ -1,13 +1,14 @@
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { tempDir } from '../helpers/temp-dirs.js';
 import { join } from 'node:path';
 import { Chalk } from 'chalk';
 import { describe, expect, test } from 'vitest';
 import { appendRecords, readLedger, recordLine } from '../../src/records/ledger.js';
-import { coverageOf, formatMerge, mergeLedgers, mergeRecords } from '../../src/records/merge.js';
+import { coverageOf, mergeLedgers, mergeRecords } from '../../src/records/merge.js';
+import { formatMerge } from '../../src/reports/merge-summary.js';
 import { rec } from './fixtures.js';
 
-const tmp = () => mkdtempSync(join(tmpdir(), 'hunch-merge-'));
+const tmp = () => tempDir('hunch-merge-');
 
 describe('merge', () => {
   test('exact duplicates are removed; different records kept, in time order', () => {

@@ -1,5 +1,5 @@
-import { writeFileSync, mkdirSync, mkdtempSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { writeFileSync, mkdirSync } from 'node:fs';
+import { tempDir } from '../helpers/temp-dirs.js';
 import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import '../../src/library/index.js';
@@ -37,7 +37,7 @@ claim: n + n == 2 * n
 `;
 
 function project(): string {
-  const d = mkdtempSync(join(tmpdir(), 'hunch-plugin-'));
+  const d = tempDir('hunch-plugin-');
   mkdirSync(join(d, 'plugins'));
   mkdirSync(join(d, 'conjectures'));
   writeFileSync(join(d, 'hunch.yaml'), 'plugins:\n  - plugins/twice.mjs\n');
@@ -76,7 +76,7 @@ describe('plugins', () => {
   }, 60_000);
 
   test('bad plugins are clear errors', async () => {
-    const d = mkdtempSync(join(tmpdir(), 'hunch-plugin-'));
+    const d = tempDir('hunch-plugin-');
     const put = (name: string, text: string) => (writeFileSync(join(d, name), text), join(d, name));
     await expect(loadPlugin(join(d, 'nope.mjs'), d)).rejects.toThrow(/nope\.mjs listed in hunch\.yaml does not exist/);
     await expect(loadPlugin(put('none.mjs', 'export const x = 1;'), d)).rejects.toThrow(/exports no "functions"/);

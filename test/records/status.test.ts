@@ -1,6 +1,7 @@
 import { Chalk } from 'chalk';
 import { describe, expect, test } from 'vitest';
-import { computeStatus, conjectureStatus, formatStatus } from '../../src/records/status.js';
+import { computeStatus, conjectureStatus } from '../../src/records/status.js';
+import { formatStatus } from '../../src/reports/status-table.js';
 import { H1, H2, rec } from './fixtures.js';
 
 const C = { id: 'c1', file: 'c.yaml', hash: H1, expect: 'holds' as const };

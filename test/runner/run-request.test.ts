@@ -1,5 +1,5 @@
 // prepareRun (src/runner/run-request.ts): load, compile and refuse, before anything runs, an exhaustive
-// size whose enumeration would take years (issue 2, "Bad input"), suggesting `sample`.
+// size whose enumeration would take years, suggesting `sample`.
 
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';

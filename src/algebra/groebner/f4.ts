@@ -10,6 +10,7 @@
 // K (p-1)^2 + p < 2^53 keeps every partial sum exact; above p ≈ 9.4·10^7 no sum is safe and each
 // addition is reduced through the split multiplication of primeField.ts.
 
+import { fail } from '../../base/errors.js';
 import type { Limits } from './bounds.js';
 import { MonomialTable } from './monomialTable.js';
 import { invModP, mulModP } from './primeField.js';
@@ -206,9 +207,10 @@ class F4 {
         }
       }
     };
-    const rowKeys = new Map<string, number>();
+    // A row is (basis element, multiplier): one number key, exact while poly < 2^21.
+    const rowKeys = new Map<number, number>();
     for (const s of start) {
-      const key = `${s.poly}:${s.mult}`;
+      const key = s.poly * 4294967296 + s.mult;
       if (rowKeys.has(key)) continue;
       const r = rowsMult.length;
       rowKeys.set(key, r);
@@ -227,7 +229,7 @@ class F4 {
       const g = this.reducerFor(m);
       if (g < 0) continue;
       const mult = T.quotient(m, this.polys[g].mons[0]);
-      const key = `${g}:${mult}`;
+      const key = g * 4294967296 + mult;
       let r = rowKeys.get(key);
       if (r === undefined) {
         r = rowsMult.length;
@@ -351,9 +353,9 @@ class F4 {
         start.push({ mult: T.quotient(pr.lcm, this.polys[pr.i].mons[0]), poly: pr.i });
         start.push({ mult: T.quotient(pr.lcm, this.polys[pr.j].mons[0]), poly: pr.j });
       }
-      const t0 = TRACE ? performance.now() : 0;
+      const t0 = TRACE ? performance.now() : 0, c0 = TRACE ? process.cpuUsage().user : 0;
       const fresh = this.reduceRows(start, false);
-      if (TRACE) console.error(`step ${this.stats.steps} sugar ${sugar} pairs ${chosen.length} new ${fresh.length} basis ${this.activeList.length} monomials ${T.count} ${this.lastShape} ${(performance.now() - t0).toFixed(0)} ms`);
+      if (TRACE) console.error(`step ${this.stats.steps} sugar ${sugar} pairs ${chosen.length} new ${fresh.length} basis ${this.activeList.length} monomials ${T.count} ${this.lastShape} ${(performance.now() - t0).toFixed(0)} ms (${((process.cpuUsage().user - c0) / 1000).toFixed(0)} ms CPU)`);
       if (fresh.some((f) => T.deg[f.mons[0]] === 0)) return [unitBasis(T.nv)];
       fresh.sort((a, b) => T.cmp(a.mons[0], b.mons[0]));
       for (const f of fresh) {
@@ -361,6 +363,7 @@ class F4 {
         this.insert(f);
       }
       this.limits.size(this.activeList.length);
+      if (this.polys.length >= 2 ** 21) fail('the Gröbner basis computation produced more than 2^21 polynomials');
     }
     return this.finish();
   }

@@ -36,9 +36,31 @@ export class MonomialTable {
       this.rnd[v] = s | 1;
     }
     this.tmp = new Int32Array(nv);
+    // Comparisons by id: the stored degree decides first for the graded orders.
     const at = order.compareAt;
-    const ex = () => this.exps;
-    this.cmp = (a, b) => at(ex(), a * nv, ex(), b * nv);
+    if (order.kind === 'grevlex')
+      this.cmp = (a, b) => {
+        const d = this.deg[a] - this.deg[b];
+        if (d !== 0) return d;
+        const ex = this.exps, ia = a * nv, ib = b * nv;
+        for (let v = nv - 1; v >= 0; v--) {
+          const x = ex[ia + v] - ex[ib + v];
+          if (x !== 0) return -x;
+        }
+        return 0;
+      };
+    else if (order.kind === 'deglex')
+      this.cmp = (a, b) => {
+        const d = this.deg[a] - this.deg[b];
+        if (d !== 0) return d;
+        const ex = this.exps, ia = a * nv, ib = b * nv;
+        for (let v = 0; v < nv; v++) {
+          const x = ex[ia + v] - ex[ib + v];
+          if (x !== 0) return x;
+        }
+        return 0;
+      };
+    else this.cmp = (a, b) => at(this.exps, a * nv, this.exps, b * nv);
   }
 
   /** The first slot to probe: the top bits of a multiplicative scramble of the hash (the low

@@ -9,7 +9,7 @@ import { guessPolynomial } from './polynomialFit.js';
 import { rationalGeneratingFunction, recurrenceGuess, searchRecurrence } from './recurrence.js';
 import { factor, ratPolyText, intPolyText } from './text.js';
 import { STANDARD_TRANSFORMS, byColumn, type Transform } from './transforms.js';
-import { MIN_CONFIRMING_TERMS, type Attempt, type ClaimPlan, type Guess, type GuessKind, type GuessReport, type Sequence } from './types.js';
+import { MAX_GUESS_TERMS, MIN_CONFIRMING_TERMS, type Attempt, type ClaimPlan, type Guess, type GuessKind, type GuessReport, type Sequence } from './types.js';
 
 export interface GuessOptions {
   /** Also try a(n)/c(n) for this column, whose function is called `name` in a conjecture. */
@@ -83,7 +83,9 @@ function transformed(t: Transform, seq: Sequence, inner: Guess): Guess {
   };
 }
 
+/** Guesses for the sequence, simplest first (at most MAX_GUESS_TERMS terms: callers refuse more). */
 export function guessSequence(seq: Sequence, opts: GuessOptions = {}): GuessReport {
+  if (seq.terms.length > MAX_GUESS_TERMS) throw new RangeError(`guessing takes at most ${MAX_GUESS_TERMS} terms, not ${seq.terms.length}`);
   const { guesses, tried } = directGuesses(seq, false);
   if (opts.transforms !== false) {
     const best = guesses.length ? Math.min(...guesses.map((g) => g.unknowns)) : Infinity;

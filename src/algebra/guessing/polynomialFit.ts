@@ -4,7 +4,7 @@
 import { denOf, makeRat, numOf, type Scalar } from '../../numbers/rational.js';
 import { findRelation } from './relation.js';
 import { ratPolyText } from './text.js';
-import { MIN_CONFIRMING_TERMS, type Attempt, type Guess, type Sequence } from './types.js';
+import { MAX_UNKNOWNS, MIN_CONFIRMING_TERMS, type Attempt, type Guess, type Sequence } from './types.js';
 
 export interface QuasiPolynomialFit {
   period: number;
@@ -84,7 +84,7 @@ function closedFormGuess(fit: QuasiPolynomialFit, seq: Sequence): Guess {
 /** The polynomial of lowest degree, else the quasi-polynomial of lowest period (2..4) and degree. */
 export function guessPolynomial(seq: Sequence): { guess: Guess | null; tried: Attempt[] } {
   const N = seq.terms.length;
-  const maxDeg = N - MIN_CONFIRMING_TERMS - 1;
+  const maxDeg = Math.min(N - MIN_CONFIRMING_TERMS - 1, MAX_UNKNOWNS - 1);
   const tried: Attempt[] = [];
   for (let d = 0; d <= maxDeg; d++) {
     const fit = fitQuasiPolynomial(seq, 1, d);
@@ -94,7 +94,7 @@ export function guessPolynomial(seq: Sequence): { guess: Guess | null; tried: At
   let any = false;
   let maxP = 0;
   for (let P = 2; P <= 4; P++)
-    for (let d = 0; P * (d + 1) + MIN_CONFIRMING_TERMS + P - 1 <= N; d++) {
+    for (let d = 0; P * (d + 1) + MIN_CONFIRMING_TERMS + P - 1 <= N && P * (d + 1) <= MAX_UNKNOWNS; d++) {
       any = true;
       maxP = P;
       const fit = fitQuasiPolynomial(seq, P, d);

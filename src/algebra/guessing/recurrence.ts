@@ -8,7 +8,7 @@ import { bigGcd, normBig } from '../../numbers/integer.js';
 import { sadd, smul } from '../../numbers/scalar.js';
 import { findRelation } from './relation.js';
 import { intPolyText, shifted, times } from './text.js';
-import { MIN_CONFIRMING_TERMS, type Attempt, type ClaimPlan, type Guess, type Sequence } from './types.js';
+import { MAX_UNKNOWNS, MIN_CONFIRMING_TERMS, type Attempt, type ClaimPlan, type Guess, type Sequence } from './types.js';
 
 export interface RecurrenceFit {
   order: number;
@@ -38,7 +38,7 @@ export function recurrenceCandidates(terms: number, opts: RecurrenceSearch = {})
   for (let r = 1; r <= maxR; r++)
     for (let d = 0; d <= maxD; d++) {
       const cols = (r + 1) * (d + 1);
-      if (terms - r >= cols - 1 + MIN_CONFIRMING_TERMS) out.push([r, d]);
+      if (cols - 1 <= MAX_UNKNOWNS && terms - r >= cols - 1 + MIN_CONFIRMING_TERMS) out.push([r, d]);
     }
   out.sort((a, b) => (a[0] + 1) * (a[1] + 1) - (b[0] + 1) * (b[1] + 1) || a[0] - b[0] || a[1] - b[1]);
   return out;
@@ -96,10 +96,12 @@ export function searchRecurrence(seq: Sequence, opts: RecurrenceSearch = {}): { 
     const fit = fitRecurrence(seq, r, d);
     if (fit) return { fit, tried: null };
   }
-  const extent = opts.constantOnly
-    ? `order <= ${maxR}`
-    : `order r and degree d with at most ${Math.max(...cands.map(([r, d]) => (r + 1) * (d + 1) - 1))} unknowns (r <= ${maxR}, d <= ${Math.max(...cands.map((c) => c[1]))})`;
-  return { fit: null, tried: { guessClass: opts.constantOnly ? 'C-finite recurrences' : 'P-recursive recurrences', extent, terms: seq.terms.length } };
+  const maxD = Math.max(...cands.map((c) => c[1]));
+  const maxU = Math.max(...cands.map(([r, d]) => (r + 1) * (d + 1) - 1));
+  // With only constant coefficients within reach, say so rather than "degree <= 0".
+  if (opts.constantOnly || maxD === 0) return { fit: null, tried: { guessClass: 'C-finite recurrences', extent: `order <= ${maxR}`, terms: seq.terms.length } };
+  const extent = `order r and degree d with at most ${maxU} unknown${maxU === 1 ? '' : 's'} (r <= ${maxR}, d <= ${maxD})`;
+  return { fit: null, tried: { guessClass: 'P-recursive recurrences', extent, terms: seq.terms.length } };
 }
 
 /** "p_r(n)*a(n + r) == -p_{r-1}(n)*a(n + r - 1) - ...", with the highest shift on the left. */

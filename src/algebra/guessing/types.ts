@@ -6,6 +6,12 @@ import type { Scalar } from '../../numbers/rational.js';
 /** At least this many terms beyond those that determined a guess must agree before it is offered. */
 export const MIN_CONFIRMING_TERMS = 3;
 
+/** Guessing takes at most this many terms (more would only slow the search: the unknowns are bounded below). */
+export const MAX_GUESS_TERMS = 200;
+
+/** No guess has more unknowns than this (a recurrence of order r and degree d has (r+1)(d+1) - 1). */
+export const MAX_UNKNOWNS = 64;
+
 /** A sequence a(offset), a(offset + 1), ... of exact numbers. */
 export interface Sequence {
   offset: number;

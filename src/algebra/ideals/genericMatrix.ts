@@ -8,7 +8,7 @@ import { isPolynomial, variable, type PolyLike } from '../polynomial.js';
 import { sisZero } from '../../numbers/scalar.js';
 
 /** Beyond this a generic matrix has too many indeterminates to be useful in a check. */
-export const GENERIC_MATRIX_MAX_ENTRIES = 10_000;
+export const GENERIC_MATRIX_MAX_ENTRIES = 400;
 
 export function genericMatrix(base: string, m: number, n: number): Matrix {
   if (!Number.isSafeInteger(m) || !Number.isSafeInteger(n) || m < 0 || n < 0) fail(`a generic matrix needs nonnegative sizes, not ${m}×${n}`);

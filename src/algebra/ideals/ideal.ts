@@ -12,8 +12,8 @@
 import { fail } from '../../base/errors.js';
 import { isScalar, type Scalar } from '../../numbers/rational.js';
 import { sisZero } from '../../numbers/scalar.js';
-import { registerDecoder } from '../../values/decode.js';
-import type { Structured } from '../../values/structured.js';
+import { registerDecoder } from '../../protocol/decode.js';
+import type { Structured } from '../../protocol/structured.js';
 import { groebnerBasis, termOrder, type GroebnerOptions, type TermOrder } from '../groebner/index.js';
 import { leadingTerm } from '../groebner/ideals.js';
 import { checkPrime } from '../groebner/primeField.js';
@@ -21,6 +21,7 @@ import { MonomialIdeal } from '../monomialIdeals/monomialIdeal.js';
 import { fromTerms, isPolynomial, polyText, psub, type PolyLike } from '../polynomial.js';
 import { parsePolynomialText } from '../polynomialText.js';
 import { rankOf, varId, varName } from '../variables.js';
+import { idealShouldStop } from './stop.js';
 
 /** Bounds on every basis computation behind an ideal's invariants, unless a caller sets its own. */
 export const DEFAULT_IDEAL_LIMITS: GroebnerOptions = { maxBasisSize: 20_000 };
@@ -75,7 +76,7 @@ export class Ideal implements Structured {
   }
 
   groebnerOptions(extra: GroebnerOptions = {}): GroebnerOptions {
-    return { ...DEFAULT_IDEAL_LIMITS, ...extra, prime: this.prime };
+    return { ...DEFAULT_IDEAL_LIMITS, shouldStop: idealShouldStop, ...extra, prime: this.prime };
   }
 
   /** grevlex on the ring's variables in print order. */

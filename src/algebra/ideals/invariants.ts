@@ -22,8 +22,14 @@ import { monomialKPolynomial, monomialMultidegree, rowColumnGrading, type RowCol
 import { isPolynomial, type PolyLike } from '../polynomial.js';
 import { varName } from '../variables.js';
 import type { Ideal } from './ideal.js';
+import { idealShouldStop } from './stop.js';
 
 export type InvariantOptions = GroebnerOptions & HilbertOptions;
+
+/** The options with the installed stop check unless the caller gave one. */
+function withStop(opts: InvariantOptions): InvariantOptions {
+  return opts.shouldStop ? opts : { ...opts, shouldStop: idealShouldStop };
+}
 
 /** The reduced Gröbner basis of I for the order (whose variables must include I's ring). */
 export function basisFor(I: Ideal, order: TermOrder, opts: InvariantOptions = {}): PolyLike[] {
@@ -62,7 +68,7 @@ export function grevlexInitial(I: Ideal, opts: InvariantOptions = {}): MonomialI
 
 export function idealDimensionData(I: Ideal, opts: InvariantOptions = {}): DimensionData {
   const M = grevlexInitial(I, opts);
-  return dimensionFromNumerator(hilbertNumeratorCoefficients(M, opts), I.nv);
+  return dimensionFromNumerator(hilbertNumeratorCoefficients(M, withStop(opts)), I.nv);
 }
 
 function requireHomogeneous(I: Ideal, what: string): void {
@@ -72,7 +78,7 @@ function requireHomogeneous(I: Ideal, what: string): void {
 /** The numerator N(t) of the Hilbert series of S/I, coefficients from degree 0. */
 export function idealHilbertNumerator(I: Ideal, opts: InvariantOptions = {}): Int[] {
   requireHomogeneous(I, 'the Hilbert series');
-  return hilbertNumeratorCoefficients(grevlexInitial(I, opts), opts);
+  return hilbertNumeratorCoefficients(grevlexInitial(I, opts), withStop(opts));
 }
 
 export function idealHilbertFunction(I: Ideal, d: number, opts: InvariantOptions = {}): Int {
@@ -102,11 +108,11 @@ function checkHomogeneousFor(I: Ideal, g: RowColumnGrading, what: string): void 
 export function idealMultidegree(I: Ideal, x: string, y?: string, opts: InvariantOptions = {}): PolyLike {
   const g = rowColumnGrading(I.ring, x, y);
   checkHomogeneousFor(I, g, 'the multidegree');
-  return monomialMultidegree(grevlexInitial(I, opts), g, opts);
+  return monomialMultidegree(grevlexInitial(I, opts), g, withStop(opts));
 }
 
 export function idealKPolynomial(I: Ideal, x: string, y?: string, opts: InvariantOptions = {}): PolyLike {
   const g = rowColumnGrading(I.ring, x, y);
   checkHomogeneousFor(I, g, 'the K-polynomial');
-  return monomialKPolynomial(grevlexInitial(I, opts), g, opts);
+  return monomialKPolynomial(grevlexInitial(I, opts), g, withStop(opts));
 }

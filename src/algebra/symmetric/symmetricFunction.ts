@@ -8,8 +8,8 @@
 import { fail } from '../../base/errors.js';
 import { isScalar, parseScalar } from '../../numbers/rational.js';
 import { sisZero } from '../../numbers/scalar.js';
-import { registerDecoder } from '../../values/decode.js';
-import type { Structured } from '../../values/structured.js';
+import { registerDecoder } from '../../protocol/decode.js';
+import type { Structured } from '../../protocol/structured.js';
 import { isPolyLike, isPolynomial, padd, pequals, pmul, pneg, polyText, type PolyLike } from '../polynomial.js';
 import { parsePolynomialText } from './coefficientText.js';
 import { compareParts, partsKey, sizeOfParts, type Parts } from './partitions.js';

@@ -1,6 +1,10 @@
 // hunch check [PATH...]: run the conjectures, print the report, record coverage and counterexamples.
 
+import { formatCount } from '../../base/format-count.js';
 import type { Command } from 'commander';
+import { availableParallelism } from 'node:os';
+import { statSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 import { InputError } from '../../base/errors.js';
 import { MAX_EXHAUSTIVE_SIZES } from '../../language/conjecture/compile-conjecture.js';
 import '../../families/index.js';
@@ -9,7 +13,8 @@ import { prepareRun, type RunRequest } from '../../runner/run-request.js';
 import { agreesWithExpectation, type ConjectureResult } from '../../runner/result.js';
 // The worker pool, shards and resumed runs.
 import { startCheckRun, workerCount } from '../../runner/threaded-run.js';
-import { heldRecordsForResume, shardFlag } from './check-parallel-flags.js';
+import { heldRecordsForResume, shardFlag } from './shard-resume-flags.js';
+import { checkedNothing, refuseNothingToCheck } from './check-nothing.js';
 import { formatResult, formatSummary } from '../../reports/human.js';
 import { resultDocument } from '../../reports/json.js';
 import { ProgressLine } from '../../reports/progress.js';
@@ -19,6 +24,8 @@ import type { Terminal } from '../terminal.js';
 import type { AddCommand } from './index.js';
 import { createCheckRecorder, type CheckRecorder } from '../../records/check-recorder.js';
 import { approvedPlugins, explainSkippedPlugins } from '../../records/open-project.js';
+import { writeFileAtomic } from '../../records/atomic-write.js';
+import { junitXml } from '../../reports/junit.js';
 import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
 
 interface CheckFlags {
@@ -37,6 +44,7 @@ interface CheckFlags {
   ascii?: boolean;
   resume?: boolean;
   allowPlugins?: boolean;
+  counterexamples?: boolean;
 }
 
 export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
@@ -55,7 +63,8 @@ export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
     .option('--resume', 'skip the sizes and slices the ledger already holds for the conjecture as it is now')
     .option('--json', 'print the result document instead of the report')
     .option('--ledger <PATH>', 'where coverage is recorded (default: hunch-ledger.jsonl in the project root)')
-    .option('--no-ledger', 'record nothing')
+    .option('--no-ledger', 'record nothing (no ledger lines, no counterexample files unless --counterexamples)')
+    .option('--counterexamples', 'write counterexample files even with --no-ledger')
     .option('--junit <FILE>', 'also write a JUnit XML report')
     .option('--id <ID>', 'only the conjecture with this id (repeatable)', collect)
     .option('--ascii', 'plain ASCII pictures')
@@ -67,10 +76,31 @@ export const addCheckCommand: AddCommand = (program: Command, t, setExit) => {
 function limitSizes(r: [string, number, number]): [string, number, number] {
   if (r[2] - r[1] + 1 > MAX_EXHAUSTIVE_SIZES)
     throw new InputError(
-      `--sizes ${r[0]}=${r[1]}..${r[2]} has ${(r[2] - r[1] + 1).toLocaleString('en-US')} sizes; an exhaustive range may have at most ` +
-        `${MAX_EXHAUSTIVE_SIZES.toLocaleString('en-US')}. Check large sizes with --sample instead`,
+      `--sizes ${r[0]}=${r[1]}..${r[2]} has ${formatCount(r[2] - r[1] + 1)} sizes; an exhaustive range may have at most ` +
+        `${formatCount(MAX_EXHAUSTIVE_SIZES)}. Check large sizes with --sample instead`,
     );
   return r;
+}
+
+/** The most random cases per size a run may ask for (a slip of a few zeros would otherwise run for days). */
+export const MAX_SAMPLE_COUNT = 10_000_000;
+
+function limitCount(n: number): number {
+  if (n > MAX_SAMPLE_COUNT)
+    throw new InputError(`--count ${n.toLocaleString('en-US')} is more than the ${MAX_SAMPLE_COUNT.toLocaleString('en-US')} random cases per size a run may draw`);
+  return n;
+}
+
+/** An output file's folder must exist: a typo in a path is reported before the run, not after it. */
+function refuseMissingFolder(file: string, option: string): void {
+  const dir = dirname(resolve(file));
+  let ok = false;
+  try {
+    ok = statSync(dir).isDirectory();
+  } catch {
+    ok = false;
+  }
+  if (!ok) throw new InputError(`${option} ${file}: the folder ${dir} does not exist`);
 }
 
 function buildRequest(paths: string[], f: CheckFlags): RunRequest {
@@ -80,7 +110,7 @@ function buildRequest(paths: string[], f: CheckFlags): RunRequest {
     sizes: (f.sizes ?? []).map((s) => limitSizes(parseRangeOption(s, '--sizes'))),
     sampleRanges: (f.sample ?? []).map((s) => parseRangeOption(s, '--sample')),
     exhaustive: f.exhaustive,
-    count: f.count === undefined ? null : parseCount(f.count, '--count'),
+    count: f.count === undefined ? null : limitCount(parseCount(f.count, '--count')),
     seed: f.seed ?? null,
     budgetMs: f.budget === undefined ? null : parseDuration(f.budget),
     root: null,
@@ -91,11 +121,18 @@ function buildRequest(paths: string[], f: CheckFlags): RunRequest {
 export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal): Promise<number> {
   const req = buildRequest(paths, flags);
   // --workers K (default HUNCH_WORKERS, else every core), --shard I/K.
-  const workers = workerCount(flags.workers === undefined ? undefined : parseCount(flags.workers, '--workers'));
+  let workers = workerCount(flags.workers === undefined ? undefined : parseCount(flags.workers, '--workers'));
+  // More threads than cores only adds memory and switching: use every core, and say so.
+  const cores = Math.max(1, availableParallelism());
+  if (workers > cores) {
+    t.err(`${t.color.yellow('note:')} --workers ${workers} is more than the ${cores} core${cores === 1 ? '' : 's'} of this machine; using ${cores}.\n`);
+    workers = cores;
+  }
   req.shard = shardFlag(flags.shard);
   // The project (hunch.yaml, its plugins, the canonical hash) is opened in this thread and again in
   // the worker. Everything is loaded and validated here first: a bad file exits 2 before anything
   // is recorded.
+  if (flags.junit !== undefined) refuseMissingFolder(flags.junit, '--junit');
   const project = await openCommandProject(t, req.paths[0], { allowPlugins: flags.allowPlugins, quiet: flags.json });
   req.root = project.root;
   req.plugins = approvedPlugins(project);
@@ -106,7 +143,9 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   } catch (e) {
     throw explainSkippedPlugins(e, project);
   }
-  const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger });
+  refuseNothingToCheck(compiled, req, paths);
+  // --no-ledger records nothing: no counterexample file either, unless asked for.
+  const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger, counterexamples: flags.ledger !== false || flags.counterexamples === true });
   req.regression = recorder.regressionCases(compiled);
   if (flags.resume) req.resume = heldRecordsForResume(flags.ledger, project.config.ledger, compiled);
 
@@ -168,7 +207,7 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
     return EXIT.invalid;
   }
   const interrupted = interrupts > 0;
-  if (flags.junit) recorder.junit(flags.junit, results);
+  if (flags.junit) writeFileAtomic(flags.junit, junitXml(results), { what: 'the JUnit report', makeFolder: false });
   for (const w of recorder.warnings) t.err(`${t.color.yellow('warning:')} ${w}\n`);
   recorder.close();
   if (flags.json) t.out(JSON.stringify(resultDocument(results), null, 2) + '\n');
@@ -179,7 +218,12 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
       t.out(t.color.yellow(`Interrupted${left ? `: ${left} conjecture${left === 1 ? '' : 's'} not started` : ''}; what was finished is recorded.\n`));
     }
   }
+  // A "holds" over no case at all (a family found empty only while running) is no pass.
+  const nothing = results.filter(checkedNothing);
+  for (const r of nothing)
+    t.err(`${t.color.red('nothing checked:')} ${r.id} had no case at any size it was checked at; it is not counted as holding.\n`);
   if (interrupted) return EXIT.interrupted;
+  if (nothing.length) return EXIT.contradicted;
   return results.every((r) => agreesWithExpectation(r) || (r.outcome === 'incomplete' && r.expect !== 'fails'))
     ? EXIT.ok
     : EXIT.contradicted;

@@ -5,7 +5,7 @@ import { existsSync } from 'node:fs';
 import { InputError } from '../../base/errors.js';
 import '../../families/index.js';
 import '../../library/index.js';
-import { guessSequence, type GuessReport } from '../../algebra/guessing/index.js';
+import { guessSequence, MAX_GUESS_TERMS, type GuessReport } from '../../algebra/guessing/index.js';
 import { parseScalar, type Scalar } from '../../numbers/rational.js';
 import { openProject } from '../../records/open-project.js';
 import { writeFileAtomic } from '../../records/atomic-write.js';
@@ -13,8 +13,8 @@ import { guessConjectureFile, type GuessOrigin } from '../../reports/guess-conje
 import { formatGuesses, guessReportJson } from '../../reports/guesses.js';
 import { scalarColumn, tabulate } from '../../reports/tabulate.js';
 import { EXIT } from '../errors.js';
+import { encodeValue } from '../../values/operations.js';
 import { collect, parseLetOption, parseRangeOption } from '../options.js';
-import { MAX_TABLE_ROWS } from './table.js';
 import type { AddCommand } from './index.js';
 
 interface GuessFlags {
@@ -86,7 +86,7 @@ export const addGuessCommand: AddCommand = (program, t, setExit) => {
         if (flags.over === undefined) throw new InputError(`the expression needs a range: --over n=1..10`);
         if (flags.offset !== undefined) throw new InputError('--offset goes with --terms; with an expression the range of --over gives the indices');
         const [name, lo, hi] = parseRangeOption(flags.over, '--over');
-        if (hi - lo + 1 > MAX_TABLE_ROWS) throw new InputError(`--over ${flags.over} has more than ${MAX_TABLE_ROWS.toLocaleString('en-US')} rows`);
+        if (hi - lo + 1 > MAX_GUESS_TERMS) throw new InputError(`--over ${flags.over} has ${hi - lo + 1} terms; guessing takes at most ${MAX_GUESS_TERMS} (a guess needs far fewer)`);
         const lets: Array<[string, string]> = (flags.let ?? []).map(parseLetOption);
         if (lets.some(([n]) => n === name)) throw new InputError(`--let ${name}=... names the variable of --over ${flags.over}; give it another name`);
         if (lets.length && flags.write) throw new InputError('--write cannot carry --let values into the file: write them into the expression');
@@ -94,6 +94,7 @@ export const addGuessCommand: AddCommand = (program, t, setExit) => {
         if (flags.divideBy !== undefined) divisorColumn = scalarColumn(tabulate(flags.divideBy, name, lo, hi, lets), name, flags.divideBy);
         origin = { expr, variable: name, lo, hi, divisor: flags.divideBy };
       }
+      if (terms.length > MAX_GUESS_TERMS) throw new InputError(`guessing takes at most ${MAX_GUESS_TERMS} terms; this is ${terms.length} (a guess needs far fewer: narrow --over)`);
       const report: GuessReport = guessSequence(
         { offset: origin.lo, terms },
         divisorColumn ? { divisor: { name: 'c', column: { offset: origin.lo, terms: divisorColumn } } } : {},
@@ -113,7 +114,8 @@ export const addGuessCommand: AddCommand = (program, t, setExit) => {
         written = { file: flags.write, ids: picks.map((k) => `${prefix}-${k}`), to: origin.expr !== undefined ? to : origin.hi };
       }
       if (flags.json) {
-        t.out(JSON.stringify({ ...(origin.expr !== undefined ? { expr: origin.expr, over: origin.variable } : {}), ...guessReportJson(report), ...(written ? { written } : {}) }, null, 2) + '\n');
+        const head = origin.expr !== undefined ? { expr: origin.expr, over: origin.variable, ...(origin.divisor !== undefined ? { divideBy: origin.divisor } : {}) } : {};
+        t.out(JSON.stringify({ ...head, values: terms.map((x) => encodeValue(x)), ...guessReportJson(report), ...(written ? { written } : {}) }, null, 2) + '\n');
       } else {
         const divisor = origin.divisor !== undefined ? `, c(${origin.variable}) = ${origin.divisor}` : '';
         const header = origin.expr !== undefined ? `a(${origin.variable}) = ${origin.expr}${divisor}, ${origin.variable} = ${origin.lo}..${origin.hi}` : 'the terms given';

@@ -1,10 +1,10 @@
 // hunch init [DIR]: start a conjecture folder with a config, an example conjecture and the
 // .gitattributes line that lets coauthors' ledgers merge in git. Never overwrites a file.
 
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
-import { join, relative } from 'node:path';
+import { existsSync, mkdirSync, readFileSync, realpathSync, writeFileSync } from 'node:fs';
+import { isAbsolute, join, relative, resolve, sep } from 'node:path';
 import { InputError } from '../../base/errors.js';
-import { CONFIG_FILE, DEFAULT_LEDGER } from '../../records/project.js';
+import { CONFIG_FILE, DEFAULT_LEDGER } from '../../records/project-root.js';
 import { EXIT } from '../errors.js';
 import type { AddCommand } from './index.js';
 
@@ -103,6 +103,29 @@ export function initProject(dir: string): InitReport {
   return report;
 }
 
+/**
+ * How to run this hunch from the new folder: `npx hunch` when it is installed as a dependency (it
+ * runs from a node_modules folder), else the path of the bin/hunch that is running.
+ */
+export function hunchInvocation(dir: string): string {
+  const bin = process.argv[1] ?? '';
+  let real = bin;
+  try {
+    real = realpathSync(bin);
+  } catch {
+    real = bin;
+  }
+  if (real.split(sep).includes('node_modules')) return 'npx hunch';
+  const rel = relative(resolve(dir), real);
+  // A short relative path reads best; one that climbs far up is clearer absolute.
+  const climbs = rel.split(sep).filter((p) => p === '..').length;
+  return shellWord(isAbsolute(rel) || climbs > 2 ? real : rel.startsWith('.') ? rel : `./${rel}`);
+}
+
+function shellWord(s: string): string {
+  return /^[A-Za-z0-9_@%+=:,./-]+$/.test(s) ? s : `'${s.replace(/'/g, `'\\''`)}'`;
+}
+
 export const addInitCommand: AddCommand = (program, t, setExit) => {
   program
     .command('init')
@@ -113,7 +136,8 @@ export const addInitCommand: AddCommand = (program, t, setExit) => {
       const show = (p: string) => relative(process.cwd(), p) || p;
       for (const p of r.created) t.out(`${t.color.green('created')} ${show(p)}\n`);
       for (const p of r.kept) t.out(`${t.color.dim('kept   ')} ${show(p)} (already there)\n`);
-      t.out(`\nNext: ${dir === '.' ? '' : `cd ${dir} && `}hunch check   (then: hunch status)\n`);
+      const h = hunchInvocation(dir);
+      t.out(`\nNext: ${dir === '.' ? '' : `cd ${shellWord(dir)} && `}${h} check   (then: ${h} status)\n`);
       setExit(EXIT.ok);
     });
 };

@@ -36,9 +36,11 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
         if (topics.includes(what)) {
           showF = false;
           fnFilter = (f) => f.topic === what;
-        } else if (fns.some((f) => f.name === what) || fams.some((f) => f.name === what)) {
-          fnFilter = (f) => f.name === what;
-          famFilter = (f) => f.name === what;
+        } else if (mentions(what, fns, fams)) {
+          // A word of the descriptions (and names): hunch list blocks, hunch list Catalan.
+          const hit = wordMatcher(what);
+          fnFilter = (f) => hit(`${f.name} ${f.topic} ${f.description}`);
+          famFilter = (f) => hit(`${f.name} ${f.description}`);
         } else {
           const s = nearest(what, ['families', 'functions', 'forms', ...topics, ...fns.map((f) => f.name), ...fams.map((f) => f.name)]);
           throw new InputError(`nothing is listed under "${what}"${s ? `; did you mean ${s}?` : ''} (topics: ${topics.join(', ')})`, undefined, what, s);
@@ -69,7 +71,7 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
       if (selF.length) {
         t.out(c.bold('Families') + '\n');
         for (const f of selF) {
-          t.out(`  ${c.cyan(f.signature)}${f.arbitrary ? '' : c.dim('  (no random sampler yet)')}\n    ${f.description}\n    example: ${f.example}\n    source: ${c.dim(f.source)}\n`);
+          t.out(`  ${c.cyan(f.signature)}\n    ${f.description}\n    example: ${f.example}\n    source: ${c.dim(f.source)}\n`);
         }
       }
       if (selFn.length) {
@@ -86,3 +88,15 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
       setExit(EXIT.ok);
     });
 };
+
+/** Whether `text` holds a word starting with `word` (case-insensitive): "block" finds "blocks". */
+function wordMatcher(word: string): (text: string) => boolean {
+  const re = new RegExp(`(^|[^\\p{L}\\p{N}])${word.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`, 'iu');
+  return (text) => re.test(text);
+}
+
+function mentions(word: string, fns: ReturnType<typeof allFunctions>, fams: ReturnType<typeof allFamilies>): boolean {
+  if (word.trim().length < 3) return false;
+  const hit = wordMatcher(word);
+  return fns.some((f) => hit(`${f.name} ${f.topic} ${f.description}`)) || fams.some((f) => hit(`${f.name} ${f.description}`));
+}

@@ -1,7 +1,8 @@
 // hunch merge LEDGER... [-o OUT]: combine ledgers from shards or coauthors, checking coverage.
 
 import { InputError } from '../../base/errors.js';
-import { formatMerge, mergeLedgers } from '../../records/merge.js';
+import { mergeLedgers } from '../../records/merge.js';
+import { formatMerge } from '../../reports/merge-summary.js';
 import { EXIT } from '../errors.js';
 import type { AddCommand } from './index.js';
 

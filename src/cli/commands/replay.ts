@@ -10,6 +10,8 @@ import { valueToText } from '../../values/operations.js';
 import { openCommandProject } from '../project.js';
 import { replayCounterexample } from '../../records/replay.js';
 import { EXIT } from '../errors.js';
+import { witnessLines } from '../../reports/witnesses.js';
+import { parseDuration } from '../options.js';
 import type { AddCommand } from './index.js';
 
 function text(x: unknown): string {
@@ -26,14 +28,17 @@ export const addReplayCommand: AddCommand = (program, t, setExit) => {
     .description('re-evaluate a counterexample file: exit 0 if it still refutes its conjecture, 1 if not')
     .argument('<file>', 'a counterexample file (counterexamples/<id>.yaml)')
     .option('--json', 'print the replay as JSON')
+    .option('--budget <TIME>', 'stop evaluating after this long (default 5m)')
     .option('--allow-plugins', "load the local project's plugins (replay never runs code otherwise)")
-    .action(async (file: string, flags: { json?: boolean; allowPlugins?: boolean }) => {
+    .action(async (file: string, flags: { json?: boolean; allowPlugins?: boolean; budget?: string }) => {
       const c = t.color;
       // The local project: the one holding the file, else the current folder's. Only its own
       // hunch.yaml can bring plugins in.
       const project = await openCommandProject(t, dirname(file), { plugins: false, allowPlugins: flags.allowPlugins, quiet: true });
-      const r = replayCounterexample(file, project);
-      const code = r.verdict === 'refutes' ? EXIT.ok : r.verdict === 'needs-plugins' || r.verdict === 'not-a-case' ? EXIT.invalid : EXIT.contradicted;
+      const budgetMs = flags.budget === undefined ? undefined : parseDuration(flags.budget);
+      // The evaluation runs on this thread: Ctrl-C ends the process at once (nothing is written).
+      const r = replayCounterexample(file, project, { budgetMs });
+      const code = r.verdict === 'stopped' ? EXIT.interrupted : r.verdict === 'refutes' ? EXIT.ok : r.verdict === 'needs-plugins' || r.verdict === 'not-a-case' ? EXIT.invalid : EXIT.contradicted;
       if (flags.json) {
         t.out(JSON.stringify({ ...r, file: undefined, conjecture: r.file.conjecture, hash: r.file.hash }, null, 2) + '\n');
         setExit(code);
@@ -68,9 +73,13 @@ export const addReplayCommand: AddCommand = (program, t, setExit) => {
           t.out(`${c.green('still refutes')} ${id}\n${caseText}\n`);
           for (const [k, v] of Object.entries(r.values)) t.out(`    ${c.cyan(k)} = ${text(v)}\n`);
           if (r.sides) t.out(`    the two sides: ${text(r.sides[0])} and ${text(r.sides[1])}\n`);
+          for (const l of witnessLines(r.witnesses, t)) t.out(`    ${l}\n`);
           break;
         case 'holds':
           t.out(`${c.red('no longer refutes')} ${id}: the claim holds for this case\n${caseText}\n`);
+          break;
+        case 'stopped':
+          t.err(`${c.yellow('stopped:')} ${file}: ${r.error === 'budget' ? 'the budget was reached' : 'interrupted'} before the case was evaluated; nothing is known yet (give more time with --budget)\n`);
           break;
         case 'not-a-case':
           t.err(`${c.red('error:')} ${file}: not a case of this conjecture (${r.error}), so it refutes nothing\n${caseText}\n`);

@@ -2,12 +2,13 @@
 
 import '../../families/index.js';
 import '../../library/index.js';
-import { loadConjectures } from '../../language/conjecture/project.js';
-import { conjectureHash } from '../../records/hash.js';
+import { loadConjectures } from '../../language/conjecture/load-conjectures.js';
+import { conjectureHash } from '../../language/conjecture/conjecture-hash.js';
 import { readLedger } from '../../records/ledger.js';
 import { ALLOW_PLUGINS_HELP, openCommandProject } from '../project.js';
 import { pluginHashes } from '../../records/plugins.js';
-import { computeStatus, formatStatus } from '../../records/status.js';
+import { computeStatus } from '../../records/status.js';
+import { formatStatus } from '../../reports/status-table.js';
 import { TOOL_VERSION } from '../../version.js';
 import { EXIT } from '../errors.js';
 import type { AddCommand } from './index.js';

@@ -1,11 +1,12 @@
 // hunch table EXPR --over NAME=A..B: tabulate an expression and say what it notices.
 
+import { formatCount } from '../../base/format-count.js';
 import { InputError } from '../../base/errors.js';
 import '../../families/index.js';
 import '../../library/index.js';
 import { evaluate } from '../../language/expr/index.js';
 import { detectProperties } from '../../reports/sequence-properties.js';
-import { guessSequence } from '../../algebra/guessing/index.js';
+import { guessSequence, MAX_GUESS_TERMS } from '../../algebra/guessing/index.js';
 import { bestGuessLine, guessJson } from '../../reports/guesses.js';
 import { isScalar, type Scalar } from '../../numbers/rational.js';
 import { encodeValue, valueToText } from '../../values/operations.js';
@@ -35,7 +36,7 @@ export const addTableCommand: AddCommand = (program, t, setExit) => {
       const vars = flags.indeterminates ? flags.indeterminates.split(',').map((s) => s.trim()).filter(Boolean) : [];
       const extra: Array<[string, string]> = (flags.let ?? []).map(parseLetOption);
       if (hi - lo + 1 > MAX_TABLE_ROWS)
-        throw new InputError(`--over ${flags.over} has ${(hi - lo + 1).toLocaleString('en-US')} rows; a table may have at most ${MAX_TABLE_ROWS.toLocaleString('en-US')}`);
+        throw new InputError(`--over ${flags.over} has ${formatCount(hi - lo + 1)} rows; a table may have at most ${formatCount(MAX_TABLE_ROWS)}`);
       const clash = extra.find(([n]) => n === name);
       if (clash) throw new InputError(`--let ${name}=... names the variable of --over ${flags.over}; give it another name`);
       const rows: Array<[number, Value]> = [];
@@ -46,7 +47,7 @@ export const addTableCommand: AddCommand = (program, t, setExit) => {
       }
       const props = detectProperties(rows.map((r) => r[1]));
       // The simplest guess for a column of numbers (hunch guess shows them all, with --write).
-      const best = rows.every((r) => isScalar(r[1])) ? guessSequence({ offset: lo, terms: rows.map((r) => r[1] as Scalar) }).guesses[0] : undefined;
+      const best = rows.length <= MAX_GUESS_TERMS && rows.every((r) => isScalar(r[1])) ? guessSequence({ offset: lo, terms: rows.map((r) => r[1] as Scalar) }).guesses[0] : undefined;
       if (flags.json) {
         t.out(JSON.stringify({ over: name, rows: rows.map(([v, x]) => ({ [name]: v, value: encodeValue(x) })), properties: props, ...(best ? { bestGuess: guessJson(best, 1) } : {}) }, null, 2) + '\n');
       } else {

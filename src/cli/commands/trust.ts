@@ -4,7 +4,7 @@
 
 import { statSync } from 'node:fs';
 import { readProjectConfig } from '../../records/config.js';
-import { findProjectRoot } from '../../records/project.js';
+import { findProjectRoot } from '../../records/project-root.js';
 import { distrustProject, fingerprints, trustListPath, trustProject } from '../../records/trust.js';
 import { InputError } from '../../base/errors.js';
 import { EXIT } from '../errors.js';

@@ -30,10 +30,9 @@ export class FamilyArbitrary<P, T extends Structured> extends fc.Arbitrary<T> {
 
   shrink(value: T, context: unknown): fc.Stream<fc.Value<T>> {
     const family = this.family;
-    if (!family.shrink) return fc.Stream.nil();
     const params = (context === undefined ? this.params : context) as P;
     function* steps(): IterableIterator<fc.Value<T>> {
-      for (const s of family.shrink!(params, value)) yield new fc.Value(s.obj, s.params);
+      for (const s of family.shrink(params, value)) yield new fc.Value(s.obj, s.params);
     }
     return new fc.Stream(steps());
   }

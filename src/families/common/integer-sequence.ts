@@ -3,9 +3,10 @@
 // Each subclass keeps its own field name (parts, letters, elems) and says how to rebuild itself.
 
 import type { Structured } from '../../values/structured.js';
+import type { ObjectKind } from '../../values/types.js';
 
 export abstract class IntegerSequence implements Structured {
-  abstract readonly kind: string;
+  abstract readonly kind: ObjectKind;
   transient = false;
 
   /** The integers, in the object's own order. */

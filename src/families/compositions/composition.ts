@@ -12,6 +12,11 @@ export class Composition extends IntegerSequence {
     super();
   }
 
+  /** The i-th part (1-based), c[i]. */
+  at(i: number): number | undefined {
+    return this.parts[i - 1];
+  }
+
   protected sequence(): readonly number[] {
     return this.parts;
   }

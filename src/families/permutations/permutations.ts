@@ -9,6 +9,7 @@ import { Permutation, inversions, lexCompare, nextPermutation } from './permutat
 import { FamilyArbitrary, fisherYates } from '../common/arbitrary.js';
 import type { Family, Shrunk } from '../family.js';
 import { descentSwaps, entryDeletions, removeFromCycle } from './standardise.js';
+import { cycleShrinks } from './cycleMoves.js';
 
 export interface SizeParam {
   n: number;
@@ -112,6 +113,8 @@ export function* shrinkPermutation(n: number, w: Permutation): Generator<Shrunk<
       seen.add(k);
       yield { params: smaller, size: n - 1, obj: new Permutation(b) };
     }
+    // Steps on whole cycles, to any smaller size (several boxes of the cycle type at once).
+    for (const b of cycleShrinks(a, seen)) yield { params: { n: b.length }, size: b.length, obj: new Permutation(b) };
   }
   for (const b of descentSwaps(a)) yield { params: { n }, obj: new Permutation(b) };
 }

@@ -14,6 +14,11 @@ export class Subset implements Structured {
   /** Trusts that `elems` is strictly increasing positive integers; use Subset.from for user data. */
   constructor(readonly elems: number[]) {}
 
+  /** The i-th smallest element (1-based), S[i]. */
+  at(i: number): number | undefined {
+    return this.elems[i - 1];
+  }
+
   /** The number of elements. */
   get size(): number {
     return this.elems.length;

@@ -1,14 +1,15 @@
 // Compiling a conjecture spec into closures over a frame (CompiledConjecture): every name, arity
 // and type problem is found here, before anything runs.
 
-import { createHash } from 'node:crypto';
 import { InputError } from '../../base/errors.js';
 import type { Expr } from '../expr/ast.js';
 import { Compiler, type DefineDecl } from '../expr/index.js';
 import { textOrigin } from '../expr/origin.js';
 import { parseDefineHeader, parseExpression } from '../expr/parser.js';
 import type { BindingSource, CompiledBinding, CompiledConjecture, Fn } from './compiled.js';
+import type { TypeName } from '../../values/types.js';
 import type { ConjectureSpec } from './conjecture.js';
+import { conjectureHash } from './conjecture-hash.js';
 import type { ExprText } from './yaml-reader.js';
 
 const COMPARISONS = new Set(['==', '!=', '<', '<=', '>', '>=']);
@@ -53,20 +54,6 @@ export function parseDefines(spec: ConjectureSpec): DefineDecl[] {
   });
 }
 
-/**
- * How a compiled conjecture gets its hash. The records layer installs the canonical one
- * (records/hash.ts, with plugin file hashes) when a project is opened; the language cannot import
- * it (records sit above it), so it is injected. The default here only serves code that compiles
- * without opening a project (some unit tests).
- */
-export type HashFunction = (spec: ConjectureSpec) => string;
-let hashFunction: HashFunction = (spec) =>
-  createHash('sha256').update(JSON.stringify([spec.document, spec.defineDocuments])).digest('hex');
-
-export function setConjectureHash(f: HashFunction): void {
-  hashFunction = f;
-}
-
 function sampleBounds(compiler: Compiler, name: string, e: ExprText): { lo: Fn; hi: Fn } {
   const ast = parse(e);
   if (ast.type === 'range') return { lo: compiler.compile(ast.lo).fn, hi: compiler.compile(ast.hi).fn };
@@ -84,7 +71,7 @@ export function compileConjecture(spec: ConjectureSpec): CompiledConjecture {
   for (const b of spec.bindings) {
     const ast = parse(b.source);
     let source: BindingSource;
-    let type = 'any';
+    let type: TypeName = 'any';
     if (ast.type === 'int') {
       const f = compiler.compile(ast).fn;
       source = { kind: 'range', lo: f, hi: f };
@@ -149,7 +136,7 @@ export function compileConjecture(spec: ConjectureSpec): CompiledConjecture {
 
   return {
     spec,
-    hash: hashFunction(spec),
+    hash: conjectureHash(spec),
     frameSize: compiler.frameSize(),
     bindings,
     sizeIndex,

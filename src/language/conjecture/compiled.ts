@@ -4,7 +4,7 @@ import type { SourcePos } from '../../base/errors.js';
 import type { Family } from '../../families/family.js';
 import type { ConjectureSpec } from './conjecture.js';
 
-import type { Fn, Frame } from '../expr/frame.js';
+import type { Fn } from '../expr/frame.js';
 
 export type { Fn, Frame } from '../expr/frame.js';
 

@@ -1,8 +1,10 @@
 // A conjecture as written in its file, before compilation (FORMAT.md §1).
 
 import type { SourcePos } from '../../base/errors.js';
-import type { Expectation } from '../../runner/result.js';
 import type { ExprText } from './yaml-reader.js';
+
+/** What a conjecture's author expects: that it holds, that it fails, or nothing (open). */
+export type Expectation = 'holds' | 'fails' | 'open';
 
 export interface BindingSpec {
   name: string;

@@ -6,7 +6,7 @@ import { InputError } from '../../base/errors.js';
 import { nearest } from '../../base/suggest.js';
 import { CONJECTURE_KEYS, ConjectureSpec, DefineSpec, EXPECTATIONS, SampleSpec } from './conjecture.js';
 import { mapEntries, scalarString, seqItems, YamlFile } from './yaml-reader.js';
-import type { Expectation } from '../../runner/result.js';
+import type { Expectation } from './conjecture.js';
 
 const ID = /^[a-z0-9][a-z0-9-]*$/;
 const NAME = /^[A-Za-z_][A-Za-z0-9_]*$/;
@@ -61,14 +61,27 @@ function readDefines(y: YamlFile, node: Node | null): DefineSpec[] {
   });
 }
 
+function readIndeterminates(y: YamlFile, node: Node | null): string[] {
+  const items = isScalar(node) ? [node] : seqItems(y, node, 'indeterminates');
+  return items.map((it) => {
+    const name = scalarString(y, it, 'an indeterminate');
+    if (!NAME.test(name)) throw new InputError(`"${name}" is not a valid indeterminate name`, y.nodePos(it), name);
+    return name;
+  });
+}
+
 export interface LoadedFile {
   file: string;
   conjectures: ConjectureSpec[];
 }
 
+/** The longest conjecture id (it names a file: most file systems allow 255 bytes). */
+export const MAX_ID_LENGTH = 200;
+
 export function loadConjectureFile(file: string, source: string): LoadedFile {
   const y = new YamlFile(file, source);
   const fileDefines: DefineSpec[] = [];
+  const fileIndeterminates: string[] = [];
   const defineDocuments: Record<string, unknown>[] = [];
   const pending: Array<{ doc: Document.Parsed; node: Node }> = [];
 
@@ -79,18 +92,22 @@ export function loadConjectureFile(file: string, source: string): LoadedFile {
     noAliases(y, doc);
     const keys = mapEntries(y, node, 'the document').map((e) => e.key);
     if (keys.includes('conjecture')) pending.push({ doc, node });
-    else if (keys.length === 1 && keys[0] === 'define') {
-      fileDefines.push(...readDefines(y, mapEntries(y, node, 'the document')[0].value));
+    else if (keys.length >= 1 && keys.every((k) => k === 'define' || k === 'indeterminates')) {
+      // A define document: shared definitions, and the indeterminates they (and the conjectures) use.
+      for (const e of mapEntries(y, node, 'the document')) {
+        if (e.key === 'define') fileDefines.push(...readDefines(y, e.value));
+        else for (const name of readIndeterminates(y, e.value)) if (!fileIndeterminates.includes(name)) fileIndeterminates.push(name);
+      }
       defineDocuments.push(plain(doc));
     } else {
       const entries = mapEntries(y, node, 'the document');
       // Suggest only for a key that is not already right (a misspelt "conjecture:" or "define:").
-      const near = entries.find((e) => e.key !== 'define' && e.key !== 'conjecture' && nearest(e.key, ['conjecture', 'define']) !== undefined);
+      const near = entries.find((e) => e.key !== 'define' && e.key !== 'conjecture' && e.key !== 'indeterminates' && nearest(e.key, ['conjecture', 'define']) !== undefined);
       const s = near ? nearest(near.key, ['conjecture', 'define']) : undefined;
-      const extra = entries.find((e) => e.key !== 'define');
+      const extra = entries.find((e) => e.key !== 'define' && e.key !== 'indeterminates');
       if (!near && keys.includes('define') && extra)
         throw new InputError(
-          `a "define:" document holds only definitions; "${extra.key}" belongs in a conjecture document`,
+          `a "define:" document holds only definitions (and the indeterminates: they use); "${extra.key}" belongs in a conjecture document`,
           y.nodePos(extra.keyNode),
           extra.key,
         );
@@ -104,7 +121,7 @@ export function loadConjectureFile(file: string, source: string): LoadedFile {
     }
   }
 
-  const conjectures = pending.map(({ doc, node }) => readConjecture(y, doc, node, fileDefines, defineDocuments));
+  const conjectures = pending.map(({ doc, node }) => readConjecture(y, doc, node, fileDefines, defineDocuments, fileIndeterminates));
   return { file, conjectures };
 }
 
@@ -114,6 +131,7 @@ function readConjecture(
   node: Node,
   fileDefines: DefineSpec[],
   defineDocuments: Record<string, unknown>[],
+  fileIndeterminates: string[],
 ): ConjectureSpec {
   const entries = mapEntries(y, node, 'the conjecture');
   const get = (k: string) => entries.find((e) => e.key === k);
@@ -123,6 +141,9 @@ function readConjecture(
   const id = scalarString(y, idE.value, 'conjecture (the id)');
   if (!ID.test(id))
     throw new InputError(`the id "${id}" may use only lowercase letters, digits and '-'`, y.nodePos(idE.value), id);
+  // The id names counterexamples/<id>.yaml: keep it well inside every file system's name limit.
+  if (id.length > MAX_ID_LENGTH)
+    throw new InputError(`the id is ${id.length} characters long; an id may have at most ${MAX_ID_LENGTH}`, y.nodePos(idE.value), id.slice(0, 40) + '...');
 
   const expectE = get('expect');
   let expect: Expectation = 'open';
@@ -138,16 +159,10 @@ function readConjecture(
   const claimE = get('claim');
   if (!claimE || claimE.value === null) throw new InputError(`conjecture ${id} has no claim`, y.nodePos(idE.keyNode));
 
-  const indeterminates: string[] = [];
+  // The file's define documents may declare indeterminates for every conjecture of the file.
+  const indeterminates: string[] = [...fileIndeterminates];
   const indE = get('indeterminates');
-  if (indE) {
-    const items = isScalar(indE.value) ? [indE.value] : seqItems(y, indE.value, 'indeterminates');
-    for (const it of items) {
-      const name = scalarString(y, it, 'an indeterminate');
-      if (!NAME.test(name)) throw new InputError(`"${name}" is not a valid indeterminate name`, y.nodePos(it), name);
-      indeterminates.push(name);
-    }
-  }
+  if (indE) for (const name of readIndeterminates(y, indE.value)) if (!indeterminates.includes(name)) indeterminates.push(name);
 
   const forE = get('for');
   const bindings = forE

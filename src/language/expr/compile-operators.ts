@@ -7,7 +7,9 @@ import * as ops from '../../library/operators.js';
 import type { TypeName } from '../../values/types.js';
 import type { Value } from '../../values/value.js';
 import type { Expr, ExprOf } from './ast.js';
-import { type CompileContext, errorAt, posOf } from './compile-scope.js';
+import { type CompileContext, errorAt, posOf, unknownName } from './compile-scope.js';
+import { getFunction } from '../../library/registry.js';
+import { getFamily } from '../../families/registry.js';
 import type { Compiled, Fn, Frame } from './frame.js';
 import { at1, at2, indexValue, notBoolean, short } from './runtime.js';
 import { describeType, equalityPossible, isNumber, isNumericish, join, mayAccept } from './statictypes.js';
@@ -302,13 +304,17 @@ export function compileIndex(cx: CompileContext, e: ExprOf<'index'>): Compiled {
   const t = e.target;
   if (t.type === 'name' && cx.indeterminates.has(t.name) && !cx.layout.lookup(t.name)) return indexedVariable(cx, t.name, e);
   if (e.index2) throw errorAt(cx, 'two indices [i, j] name a doubly indexed indeterminate such as z[i, j] (declared under indeterminates:); to index a list twice write L[i][j]', e);
+  if (t.type === 'name' && !cx.layout.lookup(t.name) && !cx.defines.has(t.name) && !cx.indeterminates.has(t.name) && !getFunction(t.name) && !getFamily(t.name)) {
+    throw unknownName(cx, t.name, t, false, true);
+  }
   const target = cx.expr(t), idx = cx.expr(e.index);
-  const notIndexable = ['integer', 'rational', 'number', 'boolean', 'polynomial', 'scalarOrPolynomial', 'function', 'distribution'];
+  // A polynomial may be an indeterminate passed as an argument (y given x): y[i] is then x[i], checked when it runs.
+  const notIndexable = ['integer', 'rational', 'number', 'boolean', 'function', 'distribution'];
   if (notIndexable.includes(target.type)) throw errorAt(cx, `${describeType(target.type)} cannot be indexed`, t);
   if (!mayAccept('integer', idx.type)) throw errorAt(cx, `an index must be an integer, but this is ${describeType(idx.type)}`, e.index);
   const tf = target.fn, xf = idx.fn;
   const pos = posOf(cx, e);
-  const type = target.type === 'permutation' ? 'integer' : target.type === 'string' ? 'string' : 'any';
+  const type = target.type === 'permutation' ? 'integer' : target.type === 'string' ? 'string' : target.type === 'polynomial' ? 'polynomial' : 'any';
   return { fn: (fr) => indexValue(tf(fr), xf(fr), pos), type };
 }
 

@@ -67,6 +67,13 @@ export interface CompileContext {
   layout: Layout;
   callDepth: number;
   expr(e: Expr): Compiled;
+  /** The hint for an unknown name that looks like a polynomial variable. */
+  declareIndeterminate(name: string, declared: readonly string[]): string;
+}
+
+/** A name that is plausibly a polynomial variable: one letter, perhaps with digits (q, t, x, y2), or one used as x[i]. */
+export function looksLikeIndeterminate(name: string, indexed: boolean): boolean {
+  return indexed || /^[A-Za-z][0-9]*$/.test(name);
 }
 
 export function errorAt(cx: CompileContext, message: string, e: { start: number; end: number; src?: Expr['src'] }, suggestion?: string): InputError {
@@ -77,11 +84,15 @@ export function posOf(cx: CompileContext, e: Expr): SourcePos | undefined {
   return sourcePos(e.src, e.start) ?? { file: cx.file, line: 0, column: 0 };
 }
 
-export function unknownName(cx: CompileContext, name: string, e: Expr, asCall: boolean): InputError {
+export function unknownName(cx: CompileContext, name: string, e: Expr, asCall: boolean, indexed = false): InputError {
   const candidates = asCall
     ? [...cx.defines.keys(), ...REDUCERS, ...allFunctions().map((f) => f.name), ...allFamilies().map((f) => f.name), ...cx.layout.visibleNames()]
     : [...cx.layout.visibleNames(), ...cx.indeterminates, ...cx.defines.keys(), ...allFunctions().map((f) => f.name)];
   const near = nearest(name, candidates);
   const what = asCall ? `unknown function ${name}` : `unknown name ${name}`;
+  if (!asCall && looksLikeIndeterminate(name, indexed)) {
+    const declare = cx.declareIndeterminate(name, [...cx.indeterminates]);
+    return errorAt(cx, `${what}${near ? ` (did you mean ${near}?)` : ''}; ${declare}`, e, declare);
+  }
   return errorAt(cx, near ? `${what}; did you mean ${near}?` : what, e, near);
 }

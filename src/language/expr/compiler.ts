@@ -44,6 +44,13 @@ export interface CompilerOptions {
   file: string;
   indeterminates: string[];
   defines: DefineDecl[];
+  /** How to declare a polynomial variable where these expressions come from (default: the conjecture's indeterminates: key). */
+  declareIndeterminate?: (name: string, declared: readonly string[]) => string;
+}
+
+/** The hint for an unknown name that looks like a polynomial variable, in a conjecture file. */
+export function declareInFile(name: string, declared: readonly string[]): string {
+  return `if ${name} is a polynomial variable, declare it: indeterminates: [${[...declared, name].join(', ')}]`;
 }
 
 const BOOLEAN_OPS = new Set(['and', 'or', 'implies', 'iff']);
@@ -66,6 +73,7 @@ export class Compiler {
       layout: this.global,
       callDepth: 0,
       expr: (e) => compileExpr(cx, e),
+      declareIndeterminate: opts.declareIndeterminate ?? declareInFile,
     };
     this.cx = cx;
     for (const d of opts.defines) {

@@ -14,6 +14,7 @@ import type { Value } from '../../values/value.js';
 import type { Reducer } from './ast.js';
 import type { Fn, Frame } from './frame.js';
 import { at2, located, notBoolean, short } from './runtime.js';
+import { tick } from './stop-poll.js';
 
 
 export type SourcePlan =
@@ -33,7 +34,7 @@ interface Iterable_ {
 }
 
 /** The elements of a value used as a source. */
-function elementsOf(v: Value, pos: SourcePos | undefined): readonly Value[] {
+export function elementsOf(v: Value, pos: SourcePos | undefined): readonly Value[] {
   if (Array.isArray(v)) return v;
   if (isStructured(v) && typeof (v as unknown as Iterable_).elements === 'function') {
     try {
@@ -58,6 +59,7 @@ function iterator(g: GenPlan): (fr: Frame, inner: Visit) => boolean {
       return (fr, inner) => {
         const b = hi(fr);
         for (let i = lo(fr); i <= b; i++) {
+          tick();
           fr[slot] = i;
           if (where && !where(fr)) continue;
           if (inner()) return true;
@@ -70,6 +72,7 @@ function iterator(g: GenPlan): (fr: Frame, inner: Visit) => boolean {
       return (fr, inner) => {
         const p = prepare(fr);
         const visit = (obj: Value) => {
+          tick();
           fr[slot] = obj;
           if (where && !where(fr)) return false;
           return inner();
@@ -86,6 +89,7 @@ function iterator(g: GenPlan): (fr: Frame, inner: Visit) => boolean {
       return (fr, inner) => {
         const list = elementsOf(fn(fr), pos);
         for (let i = 0; i < list.length; i++) {
+          tick();
           fr[slot] = list[i];
           if (where && !where(fr)) continue;
           if (inner()) return true;

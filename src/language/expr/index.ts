@@ -48,7 +48,10 @@ export { Compiler, MAX_CALL_DEPTH, type Compiled, type CompiledSource, type Defi
  * each seeing the earlier ones). `indeterminates` are the polynomial variables it may use.
  */
 export function evaluate(text: string, lets: Array<[string, string]> = [], indeterminates: string[] = []): Value {
-  const c = new Compiler({ file: '<expression>', indeterminates, defines: [] });
+  const c = new Compiler({
+    file: '<expression>', indeterminates, defines: [],
+    declareIndeterminate: (name, declared) => `if ${name} is a polynomial variable, pass --indeterminates ${[...declared, name].join(',')}`,
+  });
   const steps: Array<[number, (fr: Value[]) => Value]> = [];
   for (const [name, t] of lets) {
     const compiled = c.compile(parseExpression(t, textOrigin(`--let ${name}`, t)));

@@ -1,8 +1,11 @@
 // Helpers the compiled closures call at run time: attaching positions to errors, the boolean and
 // type guards, indexing. Kept out of the closures themselves so those stay small.
 
-import { EvalError, InputError, type SourcePos } from '../../base/errors.js';
+import { EvalError, InputError, StopSignal, type SourcePos } from '../../base/errors.js';
 import { Matrix } from '../../algebra/matrix.js';
+import { indexedVariable, Polynomial } from '../../algebra/polynomial.js';
+import { isBareVar, varName } from '../../algebra/variables.js';
+import { INDEX_UNITS, lengthOf } from '../../library/lists.js';
 import { valueToText } from '../../values/operations.js';
 import { isStructured, type Structured } from '../../values/structured.js';
 import { article, typeOf } from '../../values/types.js';
@@ -18,9 +21,12 @@ export function located(e: unknown, pos: SourcePos | undefined): unknown {
     if (!e.pos) e.pos = pos;
     return e;
   }
-  if (e instanceof InputError) return e;
+  if (e instanceof InputError || e instanceof StopSignal) return e;
   if (e instanceof RangeError && /call stack/i.test(e.message)) {
     return new EvalError('the computation nested too deeply (a recursion without end?)', pos);
+  }
+  if (e instanceof RangeError && /BigInt|Invalid array length|Array buffer allocation/i.test(e.message)) {
+    return new EvalError('a number or list here is too large to compute exactly (it would not fit in memory)', pos);
   }
   if (e instanceof Error) return new EvalError(`internal error: ${e.message}`, pos);
   return e;
@@ -91,11 +97,32 @@ export function indexValue(t: Value, i: Value, pos: SourcePos | undefined): Valu
       throw located(e, pos);
     }
     if (v === undefined) {
-      const n = (t as { n?: unknown; length?: unknown }).n ?? (t as { length?: unknown }).length;
-      if (typeof n === 'number') outOfRange(i, n, short(t), pos);
+      let count: number | null = null;
+      try {
+        count = lengthOf(t);
+      } catch {
+        /* a kind without a length */
+      }
+      if (count !== null) {
+        const units = INDEX_UNITS[(t as Structured).kind] ?? 'entries';
+        const unit = count !== 1 ? units : ({ entries: 'entry', crosses: 'cross' } as Record<string, string>)[units] ?? units.replace(/s$/, '');
+        throw new EvalError(`index ${i} is out of range: ${short(t)} has ${count} ${unit}${count ? `: indices 1..${count}` : ''}`, pos);
+      }
       throw new EvalError(`index ${i} is out of range for ${short(t)}`, pos);
     }
     return v;
   }
+  if (t instanceof Polynomial) {
+    // An indeterminate passed as an argument (a define's parameter y given x) indexes like x itself.
+    const base = bareIndeterminate(t);
+    if (base !== null) return indexedVariable(base, i);
+    throw new EvalError(`a polynomial cannot be indexed (${short(t)}); only an indeterminate such as x can: x[i] is its i-th variable`, pos);
+  }
   throw new EvalError(`${article(typeOf(t))} cannot be indexed (${short(t)})`, pos);
+}
+
+/** The name of a polynomial that is one bare indeterminate (x, not x[2] or 2*x), else null. */
+export function bareIndeterminate(p: Polynomial): string | null {
+  if (p.length !== 1 || p.nv !== 1 || p.exps[0] !== 1 || p.coefs[0] !== 1 || !isBareVar(p.vars[0])) return null;
+  return varName(p.vars[0]);
 }

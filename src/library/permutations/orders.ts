@@ -9,7 +9,7 @@
 
 import { fail } from '../../base/errors.js';
 import { Permutation } from '../../families/permutations/permutation.js';
-import { defineFunction } from '../registry.js';
+import { defineFunction, type ParamDecl } from '../registry.js';
 import type { Value } from '../../values/value.js';
 import { Scratch } from './scratch.js';
 
@@ -46,7 +46,7 @@ function sameSize(call: string, u: Value, v: Value): [number[], number[]] {
 }
 
 const topic = 'permutations';
-const params = [
+const params: ParamDecl[] = [
   { name: 'u', type: 'permutation' },
   { name: 'v', type: 'permutation' },
 ];

@@ -6,7 +6,7 @@ import { fail } from '../../base/errors.js';
 import { Permutation } from '../../families/permutations/permutation.js';
 import type { Value } from '../../values/value.js';
 import { valueToText } from '../../values/operations.js';
-import { defineFunction } from '../registry.js';
+import { defineFunction, type ParamDecl } from '../registry.js';
 import { Scratch } from './scratch.js';
 
 /**
@@ -114,7 +114,7 @@ export function patternCount(a: readonly number[], pat: Pattern): number {
 }
 
 const topic = 'permutations';
-const params = [
+const params: ParamDecl[] = [
   { name: 'w', type: 'permutation' },
   { name: 'p', type: ['permutation', 'list', 'string'] },
 ];

@@ -4,7 +4,7 @@
 
 import { inversions, Permutation } from '../../families/permutations/permutation.js';
 import { Partition } from '../../families/partitions/partition.js';
-import { defineFunction } from '../registry.js';
+import { defineFunction, type ParamDecl } from '../registry.js';
 import type { Value } from '../../values/value.js';
 import { Scratch } from './scratch.js';
 import { Word } from '../../families/words/word.js';
@@ -12,11 +12,11 @@ import { Tableau } from '../../families/tableaux/tableau.js';
 import { tableauDescents } from '../tableaux/descents.js';
 
 const topic = 'permutations';
-const P = [{ name: 'w', type: 'permutation' }];
+const P: ParamDecl[] = [{ name: 'w', type: 'permutation' }];
 /** inv, maj, des and descents also take words (sequences with repeated letters). */
-const PW = [{ name: 'w', type: ['permutation', 'word'] }];
+const PW: ParamDecl[] = [{ name: 'w', type: ['permutation', 'word'] }];
 /** maj, des and descents also take standard tableaux (i + 1 in a lower row than i). */
-const PWT = [{ name: 'w', type: ['permutation', 'word', 'tableau'] }];
+const PWT: ParamDecl[] = [{ name: 'w', type: ['permutation', 'word', 'tableau'] }];
 const arr = (w: Value): number[] => (w instanceof Word ? w.letters : (w as Permutation).a);
 
 /** Fenwick-tree counts for long permutations, where the quadratic loop would be slow. */

@@ -3,10 +3,10 @@
 // records.
 
 import { Permutation } from '../../families/permutations/permutation.js';
-import { defineFunction } from '../registry.js';
+import { defineFunction, type ParamDecl } from '../registry.js';
 
 const topic = 'permutations';
-const P = [{ name: 'w', type: 'permutation' }];
+const P: ParamDecl[] = [{ name: 'w', type: 'permutation' }];
 
 export function complement(a: readonly number[]): number[] {
   const n = a.length;

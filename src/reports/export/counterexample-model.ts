@@ -87,6 +87,8 @@ function recheckWords(r: ReplayResult | null, error: string | null): { ok: boole
       return { ok: false, text: `re-checked by this export: not a case of this conjecture (${r.error ?? 'it is outside its families or ranges'}), so it is not a counterexample` };
     case 'needs-plugins':
       return { ok: false, text: `not re-checked: the conjecture uses plugin functions this project does not load (${r.missingPlugins.flatMap((p) => p.functions).join(', ')})` };
+    case 'stopped':
+      return { ok: false, text: `not re-checked: the replay was stopped (${r.error ?? 'budget'}) before the case was evaluated` };
     default:
       return { ok: false, text: `re-checked by this export: the case cannot be evaluated (${r.error ?? 'error'})` };
   }

@@ -3,7 +3,8 @@
 // only sampled (evidence, not proof), staleness, time spent, and its counterexample if one is saved.
 
 import type { LedgerRecord } from '../../records/ledger.js';
-import { exhaustiveText, sampledText, type ConjectureStatus } from '../../records/status.js';
+import type { ConjectureStatus } from '../../records/status.js';
+import { exhaustiveText, sampledText } from '../status-table.js';
 import type { CounterexampleModel } from './counterexample-model.js';
 
 export type SizeState = 'verified' | 'failed' | 'sampled' | 'sample-failed' | 'unfinished';

@@ -2,7 +2,7 @@
 // fonts, styles or images: everything is inline, so it opens from a file:// URL and prints.
 
 import { TOOL_VERSION } from '../../version.js';
-import { formatMs } from '../coverage.js';
+import { formatMs } from '../coverage-text.js';
 import type { CounterexampleModel, ShownValue } from '../export/counterexample-model.js';
 import type { NotebookEntry, NotebookModel } from '../export/notebook-model.js';
 import { EVIDENCE_NOTE } from '../export/wording.js';

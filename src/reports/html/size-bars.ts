@@ -2,7 +2,7 @@
 
 import { xmlEscape } from '../markup/xml.js';
 import type { SizeCell, SizeState } from '../export/notebook-model.js';
-import { formatCount } from '../coverage.js';
+import { formatCount } from '../../base/format-count.js';
 
 export const STATE_COLOURS: Record<SizeState, string> = {
   verified: '#2e7d32',

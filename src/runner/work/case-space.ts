@@ -136,7 +136,8 @@ export function enumerateCaseRange(
     const b = bs[i];
     if (fixed.has(i)) {
       frame[b.slot] = fixed.get(i)!;
-      return level(i + 1, base);
+      level(i + 1, base);
+      return;
     }
     const src = b.source;
     if (indep[i]) {

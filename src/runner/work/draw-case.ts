@@ -22,7 +22,6 @@ export function drawBinding(b: CompiledBinding, frame: Frame, rng: fc.Random, ra
     frame[b.slot] = list[rng.nextInt(0, list.length - 1)];
   } else {
     const fam = src.family;
-    if (!fam.arbitrary) fail(`the family ${fam.name} has no random sampler yet; leave ${b.name} out of sample:`);
     const p = fam.prepare(src.args.map((f) => f(frame)));
     if (fam.count(p) === 0n) fail(`${fam.name}(...) is empty for ${b.name}; nothing to sample`);
     frame[b.slot] = fam.arbitrary(p).generate(rng, undefined).value as Value;

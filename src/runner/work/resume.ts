@@ -3,7 +3,8 @@
 // over in this plain shape (a structural subset of its ledger record), keeping the runner below it.
 
 import type { Phase } from '../result.js';
-import { shardText, type Shard } from './slicing.js';
+import { sizeCover, sizeKey } from './size-cover.js';
+import { parseShard, shardText, type Shard } from './slicing.js';
 
 export interface HeldRecord {
   id: string;
@@ -16,6 +17,8 @@ export interface HeldRecord {
   shard?: string;
   seed?: string;
   partial?: boolean;
+  /** When it was written (ISO time). */
+  at?: string;
 }
 
 /** Counts held by the ledger for some part of a size. */
@@ -25,9 +28,6 @@ export interface HeldCounts {
   /** False when the ledger covers the whole size but not in a way that gives our shard's own counts. */
   known?: boolean;
 }
-
-const sizeKey = (size: Record<string, number>) =>
-  JSON.stringify(Object.fromEntries(Object.entries(size).sort((a, b) => (a[0] < b[0] ? -1 : 1))));
 
 /** Only finished work without a failure can be skipped: a failing piece is re-run to find its counterexample. */
 const usable = (r: HeldRecord) => !r.partial && r.failures === 0;
@@ -50,7 +50,7 @@ export class ResumeIndex {
 
   /**
    * The counts of an exhaustive size (or of our shard of it) when the ledger already covers it:
-   * a record of the whole, every slice a/b for some b, or (for a shard) that shard's record.
+   * for a shard, that shard's record; else the size's cover (src/runner/work/size-cover.ts).
    */
   exhaustiveCovered(size: Record<string, number>, shard: Shard | null): HeldCounts | null {
     const rs = this.records('exhaustive', size);
@@ -58,35 +58,24 @@ export class ResumeIndex {
       const mine = rs.find((r) => r.shard === shardText(shard));
       if (mine) return { cases: mine.cases, skipped: mine.skipped };
     }
-    const whole = rs.find((r) => r.shard === undefined);
-    if (whole) return shard ? { cases: 0, skipped: 0, known: false } : { cases: whole.cases, skipped: whole.skipped };
-    const byK = new Map<number, Map<number, HeldRecord>>();
-    for (const r of rs) {
-      if (r.shard === undefined) continue;
-      const [i, k] = r.shard.split('/').map(Number);
-      if (!byK.has(k)) byK.set(k, new Map());
-      byK.get(k)!.set(i, r);
+    const cover = sizeCover(rs).complete;
+    if (!cover) return null;
+    // Covered whole, but not in a way that gives our shard's own counts.
+    if (shard) return { cases: 0, skipped: 0, known: false };
+    let cases = 0, skipped = 0;
+    for (const r of cover) {
+      cases += r.cases;
+      skipped += r.skipped;
     }
-    for (const [k, m] of byK) {
-      if (m.size !== k) continue;
-      if (shard) return { cases: 0, skipped: 0, known: false };
-      let cases = 0, skipped = 0;
-      for (const r of m.values()) {
-        cases += r.cases;
-        skipped += r.skipped;
-      }
-      return { cases, skipped };
-    }
-    return null;
+    return { cases, skipped };
   }
 
   /** Slices (0-based) of s slices that the ledger holds as records "j/s", with their counts. */
   exhaustiveSlices(size: Record<string, number>, s: number): Map<number, HeldCounts> {
     const out = new Map<number, HeldCounts>();
     for (const r of this.records('exhaustive', size)) {
-      if (r.shard === undefined) continue;
-      const [i, k] = r.shard.split('/').map(Number);
-      if (k === s) out.set(i - 1, { cases: r.cases, skipped: r.skipped });
+      const slice = r.shard === undefined ? null : parseShard(r.shard);
+      if (slice && slice.of === s) out.set(slice.index - 1, { cases: r.cases, skipped: r.skipped });
     }
     return out;
   }

@@ -24,6 +24,7 @@ export const MAX_BASE_SLICES = 256;
  */
 export const MAX_BASE_SLICES_WITHOUT_RANGES = 16;
 
+/** The text of a shard or slice, "3/8": the one printer (parseShard reads it back). */
 export function shardText(s: Shard): string {
   return `${s.index}/${s.of}`;
 }
@@ -69,11 +70,16 @@ export function chunksOfShard(m: number, shard: Shard | null): number[] {
   return slicesOfShard(m, shard);
 }
 
-/** Parse "I/K" (1 <= I <= K); null when it is not one. */
-export function parseShardOption(text: string): Shard | null {
-  const m = /^\s*([1-9][0-9]*)\s*\/\s*([1-9][0-9]*)\s*$/.exec(text);
+/** Parse "I/K" (1 <= I <= K, no spaces, no leading zeros): the one reader of shard and slice texts. */
+export function parseShard(text: string): Shard | null {
+  const m = /^([1-9][0-9]*)\/([1-9][0-9]*)$/.exec(text);
   if (!m) return null;
   const index = Number(m[1]), of = Number(m[2]);
   if (!Number.isSafeInteger(of) || index > of) return null;
   return { index, of };
+}
+
+/** The --shard option: "I/K", with spaces allowed around the numbers. */
+export function parseShardOption(text: string): Shard | null {
+  return parseShard(text.trim().replace(/\s*\/\s*/, '/'));
 }

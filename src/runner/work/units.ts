@@ -3,7 +3,8 @@
 // size (a fixed number of random cases from its own seed), and the shrink of a sampled failure.
 // Each returns plain counts and at most one case; `executeUnit` is what every executor calls.
 
-import { EvalError } from '../../base/errors.js';
+import { EvalError, StopSignal } from '../../base/errors.js';
+import { withStopPoll } from '../../language/expr/stop-poll.js';
 import type { CompiledConjecture, Frame } from '../../language/conjecture/compiled.js';
 import { own } from '../../values/operations.js';
 import type { Value } from '../../values/value.js';
@@ -167,10 +168,14 @@ export function runSlice(cc: CompiledConjecture, size: number | null, range: [bi
     return false;
   };
   try {
-    if (range === null) enumerateCases(cc, frame, fixed, onCase);
-    else enumerateCaseRange(cc, frame, fixed, range[0], range[1], onCase);
+    // A long case polls the stop signal from inside its loops (language/expr/stop-poll.ts).
+    withStopPoll(ctl.shouldStop, () => {
+      if (range === null) enumerateCases(cc, frame, fixed, onCase);
+      else enumerateCaseRange(cc, frame, fixed, range[0], range[1], onCase);
+    });
   } catch (e) {
-    out.fault = errorInfo(e, encodeBindings(cc, frame));
+    if (e instanceof StopSignal) out.stopped = e.reason; // the case in progress is not counted
+    else out.fault = errorInfo(e, encodeBindings(cc, frame));
   }
   if (out.best) out.bestEncoded = encodeBindings(cc, frameFor(cc, out.best));
   ctl.onProgress?.(visited);
@@ -208,7 +213,7 @@ export function runSampleChunk(
         if (i === cc.sizeIndex) frame[sizeB.slot] = size;
         else drawBinding(cc.bindings[i], frame, rng, settings.ranges);
       }
-      const r = evaluateCase(cc, frame);
+      const r = withStopPoll(ctl.shouldStop, () => evaluateCase(cc, frame));
       if (r === SKIPPED) {
         out.skipped++;
         continue;
@@ -230,8 +235,9 @@ export function runSampleChunk(
       }
     }
   } catch (e) {
-    if (!(e instanceof EvalError)) throw e;
-    out.fault = errorInfo(e, encodeBindings(cc, frame));
+    if (e instanceof StopSignal) out.stopped = e.reason;
+    else if (!(e instanceof EvalError)) throw e;
+    else out.fault = errorInfo(e, encodeBindings(cc, frame));
   }
   out.ms = performance.now() - t0;
   return out;

@@ -86,6 +86,26 @@ describe('random ideals in three variables', () => {
     }), { ...RUNS, numRuns: 60 });
   }, 300000);
 
+  it('weight and block orders: the result is a reduced Gröbner basis for that order', () => {
+    const [r, s, w] = ids;
+    const spec: fc.Arbitrary<OrderSpec> = fc.oneof(
+      fc.tuple(fc.array(fc.integer({ min: 0, max: 3 }), { minLength: 3, maxLength: 3 }), orderArb).map(([weights, then]) => ({ weights, then })),
+      fc.tuple(orderArb, orderArb, fc.integer({ min: 0, max: 2 })).map(([a, b, k]) => {
+        const perm = [[r, s, w], [s, w, r], [w, r, s]][k];
+        return { blocks: [{ vars: [perm[0], perm[1]], order: a }, { vars: [perm[2]], order: b }] };
+      }),
+    );
+    fc.assert(fc.property(idealArb, spec, fc.constantFrom(undefined, 101), (gens, sp, prime) => {
+      const o = termOrder(sp, ids);
+      const cmp = (a: number[], b: number[]) => o.compare(a, b);
+      const K = prime ? Fp(prime) : Q;
+      const G = groebnerBasis(gens, o, { prime, maxDegree: 400 }).map((g) => toPlain(K, g, ids, cmp));
+      expect(plainIsReduced(K, G)).toBe(true);
+      expect(plainIsGroebner(K, G, cmp)).toBe(true);
+      for (const f of gens) expect(plainRemainder(K, toPlain(K, f, ids, cmp), G, cmp)).toEqual([]);
+    }), { ...RUNS, numRuns: 40 });
+  }, 300000);
+
   it('the basis over Q reduces modulo 2^31 - 1 to the modular basis (a prime this large is lucky here)', () => {
     const p = 2 ** 31 - 1, K = Fp(p);
     fc.assert(fc.property(idealArb, orderArb, (gens, spec) => {

@@ -119,3 +119,17 @@ describe('textbook ideals', () => {
     for (let d = 0; d < 6; d++) expect(idealHilbertFunction(I, d)).toBe(idealHilbertFunction(Ideal.fromMonomialIdeal(lex), d));
   });
 });
+
+describe('the stop check', () => {
+  it('an installed stop check ends a basis computation with a clear error', async () => {
+    const { setIdealStop } = await import('../../../src/algebra/ideals/stop.js');
+    const X = genericMatrix('s', 3, 3), Y = genericMatrix('u', 3, 3);
+    const I = Ideal.of(matrixDifference(matrixProduct(X, Y), matrixProduct(Y, X)).entries.slice());
+    setIdealStop(() => true);
+    try {
+      expect(() => idealDimensionData(I)).toThrow(/stopped/);
+    } finally {
+      setIdealStop(undefined);
+    }
+  });
+});

@@ -1,4 +1,4 @@
-// The loop chain of issue 6 on perfect matchings of 2n points around a circle, built from plain
+// The loop chain on perfect matchings of 2n points around a circle, built from plain
 // partner arrays (independent of the library's Matching class and move functions, so the solver
 // tests do not depend on them): pick a position i uniformly; with weight `join` the points i, i+1
 // become an arc and their partners are joined, with weight `cross` they exchange partners.

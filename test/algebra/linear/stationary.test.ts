@@ -1,4 +1,4 @@
-// The exact stationary solver (src/algebra/linear/stationary.ts) on the loop chain of issue 6.
+// The exact stationary solver (src/algebra/linear/stationary.ts) on the loop chain on perfect matchings.
 //
 // Source for the numbers: OEIS A029729 (degree of the variety of pairs of commuting n x n
 // matrices: 1, 3, 31, 1145, 154881, 77899563, ...), whose comment (2004)
@@ -77,7 +77,7 @@ describe('the loop chain, join 2/3 and exchange 1/3 (OEIS A029729)', () => {
   }, 30_000);
 });
 
-describe('the loop chain with a fair coin (issue 6: the weights stop being integers)', () => {
+describe('the loop chain with a fair coin (the weights stop being integers)', () => {
   it('n = 2 still gives integers 2, 2, 1 (computed here by hand: by symmetry the two noncrossing matchings are equal, and balance at the crossing one gives 2:1)', () => {
     const { lc, f, min } = scaled(2, 1, 1);
     expect(f.nums.map((a) => a / min)).toEqual(lc.states.map((p) => (p[0] === 2 ? 1n : 2n)));

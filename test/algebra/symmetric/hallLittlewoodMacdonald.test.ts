@@ -19,6 +19,13 @@ import { indexedVarId } from '../../../src/algebra/variables.js';
 import { hookLengths } from '../../../src/families/tableaux/shapes.js';
 import { valueToText } from '../../../src/values/operations.js';
 import { evaluate } from '../../../src/language/expr/index.js';
+import { kostkaFoulkesCoefficients } from '../../../src/library/words/charge.js';
+
+const trimZeros = (c: readonly unknown[]) => {
+  const a = c.map(Number);
+  while (a.length && a[a.length - 1] === 0) a.pop();
+  return a;
+};
 import { e, h, m, s } from './helpers.js';
 
 const t = variable('t'), q = variable('q');
@@ -66,6 +73,11 @@ describe('Kostka–Foulkes polynomials (Macdonald III.6)', () => {
         for (const row of hookLengths(lam)) for (const hk of row) den = pmul(den, psub(1, ppow(t, hk)));
         expect(KF(lam as number[], new Array(n).fill(1))).toBe(text(pdivExact(num, den)));
       }
+  });
+  it('agrees with the word-level implementation of the library (src/library/words/charge.ts), n <= 6', () => {
+    for (let n = 1; n <= 6; n++)
+      for (const lam of partitionsOf(n))
+        for (const mu of partitionsOf(n)) expect(trimZeros(kostkaFoulkes(lam, mu))).toEqual(trimZeros(kostkaFoulkesCoefficients(lam as number[], mu as number[])));
   });
   it('K_{lambda mu}(1) is the Kostka number and K_{lambda lambda}(t) = 1 (n <= 6)', () => {
     for (let n = 1; n <= 6; n++)

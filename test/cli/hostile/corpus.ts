@@ -2,7 +2,8 @@
 // exit code and the message it must produce. Every one must end without a stack trace or an
 // internal error, and write nothing it should not.
 
-import { chmodSync, mkdirSync, symlinkSync } from 'node:fs';
+import { execFileSync } from 'node:child_process';
+import { chmodSync, mkdirSync, symlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { forgedFile, TRUE_BOUND } from './forge.js';
 
@@ -229,5 +230,215 @@ export const corpus: HostileCase[] = [
     args: ['check', 'a.yaml', '--junit', 'report.xml'],
     code: 1,
     clean: ['report.xml', 'counterexamples/maj-bounded.yaml'],
+  },
+
+  // --- no stack trace, no internal error --------------------------------------------------------
+  {
+    name: 'an id of more than 200 characters is refused at load',
+    files: { 'a.yaml': `conjecture: ${'a'.repeat(250)}\nexpect: holds\nclaim: true\n` },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a.yaml:1:13', 'an id may have at most 200'],
+    absent: ['hunch-ledger.jsonl', 'counterexamples'],
+  },
+  {
+    name: 'eval 2^(2^40)',
+    args: ['eval', '2^(2^40)'],
+    code: 2,
+    stderr: ['<expression>:1:', 'would have about', 'digits'],
+  },
+  {
+    name: 'a claim computing 2^(2^40) is a located error of the case',
+    files: { 'a.yaml': 'conjecture: big\nexpect: holds\nfor:\n  n: 1..3\nclaim: 2^(2^40) > n\n' },
+    args: ['check', 'a.yaml'],
+    code: 1,
+    stdout: ['a.yaml:5:8', 'would have about'],
+  },
+  {
+    name: 'a range bound of 10^(10^10)',
+    files: { 'a.yaml': 'conjecture: big-range\nexpect: holds\nfor:\n  n: 1..10^(10^10)\nclaim: n > 0\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a.yaml:4:'],
+  },
+  {
+    name: 'replay: a file whose bindings are of an unknown object kind',
+    files: { 'x.yaml': forgedFile(TRUE_BOUND, { n: 2, w: { gadget: [1, 2] } }) },
+    args: ['replay', 'x.yaml'],
+    code: 2,
+    stderr: ['x.yaml'],
+  },
+  {
+    name: 'replay: a file that is a YAML list, not a counterexample',
+    files: { 'x.yaml': '- 1\n- 2\n' },
+    args: ['replay', 'x.yaml'],
+    code: 2,
+    stderr: ['not a readable counterexample file'],
+  },
+  {
+    name: 'replay: a folder instead of a file',
+    setup: (d) => mkdirSync(join(d, 'x.yaml')),
+    args: ['replay', 'x.yaml'],
+    code: 2,
+    stderr: ['x.yaml'],
+  },
+  // --- no silent pass -------------------------------------------------------------------------------
+  {
+    name: 'an empty size range n: 5..1',
+    files: { 'a.yaml': 'conjecture: empty-range\nexpect: holds\nfor:\n  n: 5..1\n  w: permutations(n)\nclaim: inv(w) >= 0\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a.yaml:4:3', 'the range of n is empty'],
+    absent: ['hunch-ledger.jsonl'],
+  },
+  {
+    name: '--sizes n=5..1 (the same rule on the command line)',
+    files: { 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml', '--sizes', 'n=5..1'],
+    code: 2,
+    stderr: ['the range is empty'],
+  },
+  {
+    name: 'a family empty at every size',
+    files: { 'a.yaml': 'conjecture: empty-family\nexpect: holds\nfor:\n  n: 1..5\n  w: avoiders(n, [1])\nclaim: inv(w) < 0\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a.yaml:4:3', 'no size n = 1..5 has any case'],
+    absent: ['hunch-ledger.jsonl'],
+  },
+  {
+    name: 'an inner range empty at every size',
+    files: { 'a.yaml': 'conjecture: inner-empty\nexpect: holds\nfor:\n  n: 1..5\n  k: n+1..n\nclaim: false\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['no size n = 1..5 has any case'],
+  },
+  {
+    name: 'an empty file',
+    files: { 'a.yaml': '' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['nothing to check: a.yaml holds no conjecture'],
+  },
+  {
+    name: 'a file of comments only',
+    files: { 'a.yaml': '# nothing here yet\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['nothing to check'],
+  },
+  {
+    name: 'a folder with no conjecture file',
+    setup: (d) => mkdirSync(join(d, 'empty')),
+    args: ['check', 'empty'],
+    code: 2,
+    stderr: ['nothing to check: empty holds no conjecture'],
+  },
+  {
+    name: '--sizes naming no binding',
+    files: { 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml', '--sizes', 'm=1..3'],
+    code: 2,
+    stderr: ['--sizes m=1..3 names no range binding', 'did you mean n?'],
+  },
+  {
+    name: '--sample naming no binding',
+    files: { 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml', '--sample', 'k=5..9'],
+    code: 2,
+    stderr: ['--sample k=5..9 names no range binding'],
+  },
+  {
+    name: 'every case excluded by where: nothing checked, not holds',
+    files: { 'a.yaml': 'conjecture: all-excluded\nexpect: holds\nfor:\n  n: 1..4\n  w: permutations(n)\nwhere: n > 10\nclaim: false\n' },
+    args: ['check', 'a.yaml', '--no-ledger'],
+    code: 1,
+    stderr: ['nothing checked: all-excluded'],
+  },
+
+  // --- bounded resources ---------------------------------------------------------------------------
+  {
+    name: 'a conjecture path that is a FIFO',
+    setup: (d) => execFileSync('mkfifo', [join(d, 'a.yaml')]),
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['not a regular file'],
+  },
+  {
+    name: 'a conjecture path that is a device',
+    setup: (d) => symlinkSync('/dev/zero', join(d, 'a.yaml')),
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['not a regular file'],
+  },
+  {
+    name: 'a replay file that is a device',
+    setup: (d) => symlinkSync('/dev/zero', join(d, 'x.yaml')),
+    args: ['replay', 'x.yaml'],
+    code: 2,
+    stderr: ['not a regular file'],
+  },
+  {
+    name: 'a conjecture file over the size limit is refused before it is read',
+    setup: (d) => writeFileSync(join(d, 'a.yaml'), Buffer.alloc(17 * 1024 * 1024, 0x20)),
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['more than the 16,777,216 an input may have'],
+  },
+  {
+    name: '--count beyond the limit',
+    files: { 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml', '--count', '1000000000000'],
+    code: 2,
+    stderr: ['random cases per size a run may draw'],
+  },
+  {
+    name: 'a sample count beyond the limit in the file',
+    files: { 'a.yaml': 'conjecture: many\nexpect: holds\nfor:\n  n: 1..3\nclaim: n > 0\nsample:\n  n: 4..9\n  count: 100000000000\n' },
+    args: ['check', 'a.yaml'],
+    code: 2,
+    stderr: ['a file may ask for'],
+  },
+  {
+    name: '--workers beyond the core count is capped, with a note',
+    files: { 'a.yaml': HOLDS },
+    args: ['check', 'a.yaml', '--workers', '512', '--no-ledger'],
+    code: 0,
+    stderr: ['--workers 512 is more than the', 'using'],
+  },
+  {
+    name: 'replay honours --budget inside a long case',
+    files: {
+      'x.yaml': forgedFile('conjecture: slow\nexpect: holds\nfor:\n  n: 1..2\nclaim: count(i in 1..10^12 where i > 0) < 0\n', { n: 1 }),
+    },
+    args: ['replay', 'x.yaml', '--budget', '1s'],
+    code: 3,
+    stderr: ['the budget was reached'],
+  },
+
+  // --- small ones -------------------------------------------------------------------------------
+  {
+    name: '--junit into a missing folder is an error before the run',
+    files: { 'a.yaml': FAILS },
+    args: ['check', 'a.yaml', '--junit', 'no/such/folder/report.xml'],
+    code: 2,
+    stderr: ['--junit no/such/folder/report.xml: the folder', 'does not exist'],
+    absent: ['hunch-ledger.jsonl', 'counterexamples', 'no'],
+  },
+  {
+    name: '--no-ledger writes no counterexample file',
+    files: { 'a.yaml': FAILS },
+    args: ['check', 'a.yaml', '--no-ledger'],
+    code: 0,
+    absent: ['hunch-ledger.jsonl', 'counterexamples'],
+  },
+  {
+    name: 'a ledger whose first line starts with a byte-order mark',
+    files: {
+      'a.yaml': HOLDS,
+      'hunch-ledger.jsonl': '\ufeff{"v":1,"id":"trivial","hash":"' + 'a'.repeat(64) + '","tool":"0.1.0","phase":"exhaustive","size":{"n":1},"cases":1,"failures":0,"skipped":0,"ms":0.1,"at":"2026-01-01T00:00:00.000Z","host":"h","run":"r","outcome":"holds"}\n',
+    },
+    args: ['status', 'a.yaml'],
+    code: 0,
   },
 ];

@@ -5,7 +5,7 @@ import { stringify } from 'yaml';
 import '../../../src/families/index.js';
 import '../../../src/library/index.js';
 import { loadConjectureFile } from '../../../src/language/conjecture/load-file.js';
-import { conjectureHash } from '../../../src/records/hash.js';
+import { conjectureHash } from '../../../src/language/conjecture/conjecture-hash.js';
 import { exactDocument } from '../../../src/records/counterexample-file.js';
 
 export function forgedFile(conjecture: string, bindings: Record<string, unknown>, extra: Record<string, unknown> = {}): string {

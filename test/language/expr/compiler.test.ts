@@ -87,7 +87,7 @@ describe('comprehensions', () => {
     expect(show('concat(1..i for i in 1..3)')).toBe('[1, 1, 2, 1, 2, 3]');
     const d = ev('distribution(t_inv(w) for w in permutations(3))') as Distribution;
     expect(d).toBeInstanceOf(Distribution);
-    expect(d.toText()).toBe('distribution({0: 1, 1: 2, 2: 2, 3: 1})'); // Mahonian row n=3, OEIS A008302
+    expect(d.toText()).toBe('distributionOf([[0, 1], [1, 2], [2, 2], [3, 1]])'); // Mahonian row n=3, OEIS A008302
   });
   test('several generators and where clauses', () => {
     // Pairs 1 <= i <= j <= 6 with gcd 1: sum_{j<=6} phi(j), with (1,1): 1+1+2+2+4+2 = 12 (OEIS A002088).

@@ -8,9 +8,10 @@ import '../../../src/families/permutations/permutations.js';
 import { Lambda } from '../../../src/values/lambda.js';
 import { evaluate } from '../../../src/language/expr/index.js';
 import { valueToText } from '../../../src/values/operations.js';
+import type { TypeName } from '../../../src/values/types.js';
 import type { Value } from '../../../src/values/value.js';
 
-function def(name: string, params: Array<[string, string]>, returns: string, impl: (...a: Value[]) => Value) {
+function def(name: string, params: Array<[string, TypeName]>, returns: TypeName, impl: (...a: Value[]) => Value) {
   if (getFunction(name)) return;
   defineFunction({
     name, topic: 'test', params: params.map(([n, type]) => ({ name: n, type })), returns,

@@ -4,7 +4,7 @@
 // pixels are not blank. .ci/run installs chromium; where it is missing this prints SKIPPED.
 // HUNCH_UPDATE_SCREENSHOT=1 also writes the screenshot shown in README (test/reports/html/report.png).
 
-import { existsSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { parse } from 'yaml';

@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import type { ConjectureResult } from '../../src/runner/result.js';
-import { junitXml, xmlEscape } from '../../src/records/junit.js';
+import { junitXml, xmlEscape } from '../../src/reports/junit.js';
 
 const base = (over: Partial<ConjectureResult>): ConjectureResult => ({
   id: 'c', file: 'f.yaml', hash: 'h', expect: 'holds', outcome: 'holds', checked: [], counterexample: null, error: null, ms: 12, ...over,
@@ -8,7 +8,8 @@ const base = (over: Partial<ConjectureResult>): ConjectureResult => ({
 
 describe('junit', () => {
   test('escapes XML', () => {
-    expect(xmlEscape(`a<b & "c" 'd'\u0001`)).toBe('a&lt;b &amp; &quot;c&quot; &apos;d&apos;');
+    // Control characters are shown as \xNN (src/base/escape.ts), never passed through.
+    expect(xmlEscape(`a<b & "c" 'd'\u0001`)).toBe('a&lt;b &amp; &quot;c&quot; &apos;d&apos;\\x01');
   });
 
   test('one testcase per conjecture; failures, errors and skips follow the exit-code rule', () => {

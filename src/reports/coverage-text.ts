@@ -1,25 +1,15 @@
 // "What was covered", in words: consecutive sizes compressed into ranges, with case counts.
 // Sampled coverage always says it is evidence, not proof.
 
+import { formatCount } from '../base/format-count.js';
 import type { CheckedPiece } from '../runner/result.js';
-
-export function formatCount(n: number): string {
-  return n.toLocaleString('en-US');
-}
+import { compressedRanges } from './size-ranges.js';
 
 /** "n = 1..8" from the sizes of pieces (one size binding). */
 function sizeRanges(pieces: CheckedPiece[]): string {
   const name = Object.keys(pieces[0]?.size ?? {})[0];
   if (!name) return '';
-  const vals = [...new Set(pieces.map((p) => p.size[name]))].sort((a, b) => a - b);
-  const parts: string[] = [];
-  for (let i = 0; i < vals.length; ) {
-    let j = i;
-    while (j + 1 < vals.length && vals[j + 1] === vals[j] + 1) j++;
-    parts.push(i === j ? `${vals[i]}` : `${vals[i]}..${vals[j]}`);
-    i = j + 1;
-  }
-  return `${name} = ${parts.join(', ')}`;
+  return `${name} = ${compressedRanges(pieces.map((p) => p.size[name]))}`;
 }
 
 export interface CoverageText {

@@ -12,12 +12,13 @@
 // binder-first one, printHashForm, so hashes recorded before the body-first form existed stay valid).
 
 import { createHash } from 'node:crypto';
-import type { Expr } from '../language/expr/ast.js';
-import { textOrigin } from '../language/expr/origin.js';
-import { parseDefineHeader, parseExpression } from '../language/expr/parser.js';
-import { printHashForm } from '../language/expr/printer.js';
-import type { ConjectureSpec } from '../language/conjecture/conjecture.js';
-import type { ExprText } from '../language/conjecture/yaml-reader.js';
+import { pluginFileHashes } from '../../library/registry.js';
+import type { Expr } from '../expr/ast.js';
+import { textOrigin } from '../expr/origin.js';
+import { parseDefineHeader, parseExpression } from '../expr/parser.js';
+import { printHashForm } from '../expr/printer.js';
+import type { ConjectureSpec } from './conjecture.js';
+import type { ExprText } from './yaml-reader.js';
 
 /** The version of the canonical form: bump it when the form changes (every record then becomes stale). */
 export const HASH_FORM = 'hunch-conjecture-hash/1';
@@ -139,9 +140,13 @@ export function canonicalForm(spec: ConjectureSpec, extra: HashExtra = {}): Reco
   };
 }
 
-/** sha256 (hex) of the canonical form of the conjecture. */
+/**
+ * sha256 (hex) of the canonical form of the conjecture. Without `extra.pluginHashes`, the plugin
+ * file hashes are those of the plugin functions registered in this process (the project's).
+ */
 export function conjectureHash(spec: ConjectureSpec, extra: HashExtra = {}): string {
-  return createHash('sha256').update(JSON.stringify(canonicalForm(spec, extra))).digest('hex');
+  const form = canonicalForm(spec, extra.pluginHashes ? extra : { pluginHashes: pluginFileHashes() });
+  return createHash('sha256').update(JSON.stringify(form)).digest('hex');
 }
 
 /** sha256 (hex) of a file's bytes: a plugin's contribution to the hash. */

@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
-import { loadConjectureFile } from '../../src/language/conjecture/load-file.js';
-import { canonicalForm, conjectureHash, namesUsed } from '../../src/records/hash.js';
+import { loadConjectureFile } from '../../../src/language/conjecture/load-file.js';
+import { canonicalForm, conjectureHash, namesUsed } from '../../../src/language/conjecture/conjecture-hash.js';
 
 const BASE = `
 conjecture: maj-vs-inv

@@ -5,20 +5,10 @@ import type { ConjectureResult } from '../runner/result.js';
 import { agreesWithExpectation } from '../runner/result.js';
 import { decodeValue } from '../values/decode.js';
 import { valueToText } from '../values/operations.js';
-import { writeFileAtomic } from './atomic-write.js';
-import { escapeControl } from '../base/escape.js';
-import { groupDigits } from './coverage.js';
+import { formatCount } from '../base/format-count.js';
+import { xmlEscape } from './markup/xml.js';
 
-/** Escape text for XML content and attributes; control characters are shown as \xNN, others XML 1.0 cannot hold are dropped. */
-export function xmlEscape(s: string): string {
-  return escapeControl(s)
-    .replace(/[^\x09\x0a\x0d\x20-\ud7ff\ue000-\ufffd\u{10000}-\u{10ffff}]/gu, '')
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;')
-    .replace(/"/g, '&quot;')
-    .replace(/'/g, '&apos;');
-}
+export { xmlEscape };
 
 const seconds = (ms: number) => (ms / 1000).toFixed(3); // a timing: the one place floats are fine
 
@@ -36,7 +26,7 @@ function coverage(r: ConjectureResult): string {
     const ps = by(phase);
     if (!ps.length) return null;
     const sizes = ps.map((p) => Object.entries(p.size).map(([k, v]) => `${k}=${v}`).join(',')).filter(Boolean);
-    return `${word}: ${groupDigits(ps.reduce((a, p) => a + p.cases, 0))} cases${sizes.length ? ` (${sizes[0]}${sizes.length > 1 ? ` .. ${sizes[sizes.length - 1]}` : ''})` : ''}`;
+    return `${word}: ${formatCount(ps.reduce((a, p) => a + p.cases, 0))} cases${sizes.length ? ` (${sizes[0]}${sizes.length > 1 ? ` .. ${sizes[sizes.length - 1]}` : ''})` : ''}`;
   };
   return [line('exhaustive', 'exhaustive'), line('sample', 'sampled (evidence, not proof)')].filter(Boolean).join('\n');
 }
@@ -88,8 +78,4 @@ export function junitXml(results: readonly ConjectureResult[]): string {
     out += '  </testsuite>\n';
   }
   return out + '</testsuites>\n';
-}
-
-export function writeJUnitReport(path: string, results: readonly ConjectureResult[]): void {
-  writeFileAtomic(path, junitXml(results), { what: 'the JUnit report', makeFolder: false });
 }

@@ -1,6 +1,7 @@
 // Finding and loading every conjecture file under the paths a user names.
 
-import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { readdirSync, statSync } from 'node:fs';
+import { readInputFile } from '../../base/read-input.js';
 import { join, relative } from 'node:path';
 import { InputError } from '../../base/errors.js';
 import type { ConjectureSpec } from './conjecture.js';
@@ -41,11 +42,7 @@ export function loadConjectures(paths: string[]): ConjectureSpec[] {
   const byId = new Map<string, ConjectureSpec>();
   for (const f of conjectureFiles(paths)) {
     let text: string;
-    try {
-      text = readFileSync(f, 'utf8');
-    } catch (e) {
-      throw new InputError(`cannot read ${f}: ${(e as Error).message}`);
-    }
+    text = readInputFile(f, 'the conjecture file');
     for (const c of loadConjectureFile(displayPath(f), text).conjectures) {
       const prev = byId.get(c.id);
       if (prev)
