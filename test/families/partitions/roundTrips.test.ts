@@ -20,6 +20,10 @@ import { pipeDreams } from '../../../src/families/pipeDreams/pipeDreams.js';
 import { partialPermutations } from '../../../src/families/partialPermutations/partialPermutations.js';
 import { reducedWords } from '../../../src/families/reducedWords/reducedWords.js';
 import { Permutation } from '../../../src/families/permutations/permutation.js';
+import { noncrossingPartitions } from '../../../src/families/setPartitions/noncrossingPartitions.js';
+import { signedPermutations } from '../../../src/families/signedPermutations/signedPermutations.js';
+import { motzkinPaths } from '../../../src/families/motzkinPaths/motzkinPaths.js';
+import { parkingFunctions } from '../../../src/families/parkingFunctions/parkingFunctions.js';
 
 const cases: [Family<any, Structured>, unknown[]][] = [
   [partitions, [30]],
@@ -31,6 +35,10 @@ const cases: [Family<any, Structured>, unknown[]][] = [
   [pipeDreams, [new Permutation([2, 5, 1, 6, 4, 3])]],
   [partialPermutations, [4, 5]],
   [reducedWords, [new Permutation([5, 3, 6, 1, 4, 2])]],
+  [noncrossingPartitions, [12]],
+  [signedPermutations, [9]],
+  [motzkinPaths, [20]],
+  [parkingFunctions, [10]],
 ];
 
 describe('round trips', () => {
