@@ -7,7 +7,7 @@
 //             polynomials (+ - *, c * M for a number or polynomial c), symmetric functions (a ring
 //             over numbers and polynomials; / by a number or polynomial)
 //   *         on permutations composes: (u*v)[i] == u[v[i]]
-//   ^         integer exponent; w^-1 is the inverse of a permutation; p^k needs k >= 0
+//   ^         integer exponent; w^-1 is the inverse of a permutation; p^k for k < 0 needs a monomial p
 //   == !=     structural (values/operations.ts valueEquals)
 //   < <= > >= integers and rationals only
 
@@ -96,10 +96,7 @@ export function pow(a: Value, e: Value): Value {
     fail(digits.length > 40 ? `the exponent (${e < 0n ? 'minus ' : ''}a number of ${digits.length} digits) is too large` : `the exponent ${e} is too large`);
   }
   if (isScalar(a)) return spow(a, e);
-  if (isPolynomial(a)) {
-    if (e < 0) fail(`a polynomial to a negative power (${e}) is not a polynomial`);
-    return ppow(a, e);
-  }
+  if (isPolynomial(a)) return ppow(a, e);
   if (a instanceof Permutation) return permPower(a, e);
   if (isMatrixValue(a)) return matrixPow(a, e);
   if (isSymmetricFunction(a)) return symPow(a, e);
