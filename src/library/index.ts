@@ -33,3 +33,4 @@ import './symmetricPolynomialBases.js';
 import './schubertCombinatorics.js';
 import './insertion.js';
 import './quasisymmetric.js';
+import './generatingFunctions.js';

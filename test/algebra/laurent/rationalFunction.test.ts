@@ -41,3 +41,16 @@ describe('rational functions', () => {
     }
   });
 });
+
+describe('coefficient(f, q, k)', () => {
+  it('reads Laurent polynomials and power series of rational functions', () => {
+    expect(ev('coefficient(q^-2*t + 3*q^-2 + q, q, -2)')).toBe('t + 3');
+    expect(ev('coefficient(q^-2*t, q, 5)')).toBe('0');
+    expect(ev('coefficient(1/(1 - q), q, 7)')).toBe('1');
+    expect(ev('coefficient(1/(1 - q), q, -1)')).toBe('0');
+    expect(ev('coefficient(1/(q - q^2), q, -1)')).toBe('1');
+    expect(ev('coefficient(1/(1 - q*t), q, 4)')).toBe('t^4');
+    expect(ev('coefficient(1/(2 - q), q, 3)')).toBe('1/16');
+    expect(() => run('coefficient(1/(t - q), q, 1)')).toThrow(/lowest coefficient in q is a number/);
+  });
+});
