@@ -1,4 +1,6 @@
-// Sparse multivariate polynomials with exact rational coefficients, always expanded.
+// Sparse multivariate Laurent polynomials with exact rational coefficients, always expanded.
+// Exponents may be negative (q^-1 is a value; q^-1 * q == 1); an ordinary polynomial is the case
+// with every exponent >= 0, and most of the library expects that case.
 //
 // Representation: the sorted list of variable ids that occur (print order, see variables.ts), a
 // flat Int32Array of exponent vectors (one row of `nv` entries per term) and a coefficient array.
@@ -51,6 +53,12 @@ export class Polynomial implements Structured {
     return out;
   }
 
+  /** Whether some exponent is negative (a Laurent polynomial that is no ordinary polynomial). */
+  isLaurent(): boolean {
+    for (let i = 0; i < this.exps.length; i++) if (this.exps[i] < 0) return true;
+    return false;
+  }
+
   /** Total degree of term t. */
   termDegree(t: number): number {
     let d = 0;
@@ -82,7 +90,7 @@ export class Polynomial implements Structured {
       for (let v = 0; v < nv; v++) {
         const e = this.exps[t * nv + v];
         if (e === 1) factors.push(varName(this.vars[v]));
-        else if (e > 1) factors.push(`${varName(this.vars[v])}^${e}`);
+        else if (e !== 0) factors.push(`${varName(this.vars[v])}^${e}`);
       }
       const c = this.coefs[t];
       const neg = c instanceof Rat ? c.num < 0n : c < 0;
@@ -162,10 +170,7 @@ export function fromTerms(vars: readonly number[], terms: Iterable<[ArrayLike<nu
   const nv = order.length;
   const maxExp = new Array(nv).fill(0);
   for (const [e] of list)
-    for (let k = 0; k < nv; k++) {
-      if (e[pos[k]] < 0) fail('a polynomial has no negative exponents');
-      if (e[pos[k]] > maxExp[k]) maxExp[k] = e[pos[k]];
-    }
+    for (let k = 0; k < nv; k++) if (e[pos[k]] > maxExp[k]) maxExp[k] = e[pos[k]];
   const c = new TermCollector(nv, maxExp, list.length);
   const row = new Int32Array(nv);
   for (const [e, coef] of list) {
@@ -219,21 +224,30 @@ function scale(p: Polynomial, c: Scalar): PolyLike {
 function addConstant(p: Polynomial, c: Scalar): PolyLike {
   if (sisZero(c)) return p;
   const n = p.coefs.length, nv = p.nv;
-  // The constant term, if any, is last.
-  const last = n - 1;
-  if (p.termDegree(last) === 0) {
-    const s = addScalars(p.coefs[last], c);
+  // The constant term's place: last for an ordinary polynomial, before the terms of negative
+  // degree (or of degree 0 below 1 in the lex order) for a Laurent polynomial.
+  const zero = new Int32Array(nv);
+  let at = n;
+  while (at > 0 && compareMonomials(p.exps, (at - 1) * nv, zero, 0, nv) <= 0) at--;
+  if (at < n && compareMonomials(p.exps, at * nv, zero, 0, nv) === 0) {
+    const s = addScalars(p.coefs[at], c);
     const coefs = p.coefs.slice();
     if (sisZero(s)) {
-      coefs.pop();
-      return new Polynomial(p.vars, p.exps.slice(0, last * nv), coefs);
+      coefs.splice(at, 1);
+      const exps = new Int32Array((n - 1) * nv);
+      exps.set(p.exps.subarray(0, at * nv));
+      exps.set(p.exps.subarray((at + 1) * nv), at * nv);
+      return makePolynomial(p.vars, exps, coefs);
     }
-    coefs[last] = s;
+    coefs[at] = s;
     return new Polynomial(p.vars, p.exps, coefs);
   }
   const exps = new Int32Array((n + 1) * nv);
-  exps.set(p.exps);
-  return new Polynomial(p.vars, exps, [...p.coefs, c]);
+  exps.set(p.exps.subarray(0, at * nv));
+  exps.set(p.exps.subarray(at * nv), (at + 1) * nv);
+  const coefs = p.coefs.slice();
+  coefs.splice(at, 0, c);
+  return new Polynomial(p.vars, exps, coefs);
 }
 
 export function padd(a: PolyLike, b: PolyLike): PolyLike {
@@ -308,7 +322,10 @@ export function maxOver(exps: Int32Array, nv: number): Int32Array {
 export function ppow(a: PolyLike, e: number): PolyLike {
   if (!Number.isInteger(e)) fail(`the exponent ${e} is not an integer`);
   if (!(a instanceof Polynomial)) return spow(a, e);
-  if (e < 0) fail(`a polynomial cannot be raised to a negative power (${a.toText()} to the power ${e})`);
+  if (e < 0) {
+    if (a.length !== 1) fail(`only a monomial has a Laurent polynomial as a negative power, not ${a.toText()} (to the power ${e})`);
+    return new Polynomial(a.vars, a.exps.map((x) => x * e), [spow(a.coefs[0], e)]);
+  }
   let result: PolyLike = 1, base: PolyLike = a;
   while (e > 0) {
     if (e & 1) result = pmul(result, base);
@@ -328,13 +345,50 @@ export function polyText(a: PolyLike): string {
   return a instanceof Polynomial ? a.toText() : a.toString();
 }
 
-/** The quotient a / b when b divides a exactly; otherwise an error naming both. */
+/** The smallest exponent of each of `vars` (a superset of p's variables) over p's terms. */
+export function minExps(p: Polynomial, vars: Int32Array): Int32Array {
+  const e = expandExps(p, vars), nv = vars.length;
+  const out = e.slice(0, nv);
+  for (let i = nv; i < e.length; i += nv) for (let v = 0; v < nv; v++) if (e[i + v] < out[v]) out[v] = e[i + v];
+  return out;
+}
+
+/** p times the monomial with exponents `delta` over `vars` (a superset of p's variables, in rank order). */
+export function shiftPolynomial(p: PolyLike, vars: Int32Array, delta: Int32Array): PolyLike {
+  if (!(p instanceof Polynomial)) {
+    if (sisZero(p)) return 0;
+    return makePolynomial(vars, delta.slice(), [p]);
+  }
+  // Multiplying by a monomial keeps the graded lex order of the terms.
+  const e = expandExps(p, vars).slice(), nv = vars.length;
+  for (let i = 0; i < e.length; i += nv) for (let v = 0; v < nv; v++) e[i + v] += delta[v];
+  return makePolynomial(vars, e, p.coefs.slice());
+}
+
+/**
+ * The quotient a / b when b divides a exactly in the ring of Laurent polynomials (so division by
+ * a monomial always succeeds: q / q^3 == q^-2); otherwise an error naming both.
+ */
 export function pdivExact(a: PolyLike, b: PolyLike): PolyLike {
+  if (b instanceof Polynomial && !(!(a instanceof Polynomial) && sisZero(a))) {
+    // Divide out the largest monomial factors: a = m_a a', b = m_b b' with a', b' ordinary
+    // polynomials divisible by no variable. Then b | a iff b' | a' (no variable divides b').
+    const vars = a instanceof Polynomial ? unionVars(a.vars, b.vars) : b.vars;
+    const ma = a instanceof Polynomial ? minExps(a, vars) : new Int32Array(vars.length), mb = minExps(b, vars);
+    const neg = (m: Int32Array) => m.map((x) => -x);
+    const a1 = shiftPolynomial(a, vars, neg(ma)), b1 = shiftPolynomial(b, vars, neg(mb));
+    const q = pdivOrdinary(a1, b1, () => fail(`${polyText(a)} is not divisible by ${b.toText()}`));
+    return shiftPolynomial(q, vars, ma.map((x, v) => x - mb[v]));
+  }
+  return pdivOrdinary(a, b, () => fail(`${polyText(a)} is not divisible by ${polyText(b)}`));
+}
+
+/** Exact division of ordinary polynomials, calling notDivisible when b does not divide a. */
+function pdivOrdinary(a: PolyLike, b: PolyLike, notDivisible: () => never): PolyLike {
   if (!(b instanceof Polynomial)) {
     if (sisZero(b)) fail(`division by zero: ${polyText(a)} / 0`);
     return a instanceof Polynomial ? scale(a, sdiv(1, b)) : sdiv(a, b);
   }
-  const notDivisible = (): never => fail(`${polyText(a)} is not divisible by ${b.toText()}`);
   if (!(a instanceof Polynomial)) {
     if (sisZero(a)) return 0;
     notDivisible();

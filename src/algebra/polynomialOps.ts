@@ -55,7 +55,7 @@ export function coefficientsOf(p: PolyLike): Scalar[] {
   return p.coefs.slice();
 }
 
-/** Total degree; fails for the zero polynomial. */
+/** Total degree (of a Laurent polynomial: the highest total degree of a term); fails for 0. */
 export function totalDegree(p: PolyLike): number {
   if (!isPolynomial(p)) {
     if (sisZero(p)) fail('the zero polynomial has no degree');
@@ -64,7 +64,7 @@ export function totalDegree(p: PolyLike): number {
   return p.termDegree(0); // terms are sorted by total degree, highest first
 }
 
-/** Degree in one variable; fails for the zero polynomial. */
+/** Degree in one variable (the highest exponent; negative for q^-1); fails for the zero polynomial. */
 export function degreeIn(p: PolyLike, id: number): number {
   if (!isPolynomial(p)) {
     if (sisZero(p)) fail('the zero polynomial has no degree');
@@ -72,7 +72,7 @@ export function degreeIn(p: PolyLike, id: number): number {
   }
   const v = p.vars.indexOf(id);
   if (v < 0) return 0;
-  let d = 0;
+  let d = -Infinity; // the highest exponent, negative for q^-1 + q^-2
   for (let t = 0; t < p.length; t++) d = Math.max(d, p.exps[t * p.nv + v]);
   return d;
 }
@@ -99,7 +99,7 @@ export function substitute(p: PolyLike, values: Map<number, PolyLike>): PolyLike
         if (val === undefined) row[v] = e;
         else {
           row[v] = 0;
-          if (e > 0) {
+          if (e !== 0) {
             let pw = powCache[v].get(e);
             if (pw === undefined) powCache[v].set(e, (pw = ppow(val, e) as Scalar));
             coef = mulScalars(coef, pw);
@@ -204,6 +204,9 @@ export function univariateCoefficients(p: PolyLike, id: number): Scalar[] {
   const others = Array.from(p.vars).filter((v) => v !== id);
   if (others.length > 0)
     fail(`${polyText(p)} is not a polynomial in ${varName(id)} alone: it also contains ${others.map(varName).join(', ')}`);
+  for (let t = 0; t < p.length; t++)
+    if (p.exps[t] < 0)
+      fail(`${polyText(p)} has a negative power of ${varName(id)}: a coefficient list starts at degree 0 (use coefficient(p, ${varName(id)}, k))`);
   const d = p.exps[0];
   const out: Scalar[] = new Array(d + 1).fill(0);
   for (let t = 0; t < p.length; t++) out[p.exps[t]] = p.coefs[t];

@@ -9,7 +9,7 @@ import { sneg } from '../numbers/scalar.js';
 import { fromTerms, type PolyLike } from './polynomial.js';
 import { varId } from './variables.js';
 
-const FACTOR = /^([A-Za-z_][A-Za-z0-9_]*(?:\[\s*-?\d+(?:\s*,\s*-?\d+)*\s*\])?)(?:\^(\d+))?$/;
+const FACTOR = /^([A-Za-z_][A-Za-z0-9_]*(?:\[\s*-?\d+(?:\s*,\s*-?\d+)*\s*\])?)(?:\^(-?\d+))?$/;
 
 /** The polynomial or number written as `text` in the printed form of polynomials. */
 export function parsePolynomialText(text: string): PolyLike {

@@ -53,7 +53,8 @@ export function mulScalars(a: Scalar, b: Scalar): Scalar {
  */
 export class TermCollector {
   readonly nv: number;
-  private readonly packed: boolean;
+  // Packed keys need nonnegative exponents: the first negative one switches to string keys.
+  private packed: boolean;
   private readonly mult: number[] = [];
   private readonly degMult: number = 0;
   private readonly keyBits: number = 0;
@@ -92,6 +93,13 @@ export class TermCollector {
   add(src: ArrayLike<number>, off: number, coef: Scalar): void {
     const nv = this.nv;
     if (this.packed) {
+      for (let v = 0; v < nv; v++)
+        if (src[off + v] < 0) {
+          this.unpack();
+          break;
+        }
+    }
+    if (this.packed) {
       // Packed keys are merged only when sorting (no hashing per term).
       let key = 0, deg = 0;
       for (let v = 0; v < nv; v++) {
@@ -119,6 +127,18 @@ export class TermCollector {
     }
     const base = idx * nv;
     for (let v = 0; v < nv; v++) this.exps[base + v] = src[off + v];
+  }
+
+  /** Switch to string keys (a Laurent monomial arrived), re-adding the terms collected so far. */
+  private unpack(): void {
+    this.packed = false;
+    const nv = this.nv, n = this.count, ex = this.exps, co = this.coefs.slice();
+    this.count = 0;
+    this.coefs.length = 0;
+    this.keys.length = 0;
+    this.strIndex.clear();
+    this.exps = new Int32Array(ex.length);
+    for (let i = 0; i < n; i++) this.add(ex, i * nv, co[i]);
   }
 
   /** The nonzero terms in descending monomial order: [exps (flat), coefs]. */

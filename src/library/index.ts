@@ -34,3 +34,4 @@ import './schubertCombinatorics.js';
 import './insertion.js';
 import './quasisymmetric.js';
 import './distributions.js';
+import './generatingFunctions.js';

@@ -3,11 +3,12 @@
 // starts with the next most common case (scalars) and ends with a type error that names both
 // operands' types.
 //
-//   + - * /   numbers, polynomials (a constant result is a number), matrices of numbers or
+//   + - * /   numbers, Laurent polynomials (a constant result is a number), rational functions
+//             (p / r is exact when r divides p, else a rational function in normal form), matrices of numbers or
 //             polynomials (+ - *, c * M for a number or polynomial c), symmetric functions (a ring
 //             over numbers and polynomials; / by a number or polynomial)
 //   *         on permutations composes: (u*v)[i] == u[v[i]]
-//   ^         integer exponent; w^-1 is the inverse of a permutation; p^k needs k >= 0
+//   ^         integer exponent; w^-1 is the inverse of a permutation; p^k for k < 0 needs a monomial p
 //   == !=     structural (values/operations.ts valueEquals)
 //   < <= > >= integers and rationals only
 
@@ -21,6 +22,7 @@ import { Permutation } from '../families/permutations/permutation.js';
 import { isSymLike, isSymmetricFunction, mapCoefficients, symAdd, symNeg, symSub } from '../algebra/symmetric/symmetricFunction.js';
 import { symMul, symPow } from '../algebra/symmetric/products.js';
 import { valueEquals, valueToText } from '../values/operations.js';
+import { isRationalFunction, makeRational, rfAdd, rfDiv, rfMul, rfNeg, rfPow, rfSub, type RationalLike } from '../algebra/rationalFunction.js';
 import { isStructured } from '../values/structured.js';
 import { article, typeOf } from '../values/types.js';
 import type { Value } from '../values/value.js';
@@ -37,9 +39,15 @@ function isPolyLike(v: Value): v is PolyLike {
   return isScalar(v) || isPolynomial(v);
 }
 
+/** Operands of rational-function arithmetic: at least one is a rational function. */
+function rationalPair(a: Value, b: Value): boolean {
+  return (isRationalFunction(a) || isRationalFunction(b)) && (isPolyLike(a) || isRationalFunction(a)) && (isPolyLike(b) || isRationalFunction(b));
+}
+
 export function add(a: Value, b: Value): Value {
   if (isScalar(a) && isScalar(b)) return sadd(a, b);
   if (isPolyLike(a) && isPolyLike(b)) return padd(a, b);
+  if (rationalPair(a, b)) return rfAdd(a as RationalLike, b as RationalLike);
   if (isMatrixValue(a) && isMatrixValue(b)) return matrixAdd(a, b);
   if (isSymLike(a) && isSymLike(b)) return symAdd(a, b);
   return typeError('+', a, b);
@@ -48,6 +56,7 @@ export function add(a: Value, b: Value): Value {
 export function sub(a: Value, b: Value): Value {
   if (isScalar(a) && isScalar(b)) return ssub(a, b);
   if (isPolyLike(a) && isPolyLike(b)) return psub(a, b);
+  if (rationalPair(a, b)) return rfSub(a as RationalLike, b as RationalLike);
   if (isMatrixValue(a) && isMatrixValue(b)) return matrixSub(a, b);
   if (isSymLike(a) && isSymLike(b)) return symSub(a, b);
   return typeError('-', a, b);
@@ -56,6 +65,7 @@ export function sub(a: Value, b: Value): Value {
 export function neg(a: Value): Value {
   if (isScalar(a)) return sneg(a);
   if (isPolynomial(a)) return pneg(a);
+  if (isRationalFunction(a)) return rfNeg(a);
   if (isMatrixValue(a)) return matrixNeg(a);
   if (isSymmetricFunction(a)) return symNeg(a);
   return typeError('unary -', a);
@@ -64,6 +74,7 @@ export function neg(a: Value): Value {
 export function mul(a: Value, b: Value): Value {
   if (isScalar(a) && isScalar(b)) return smul(a, b);
   if (isPolyLike(a) && isPolyLike(b)) return pmul(a, b);
+  if (rationalPair(a, b)) return rfMul(a as RationalLike, b as RationalLike);
   if (a instanceof Permutation && b instanceof Permutation) return compose(a, b);
   if (isMatrixValue(a)) {
     if (isMatrixValue(b)) return matrixMul(a, b);
@@ -77,8 +88,10 @@ export function div(a: Value, b: Value): Value {
   if (isScalar(a) && isScalar(b)) return sdiv(a, b);
   if (isPolyLike(a) && isPolyLike(b)) {
     if (isScalar(b)) return pmul(a, sdiv(1, b));
-    return pdivExact(a, b);
+    // Exact when b divides a (always for a monomial b), else a rational function.
+    return makeRational(a, b);
   }
+  if (rationalPair(a, b)) return rfDiv(a as RationalLike, b as RationalLike);
   if (isSymmetricFunction(a) && isPolyLike(b)) return mapCoefficients(a, (c) => (isScalar(b) ? pmul(c, sdiv(1, b)) : pdivExact(c, b)));
   return typeError('/', a, b);
 }
@@ -96,10 +109,8 @@ export function pow(a: Value, e: Value): Value {
     fail(digits.length > 40 ? `the exponent (${e < 0n ? 'minus ' : ''}a number of ${digits.length} digits) is too large` : `the exponent ${e} is too large`);
   }
   if (isScalar(a)) return spow(a, e);
-  if (isPolynomial(a)) {
-    if (e < 0) fail(`a polynomial to a negative power (${e}) is not a polynomial`);
-    return ppow(a, e);
-  }
+  if (isPolynomial(a)) return e < 0 && a.length > 1 ? rfPow(a, e) : ppow(a, e);
+  if (isRationalFunction(a)) return rfPow(a, e);
   if (a instanceof Permutation) return permPower(a, e);
   if (isMatrixValue(a)) return matrixPow(a, e);
   if (isSymmetricFunction(a)) return symPow(a, e);

@@ -20,6 +20,7 @@ export const OBJECT_KINDS = [
   'permutation',
   'pipeDream',
   'polynomial',
+  'rational function',
   'setPartition',
   'signedPermutation',
   'subset',
