@@ -18,6 +18,7 @@ import { comparePermutations, sizeArg } from './permutations.js';
 import { descentSwaps, entryDeletions } from './standardise.js';
 import { dyckBijectionFor } from './dyckBijections.js';
 import { randomDyckPath } from '../dyckPaths/dyckPaths.js';
+import { increasingAvoiderCount, increasingAvoiderDraw, monotonePattern } from './increasingAvoiders.js';
 
 export interface AvoidersParam {
   n: number;
@@ -66,6 +67,10 @@ function countAvoiders({ n, pats, key }: AvoidersParam): bigint {
   if (pats.length === 1) {
     const c = closedFormCount(n, pats[0]);
     if (c !== undefined) return c;
+    if (monotonePattern(pats[0]) !== 0) {
+      const m = increasingAvoiderCount(n, pats[0].length);
+      if (m !== undefined) return m;
+    }
   }
   const ck = `${n}|${key}`;
   const hit = countCache.get(ck);
@@ -153,7 +158,8 @@ export const avoiders: Family<AvoidersParam, Permutation> = defineFamily<Avoider
 
 /**
  * An exactly uniform draw at every size, where one is known: one pattern of length 3 through a
- * bijection with Dyck paths (dyckBijections.ts) from a uniform Dyck path; one pattern of length 2
+ * bijection with Dyck paths (dyckBijections.ts) from a uniform Dyck path; 12...k or k...21 through
+ * Robinson–Schensted (increasingAvoiders.ts) while its table of shapes is small; one pattern of length 2
  * (a single avoider); patterns all longer than n (every permutation avoids them).
  */
 function exactDraw(p: AvoidersParam): ((rng: fc.Random) => Permutation) | undefined {
@@ -161,6 +167,11 @@ function exactDraw(p: AvoidersParam): ((rng: fc.Random) => Permutation) | undefi
   if (pats.every((q) => q.length > n)) return (rng) => new Permutation(fisherYates(rng, n));
   const viaDyck = dyckBijectionFor(pats);
   if (viaDyck) return (rng) => new Permutation(viaDyck(randomDyckPath(n, rng).steps));
+  const dir = pats.length === 1 ? monotonePattern(pats[0]) : 0;
+  if (dir !== 0) {
+    const draw = increasingAvoiderDraw(n, pats[0].length, dir);
+    if (draw) return (rng) => new Permutation(draw(rng));
+  }
   if (pats.length === 1 && pats[0].length === 2) {
     // avoiding 12 leaves only the decreasing permutation, avoiding 21 only the identity
     const a = Array.from({ length: n }, (_, i) => (pats[0][0] === 1 ? n - i : i + 1));
@@ -181,7 +192,7 @@ export function drawAvoiderByRejection(rng: fc.Random, p: AvoidersParam): Permut
   fail(
     `could not sample ${describe(p)}: none of ${REJECTION_TRIES} uniform permutations of 1..${p.n} avoided the patterns ` +
       `(the class is empty or too small a part of S_${p.n} for rejection). Exactly uniform samplers exist here only for one ` +
-      `pattern of length at most 3 at every size, and for other classes up to size ${TABLE_MAX_N} (the whole class is listed); ` +
+      `pattern of length at most 3 or 12...k or k...21 at every size, and for other classes up to size ${TABLE_MAX_N} (the whole class is listed); ` +
       `above that, samples come from rejection and stop when it fails. Sample smaller sizes`,
   );
 }
