@@ -36,7 +36,12 @@ interface Entry {
 
 const PARAMS: Record<string, Entry> = {
   permutations: { small: [[0], [1], [5], [9]], uniform: [[4], [5]] },
-  avoiders: { small: [[6, '1342'], [12, '4321'], [7, '321', '2143']], uniform: [[5, '1342'], [6, '231']] },
+  // one pattern of length 3 is sampled through a Dyck path bijection at every size (dyckBijections.ts),
+  // 12...k and k...21 through Robinson–Schensted (increasingAvoiders.ts)
+  avoiders: {
+    small: [[6, '1342'], [12, '4321'], [7, '321', '2143'], [30, '132'], [25, '321']],
+    uniform: [[5, '1342'], [6, '231'], [5, '123'], [5, '132'], [5, '213'], [5, '312'], [5, '321'], [6, '1234'], [5, '4321']],
+  },
   involutions: { small: [[0], [7], [30]], uniform: [[6]] },
   derangements: { small: [[2], [8], [40]], uniform: [[5], [6]] },
   matchings: { small: [[0], [4], [15]], uniform: [[4]] },

@@ -16,6 +16,9 @@ import { closedFormCount } from './avoiderCounts.js';
 import { avoidsAll, containsPattern, patternArg } from './patterns.js';
 import { comparePermutations, sizeArg } from './permutations.js';
 import { descentSwaps, entryDeletions } from './standardise.js';
+import { dyckBijectionFor } from './dyckBijections.js';
+import { randomDyckPath } from '../dyckPaths/dyckPaths.js';
+import { increasingAvoiderCount, increasingAvoiderDraw, monotonePattern } from './increasingAvoiders.js';
 
 export interface AvoidersParam {
   n: number;
@@ -25,7 +28,10 @@ export interface AvoidersParam {
   key: string;
 }
 
-/** Sizes up to this are sampled from the fully enumerated class; larger ones by rejection. */
+/**
+ * Without an exact sampler (exactDraw), sizes up to this are sampled from the fully enumerated
+ * class and larger ones by rejection, which works only while the class is a large enough part of S_n.
+ */
 const TABLE_MAX_N = 9;
 /** Rejection gives up after this many uniform permutations (LIBRARY.md §1: a bounded number of tries). */
 export const REJECTION_TRIES = 200_000;
@@ -118,6 +124,10 @@ function countAvoiders({ n, pats, key }: AvoidersParam): bigint {
   if (pats.length === 1) {
     const c = closedFormCount(n, pats[0]);
     if (c !== undefined) return c;
+    if (monotonePattern(pats[0]) !== 0) {
+      const m = increasingAvoiderCount(n, pats[0].length);
+      if (m !== undefined) return m;
+    }
   }
   const ck = `${n}|${key}`;
   const hit = countCache.get(ck);
@@ -184,6 +194,8 @@ export const avoiders: Family<AvoidersParam, Permutation> = defineFamily<Avoider
   },
   compare: comparePermutations,
   arbitrary(p) {
+    const exact = exactDraw(p);
+    if (exact) return new FamilyArbitrary(avoiders, p, exact);
     if (p.n <= TABLE_MAX_N) {
       const t = classTable(p);
       const size = t.length / Math.max(p.n, 1);
@@ -202,6 +214,30 @@ export const avoiders: Family<AvoidersParam, Permutation> = defineFamily<Avoider
 });
 
 /**
+ * An exactly uniform draw at every size, where one is known: one pattern of length 3 through a
+ * bijection with Dyck paths (dyckBijections.ts) from a uniform Dyck path; 12...k or k...21 through
+ * Robinson–Schensted (increasingAvoiders.ts) while its table of shapes is small; one pattern of length 2
+ * (a single avoider); patterns all longer than n (every permutation avoids them).
+ */
+function exactDraw(p: AvoidersParam): ((rng: fc.Random) => Permutation) | undefined {
+  const { n, pats } = p;
+  if (pats.every((q) => q.length > n)) return (rng) => new Permutation(fisherYates(rng, n));
+  const viaDyck = dyckBijectionFor(pats);
+  if (viaDyck) return (rng) => new Permutation(viaDyck(randomDyckPath(n, rng).steps));
+  const dir = pats.length === 1 ? monotonePattern(pats[0]) : 0;
+  if (dir !== 0) {
+    const draw = increasingAvoiderDraw(n, pats[0].length, dir);
+    if (draw) return (rng) => new Permutation(draw(rng));
+  }
+  if (pats.length === 1 && pats[0].length === 2) {
+    // avoiding 12 leaves only the decreasing permutation, avoiding 21 only the identity
+    const a = Array.from({ length: n }, (_, i) => (pats[0][0] === 1 ? n - i : i + 1));
+    return () => new Permutation(a.slice());
+  }
+  return undefined;
+}
+
+/**
  * Rejection from uniform permutations (Fisher–Yates): conditioned on avoiding the patterns, a
  * uniform permutation is exactly uniform on the class. Gives up after REJECTION_TRIES draws.
  */
@@ -212,7 +248,9 @@ export function drawAvoiderByRejection(rng: fc.Random, p: AvoidersParam): Permut
   }
   fail(
     `could not sample ${describe(p)}: none of ${REJECTION_TRIES} uniform permutations of 1..${p.n} avoided the patterns ` +
-      `(the class is empty or too small a part of S_${p.n} for rejection); sample smaller sizes`,
+      `(the class is empty or too small a part of S_${p.n} for rejection). Exactly uniform samplers exist here only for one ` +
+      `pattern of length at most 3 or 12...k or k...21 at every size, and for other classes up to size ${TABLE_MAX_N} (the whole class is listed); ` +
+      `above that, samples come from rejection and stop when it fails. Sample smaller sizes`,
   );
 }
 
