@@ -9,7 +9,8 @@
 import type * as fc from 'fast-check';
 import { uniformBelow } from '../common/arbitrary.js';
 import { hookWalk } from '../tableaux/standardTableaux.js';
-import { hookLengthCount } from '../tableaux/shapes.js';
+import { hookLengths } from '../tableaux/shapes.js';
+import { factorialBig } from './permutations.js';
 
 /** Above this many shapes the table of weights is not built (the exact sampler is then not offered). */
 export const MAX_SHAPES = 50_000;
@@ -52,8 +53,21 @@ function shapeTable(n: number, maxPart: number): ShapeTable | null {
   if (shapes) {
     const cumulative: bigint[] = [];
     let total = 0n;
+    const nFactorial = factorialBig(n);
     for (const s of shapes) {
-      const f = hookLengthCount(s);
+      // f^lambda = n! / product of hook lengths (Frame, Robinson and Thrall 1954), n! computed once;
+      // the hooks are multiplied as numbers while the product stays exact in a double
+      let den = 1n, run = 1;
+      for (const row of hookLengths(s)) {
+        for (const h of row) {
+          if (run * h > Number.MAX_SAFE_INTEGER) {
+            den *= BigInt(run);
+            run = 1;
+          }
+          run *= h;
+        }
+      }
+      const f = nFactorial / (den * BigInt(run));
       total += f * f;
       cumulative.push(total);
     }
