@@ -1,7 +1,6 @@
 // Rational functions: normal form, arithmetic through the language, text and record round trips.
 
 import { describe, expect, it } from 'vitest';
-import fc from 'fast-check';
 import { evaluate } from '../../../src/language/expr/index.js';
 import { valueToText, valueEquals, encodeValue } from '../../../src/values/operations.js';
 import { decodeValue } from '../../../src/values/decode.js';
