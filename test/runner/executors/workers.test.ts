@@ -59,7 +59,7 @@ describe('the worker pool', () => {
     expect(r.map((x: { outcome: string }) => x.outcome)).toEqual(['fails', 'fails', 'holds']);
     expect(r[0].counterexample.bindings).toEqual({ n: 3, u: { permutation: [1, 2, 3] }, w: { permutation: [1, 3, 2] } });
     expect(r[1].counterexample.phase).toBe('sample');
-  }, 60_000);
+  }, 300_000);
 
   it('4 shards written to 4 ledgers merge into the unsharded counts, same counterexample', () => {
     const dir = tempDir();
@@ -81,7 +81,7 @@ describe('the worker pool', () => {
       want.map((p: { size: object; cases: number }) => [p.size, p.cases]),
     );
     expect(holds.unfinished).toEqual([]);
-  }, 60_000);
+  }, 300_000);
 
   it('a run stopped by its budget inside a size resumes from its finished slices', () => {
     const dir = tempDir();
@@ -102,5 +102,5 @@ describe('the worker pool', () => {
     expect(r2.checked.reduce((s: number, p: { cases: number }) => s + p.cases, 0)).toBe(4037913);
     const status = JSON.parse(runCli(['status', 'big.yaml', '--json'], { cwd: dir }).stdout).conjectures[0];
     expect(status.exhaustive.map((e: { cases: number }) => e.cases).reduce((a: number, b: number) => a + b, 0)).toBe(4037913);
-  }, 60_000);
+  }, 300_000);
 });
