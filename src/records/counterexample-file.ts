@@ -211,8 +211,10 @@ export function writeCounterexampleFile(
   if (cx.phase === 'regression') {
     // The saved case still fails. Keep the file while it describes the conjecture as it stands;
     // after a change, rewrite it so that it holds the current conjecture (replayable as it is now).
+    // A regression case that was shrunk further is a new, simpler case: the file is rewritten.
     try {
-      if (readCounterexampleFile(path).hash === result.hash) return shown;
+      const saved = readCounterexampleFile(path);
+      if (saved.hash === result.hash && JSON.stringify(saved.bindings) === JSON.stringify(cx.bindings)) return shown;
     } catch {
       // unreadable: rewrite it below
     }

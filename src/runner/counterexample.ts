@@ -46,10 +46,20 @@ export function buildCounterexample(cc: CompiledConjecture, phase: Phase, values
  * is still a case of the conjecture (membership, ranges) and still fails; an old case that no longer
  * evaluates is simply not a counterexample.
  */
-export function regressionCounterexample(cc: CompiledConjecture, vals: Value[], sampleRanges: Map<string, [number, number]>): Counterexample | null {
+export function regressionCounterexample(
+  cc: CompiledConjecture,
+  vals: Value[],
+  sampleRanges: Map<string, [number, number]>,
+  hooks: RunHooks = {},
+): Counterexample | null {
   try {
     if (vals.length !== cc.bindings.length || !isValid(cc, vals, sampleRanges)) return null;
     if (evaluateCase(cc, frameFor(cc, vals)) !== 0) return null;
+    // A saved case must not freeze a worse one: shrink it too (the file is replaced when this finds
+    // a simpler case, e.g. after new shrink steps).
+    const before = sizeOf(cc, frameFor(cc, vals));
+    const shrunk = shrinkCase(cc, vals, sampleRanges, hooks);
+    if (shrunk.steps > 0) return buildCounterexample(cc, 'regression', shrunk.bindings, { shrinkSteps: shrunk.steps, shrunkFrom: before });
     return buildCounterexample(cc, 'regression', vals);
   } catch (e) {
     if (e instanceof EvalError) return null;

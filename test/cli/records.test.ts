@@ -50,7 +50,7 @@ const status = (d: string, ...args: string[]) => {
   return JSON.parse(r.stdout);
 };
 
-describe('status after runs', () => {
+describe('status after runs', { timeout: 120_000 }, () => {
   test('after a run: sizes with case counts; a failing conjecture agrees with expect: fails', () => {
     const d = project({ 'conjectures/a.yaml': INVERSE() + '---\n' + MAJ });
     expect(runCli(['check'], { cwd: d }).code).toBe(0);
@@ -162,7 +162,7 @@ sample:
   }, 180_000);
 });
 
-describe('damaged ledgers', () => {
+describe('damaged ledgers', { timeout: 120_000 }, () => {
   function checked(): { d: string; line: string } {
     const d = project({ 'conjectures/a.yaml': INVERSE('1..3') });
     runCli(['check'], { cwd: d });
@@ -207,7 +207,7 @@ describe('damaged ledgers', () => {
   });
 });
 
-describe('merge', () => {
+describe('merge', { timeout: 120_000 }, () => {
   test('ledgers of separate runs merge; duplicates go; status over the merge shows the union', () => {
     const d = project({ 'conjectures/a.yaml': INVERSE('1..6') });
     expect(runCli(['check', '--sizes', 'n=1..3', '--ledger', 'a.jsonl'], { cwd: d }).code).toBe(0);
@@ -241,7 +241,7 @@ describe('merge', () => {
   });
 });
 
-describe('counterexample files and replay', () => {
+describe('counterexample files and replay', { timeout: 120_000 }, () => {
   test('a failure writes counterexamples/<id>.yaml; replay exits 0 while it refutes, 1 when it no longer does, 2 when unreadable', () => {
     const d = project({ 'conjectures/a.yaml': MAJ });
     const r = runCli(['check'], { cwd: d });
@@ -299,7 +299,7 @@ describe('counterexample files and replay', () => {
   });
 });
 
-describe('init and junit', () => {
+describe('init and junit', { timeout: 120_000 }, () => {
   test('init writes hunch.yaml, an example and the union merge line; never overwrites', () => {
     const d = tempDir('hunch-init-');
     writeFileSync(join(d, '.gitattributes'), '*.png binary');
