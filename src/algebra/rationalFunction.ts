@@ -23,7 +23,7 @@ import { parsePolynomialText } from './polynomialText.js';
 import { fromTerms } from './polynomial.js';
 
 export class RationalFunction implements Structured {
-  readonly kind = 'rational function';
+  readonly kind = 'rationalFunction';
   /** Trusts its arguments (use makeRational otherwise): the normal form above. */
   constructor(
     readonly num: PolyLike,
@@ -49,7 +49,7 @@ export class RationalFunction implements Structured {
   }
 
   encode(): unknown {
-    return { 'rational function': this.toText() };
+    return { 'rationalFunction': this.toText() };
   }
 }
 
@@ -205,7 +205,7 @@ export function parseRationalText(text: string): RationalLike {
   return makeRational(parsePolynomialText(n), parsePolynomialText(t.slice(cut + 2, -1)));
 }
 
-registerDecoder('rational function', (x) => {
+registerDecoder('rationalFunction', (x) => {
   if (typeof x !== 'string') fail('a rational function is recorded as its text, such as "1/(q - 1)"');
   return parseRationalText(x);
 });

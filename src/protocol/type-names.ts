@@ -20,7 +20,7 @@ export const OBJECT_KINDS = [
   'permutation',
   'pipeDream',
   'polynomial',
-  'rational function',
+  'rationalFunction',
   'setPartition',
   'signedPermutation',
   'subset',

@@ -10,7 +10,7 @@ import type { Value } from './value.js';
 
 /** Kinds that compare with each other by `==` even though their types differ. */
 function comparableKinds(a: string, b: string): boolean {
-  const numeric = (t: string) => t === 'integer' || t === 'rational' || t === 'polynomial' || t === 'symmetric' || t === 'rational function';
+  const numeric = (t: string) => t === 'integer' || t === 'rational' || t === 'polynomial' || t === 'symmetric' || t === 'rationalFunction';
   return a === b || (numeric(a) && numeric(b));
 }
 

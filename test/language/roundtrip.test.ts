@@ -76,6 +76,7 @@ const KINDS: Array<[string, fc.Arbitrary<Value>]> = [
   ['parkingFunction', sized('parkingFunctions', 0, 5)],
   ['ideal', fromTexts(['ideal([x^2 - y, x*y - 1])', 'ideal([q])', 'matrixSchubertIdeal(perm([1, 3, 2]), z)', 'ideal([x, y^2, 3*x*y])'])],
   ['symmetric', fromTexts(['schurSym([2, 1]) * schurSym(1)', 'powerSym(3)', '(q + t)*schurSym([2]) - 3/2*elementarySym([1, 1])'])],
+  ['rationalFunction', fromTexts(['1/(1 - q)', '(q + t)/(1 - q*t)', 'q^-1 + 1/(q^2 + 1)', '(1 - q^3)/((1 - q)*(1 - t))'])],
 ];
 
 /** Kinds whose values hold code, so no text can rebuild them. */
