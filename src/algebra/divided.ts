@@ -16,12 +16,11 @@ export function dividedDifference(p: PolyLike, a: number, b: number): PolyLike {
   if (!isPolynomial(p)) return 0;
   // Lay p out over its variables together with a and b.
   const vars =
-    p.vars.includes(a) && p.vars.includes(b)
-      ? p.vars
-      : unionVars(p.vars, Int32Array.from([a, b].sort((u, v) => rankOf(u) - rankOf(v))));
+    p.vars.includes(a) && p.vars.includes(b) ? p.vars : unionVars(p.vars, Int32Array.from([a, b].sort((u, v) => rankOf(u) - rankOf(v))));
   const nv = vars.length;
   const exps = expandExps(p, vars);
-  const pa = vars.indexOf(a), pb = vars.indexOf(b);
+  const pa = vars.indexOf(a),
+    pb = vars.indexOf(b);
   const maxExp = new Int32Array(nv);
   for (let i = 0; i < exps.length; i += nv) for (let v = 0; v < nv; v++) if (exps[i + v] > maxExp[v]) maxExp[v] = exps[i + v];
   const top = Math.max(maxExp[pa], maxExp[pb]);
@@ -32,11 +31,13 @@ export function dividedDifference(p: PolyLike, a: number, b: number): PolyLike {
   const n = p.length;
   for (let t = 0; t < n; t++) {
     const off = t * nv;
-    const i = exps[off + pa], j = exps[off + pb];
+    const i = exps[off + pa],
+      j = exps[off + pb];
     if (i === j) continue;
     for (let v = 0; v < nv; v++) row[v] = exps[off + v];
     let coef: Scalar = p.coefs[t];
-    let hi = i, lo = j;
+    let hi = i,
+      lo = j;
     if (i < j) {
       coef = sneg(coef);
       hi = j;

@@ -52,8 +52,7 @@ export class Matrix implements Structured {
 
   /** Entry at 1-based row i, column j. */
   at(i: number, j: number): PolyLike {
-    if (i < 1 || i > this.rows || j < 1 || j > this.cols)
-      fail(`entry (${i}, ${j}) is outside a ${this.rows}×${this.cols} matrix`);
+    if (i < 1 || i > this.rows || j < 1 || j > this.cols) fail(`entry (${i}, ${j}) is outside a ${this.rows}×${this.cols} matrix`);
     return this.entries[(i - 1) * this.cols + (j - 1)];
   }
 
@@ -75,7 +74,9 @@ export class Matrix implements Structured {
   }
 
   toText(): string {
-    return `matrix([${this.rowList().map((r) => `[${r.map(polyText).join(', ')}]`).join(', ')}])`;
+    return `matrix([${this.rowList()
+      .map((r) => `[${r.map(polyText).join(', ')}]`)
+      .join(', ')}])`;
   }
 
   /** Numbers as in CLI.md (big ones and rationals as strings); polynomials as their text. */
@@ -184,7 +185,9 @@ export function polynomialDeterminant(a: readonly PolyLike[], cols: number, rows
   if (columns.length !== k) fail('a minor needs as many rows as columns');
   if (k === 0) return 1;
   if (k > POLYNOMIAL_DETERMINANT_MAX)
-    fail(`a determinant of a ${k}×${k} matrix of polynomials can have ${k}! terms; sizes up to ${POLYNOMIAL_DETERMINANT_MAX} are supported`);
+    fail(
+      `a determinant of a ${k}×${k} matrix of polynomials can have ${k}! terms; sizes up to ${POLYNOMIAL_DETERMINANT_MAX} are supported`,
+    );
   // memo over bitmasks of positions in `columns`, for the rows rows[k - popcount .. k-1].
   const memo = new Map<number, PolyLike>();
   const det = (mask: number, depth: number): PolyLike => {
@@ -192,7 +195,8 @@ export function polynomialDeterminant(a: readonly PolyLike[], cols: number, rows
     if (depth === k) return 1;
     const known = memo.get(mask);
     if (known !== undefined) return known;
-    let sum: PolyLike = 0, sign = 1;
+    let sum: PolyLike = 0,
+      sign = 1;
     const r = rows[depth];
     for (let c = 0; c < k; c++) {
       if (!(mask & (1 << c))) continue;
@@ -217,7 +221,8 @@ function gcdBig(a: bigint, b: bigint): bigint {
 
 /** Rank over the rationals, by Gaussian elimination. */
 export function rank(m: Matrix): number {
-  const r = m.rows, c = m.cols;
+  const r = m.rows,
+    c = m.cols;
   const a = numericEntries(m, 'the rank');
   let rk = 0;
   for (let col = 0; col < c && rk < r; col++) {
@@ -263,11 +268,19 @@ export function matrixProduct(a: Matrix, b: Matrix): Matrix {
 
 export function matrixSum(a: Matrix, b: Matrix): Matrix {
   if (a.rows !== b.rows || a.cols !== b.cols) fail(`cannot add a ${a.rows}×${a.cols} matrix and a ${b.rows}×${b.cols} matrix`);
-  return new Matrix(a.rows, a.cols, a.entries.map((x, i) => padd(x, b.entries[i])));
+  return new Matrix(
+    a.rows,
+    a.cols,
+    a.entries.map((x, i) => padd(x, b.entries[i])),
+  );
 }
 
 export function matrixScale(c: PolyLike, m: Matrix): Matrix {
-  return new Matrix(m.rows, m.cols, m.entries.map((x) => pmul(c, x)));
+  return new Matrix(
+    m.rows,
+    m.cols,
+    m.entries.map((x) => pmul(c, x)),
+  );
 }
 
 /** M^k for k >= 0 (square M), by repeated squaring. */
@@ -275,7 +288,8 @@ export function matrixPower(m: Matrix, k: number): Matrix {
   requireSquare(m, 'a matrix power');
   if (k < 0) fail(`negative powers of matrices are not supported (power ${k})`);
   if (k > 16 && !m.isNumeric()) fail(`powers of a matrix of polynomials are limited to 16 (power ${k}): the entries grow too fast`);
-  let r = Matrix.identity(m.rows), b = m;
+  let r = Matrix.identity(m.rows),
+    b = m;
   while (k > 0) {
     if (k & 1) r = matrixProduct(r, b);
     k = Math.floor(k / 2);
@@ -319,7 +333,11 @@ export function charpoly(m: Matrix, t: PolyLike): PolyLike {
 
 export function matrixDifference(a: Matrix, b: Matrix): Matrix {
   if (a.rows !== b.rows || a.cols !== b.cols) fail(`cannot subtract a ${b.rows}×${b.cols} matrix from a ${a.rows}×${a.cols} matrix`);
-  return new Matrix(a.rows, a.cols, a.entries.map((x, i) => psub(x, b.entries[i])));
+  return new Matrix(
+    a.rows,
+    a.cols,
+    a.entries.map((x, i) => psub(x, b.entries[i])),
+  );
 }
 
 export function matrixNegate(m: Matrix): Matrix {

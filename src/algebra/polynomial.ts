@@ -47,7 +47,8 @@ export class Polynomial implements Structured {
 
   /** Largest exponent of each variable (by position in vars). */
   maxExps(): Int32Array {
-    const nv = this.nv, out = new Int32Array(nv);
+    const nv = this.nv,
+      out = new Int32Array(nv);
     for (let t = 0; t < this.coefs.length; t++)
       for (let v = 0; v < nv; v++) if (this.exps[t * nv + v] > out[v]) out[v] = this.exps[t * nv + v];
     return out;
@@ -136,7 +137,8 @@ export function indexedVariable(base: string, index: number): Polynomial {
  * PolyLike: drops variables that no longer occur and returns constants as Scalars.
  */
 export function makePolynomial(vars: Int32Array, exps: Int32Array, coefs: Scalar[]): PolyLike {
-  const nv = vars.length, n = coefs.length;
+  const nv = vars.length,
+    n = coefs.length;
   if (n === 0) return 0;
   const used = new Uint8Array(nv);
   let nUsed = 0;
@@ -169,8 +171,7 @@ export function fromTerms(vars: readonly number[], terms: Iterable<[ArrayLike<nu
   const list = [...terms];
   const nv = order.length;
   const maxExp = new Array(nv).fill(0);
-  for (const [e] of list)
-    for (let k = 0; k < nv; k++) if (e[pos[k]] > maxExp[k]) maxExp[k] = e[pos[k]];
+  for (const [e] of list) for (let k = 0; k < nv; k++) if (e[pos[k]] > maxExp[k]) maxExp[k] = e[pos[k]];
   const c = new TermCollector(nv, maxExp, list.length);
   const row = new Int32Array(nv);
   for (const [e, coef] of list) {
@@ -184,11 +185,16 @@ export function fromTerms(vars: readonly number[], terms: Iterable<[ArrayLike<nu
 export function unionVars(a: Int32Array, b: Int32Array): Int32Array {
   if (a.length === b.length) {
     let same = true;
-    for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) { same = false; break; }
+    for (let i = 0; i < a.length; i++)
+      if (a[i] !== b[i]) {
+        same = false;
+        break;
+      }
     if (same) return a;
   }
   const out: number[] = [];
-  let i = 0, j = 0;
+  let i = 0,
+    j = 0;
   while (i < a.length || j < b.length) {
     if (j >= b.length || (i < a.length && rankOf(a[i]) < rankOf(b[j]))) out.push(a[i++]);
     else if (i >= a.length || rankOf(b[j]) < rankOf(a[i])) out.push(b[j++]);
@@ -203,7 +209,9 @@ export function unionVars(a: Int32Array, b: Int32Array): Int32Array {
 /** The exponent rows of p laid out over `vars` (a superset of p.vars, in rank order). */
 export function expandExps(p: Polynomial, vars: Int32Array): Int32Array {
   if (vars === p.vars || vars.length === p.nv) return p.exps;
-  const nv = vars.length, pn = p.nv, n = p.coefs.length;
+  const nv = vars.length,
+    pn = p.nv,
+    n = p.coefs.length;
   const where = new Int32Array(pn);
   for (let k = 0, v = 0; k < pn; k++) {
     while (vars[v] !== p.vars[k]) v++;
@@ -218,12 +226,17 @@ export function expandExps(p: Polynomial, vars: Int32Array): Int32Array {
 function scale(p: Polynomial, c: Scalar): PolyLike {
   if (sisZero(c)) return 0;
   if (c === 1) return p;
-  return new Polynomial(p.vars, p.exps, p.coefs.map((x) => mulScalars(x, c)));
+  return new Polynomial(
+    p.vars,
+    p.exps,
+    p.coefs.map((x) => mulScalars(x, c)),
+  );
 }
 
 function addConstant(p: Polynomial, c: Scalar): PolyLike {
   if (sisZero(c)) return p;
-  const n = p.coefs.length, nv = p.nv;
+  const n = p.coefs.length,
+    nv = p.nv;
   // The constant term's place: last for an ordinary polynomial, before the terms of negative
   // degree (or of degree 0 below 1 in the lex order) for a Laurent polynomial.
   const zero = new Int32Array(nv);
@@ -256,12 +269,16 @@ export function padd(a: PolyLike, b: PolyLike): PolyLike {
     return addConstant(b, a);
   }
   if (!(b instanceof Polynomial)) return addConstant(a, b);
-  const vars = unionVars(a.vars, b.vars), nv = vars.length;
-  const ea = expandExps(a, vars), eb = expandExps(b, vars);
-  const na = a.coefs.length, nb = b.coefs.length;
+  const vars = unionVars(a.vars, b.vars),
+    nv = vars.length;
+  const ea = expandExps(a, vars),
+    eb = expandExps(b, vars);
+  const na = a.coefs.length,
+    nb = b.coefs.length;
   const exps = new Int32Array((na + nb) * nv);
   const coefs: Scalar[] = [];
-  let i = 0, j = 0;
+  let i = 0,
+    j = 0;
   const put = (src: Int32Array, t: number, c: Scalar) => {
     exps.set(src.subarray(t * nv, t * nv + nv), coefs.length * nv);
     coefs.push(c);
@@ -295,11 +312,15 @@ export function pmul(a: PolyLike, b: PolyLike): PolyLike {
     return scale(b, a);
   }
   if (!(b instanceof Polynomial)) return scale(a, b);
-  const vars = unionVars(a.vars, b.vars), nv = vars.length;
-  const ea = expandExps(a, vars), eb = expandExps(b, vars);
-  const ma = maxOver(ea, nv), mb = maxOver(eb, nv);
+  const vars = unionVars(a.vars, b.vars),
+    nv = vars.length;
+  const ea = expandExps(a, vars),
+    eb = expandExps(b, vars);
+  const ma = maxOver(ea, nv),
+    mb = maxOver(eb, nv);
   for (let v = 0; v < nv; v++) ma[v] += mb[v];
-  const na = a.coefs.length, nb = b.coefs.length;
+  const na = a.coefs.length,
+    nb = b.coefs.length;
   const c = new TermCollector(nv, ma, na + nb);
   const row = new Int32Array(nv);
   for (let i = 0; i < na; i++) {
@@ -324,9 +345,14 @@ export function ppow(a: PolyLike, e: number): PolyLike {
   if (!(a instanceof Polynomial)) return spow(a, e);
   if (e < 0) {
     if (a.length !== 1) fail(`only a monomial has a Laurent polynomial as a negative power, not ${a.toText()} (to the power ${e})`);
-    return new Polynomial(a.vars, a.exps.map((x) => x * e), [spow(a.coefs[0], e)]);
+    return new Polynomial(
+      a.vars,
+      a.exps.map((x) => x * e),
+      [spow(a.coefs[0], e)],
+    );
   }
-  let result: PolyLike = 1, base: PolyLike = a;
+  let result: PolyLike = 1,
+    base: PolyLike = a;
   while (e > 0) {
     if (e & 1) result = pmul(result, base);
     e = Math.floor(e / 2);
@@ -347,7 +373,8 @@ export function polyText(a: PolyLike): string {
 
 /** The smallest exponent of each of `vars` (a superset of p's variables) over p's terms. */
 export function minExps(p: Polynomial, vars: Int32Array): Int32Array {
-  const e = expandExps(p, vars), nv = vars.length;
+  const e = expandExps(p, vars),
+    nv = vars.length;
   const out = e.slice(0, nv);
   for (let i = nv; i < e.length; i += nv) for (let v = 0; v < nv; v++) if (e[i + v] < out[v]) out[v] = e[i + v];
   return out;
@@ -360,7 +387,8 @@ export function shiftPolynomial(p: PolyLike, vars: Int32Array, delta: Int32Array
     return makePolynomial(vars, delta.slice(), [p]);
   }
   // Multiplying by a monomial keeps the graded lex order of the terms.
-  const e = expandExps(p, vars).slice(), nv = vars.length;
+  const e = expandExps(p, vars).slice(),
+    nv = vars.length;
   for (let i = 0; i < e.length; i += nv) for (let v = 0; v < nv; v++) e[i + v] += delta[v];
   return makePolynomial(vars, e, p.coefs.slice());
 }
@@ -374,11 +402,17 @@ export function pdivExact(a: PolyLike, b: PolyLike): PolyLike {
     // Divide out the largest monomial factors: a = m_a a', b = m_b b' with a', b' ordinary
     // polynomials divisible by no variable. Then b | a iff b' | a' (no variable divides b').
     const vars = a instanceof Polynomial ? unionVars(a.vars, b.vars) : b.vars;
-    const ma = a instanceof Polynomial ? minExps(a, vars) : new Int32Array(vars.length), mb = minExps(b, vars);
+    const ma = a instanceof Polynomial ? minExps(a, vars) : new Int32Array(vars.length),
+      mb = minExps(b, vars);
     const neg = (m: Int32Array) => m.map((x) => -x);
-    const a1 = shiftPolynomial(a, vars, neg(ma)), b1 = shiftPolynomial(b, vars, neg(mb));
+    const a1 = shiftPolynomial(a, vars, neg(ma)),
+      b1 = shiftPolynomial(b, vars, neg(mb));
     const q = pdivOrdinary(a1, b1, () => fail(`${polyText(a)} is not divisible by ${b.toText()}`));
-    return shiftPolynomial(q, vars, ma.map((x, v) => x - mb[v]));
+    return shiftPolynomial(
+      q,
+      vars,
+      ma.map((x, v) => x - mb[v]),
+    );
   }
   return pdivOrdinary(a, b, () => fail(`${polyText(a)} is not divisible by ${polyText(b)}`));
 }
@@ -400,8 +434,10 @@ function pdivOrdinary(a: PolyLike, b: PolyLike, notDivisible: () => never): Poly
   let q: PolyLike = 0;
   while (r instanceof Polynomial) {
     if (r.termDegree(0) < bDeg) notDivisible();
-    const vars = unionVars(r.vars, b.vars), nv = vars.length;
-    const er = expandExps(r, vars), eb = expandExps(b, vars);
+    const vars = unionVars(r.vars, b.vars),
+      nv = vars.length;
+    const er = expandExps(r, vars),
+      eb = expandExps(b, vars);
     const mono = new Int32Array(nv);
     for (let v = 0; v < nv; v++) {
       mono[v] = er[v] - eb[v];

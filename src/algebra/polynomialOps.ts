@@ -5,8 +5,19 @@ import { fail } from '../base/errors.js';
 import type { Scalar } from '../numbers/rational.js';
 import { sisZero } from '../numbers/scalar.js';
 import {
-  expandExps, fromCollector, fromTerms, isPolynomial, makePolynomial, maxOver, padd, pmul, polyText, ppow, unionVars,
-  type Polynomial, type PolyLike,
+  expandExps,
+  fromCollector,
+  fromTerms,
+  isPolynomial,
+  makePolynomial,
+  maxOver,
+  padd,
+  pmul,
+  polyText,
+  ppow,
+  unionVars,
+  type Polynomial,
+  type PolyLike,
 } from './polynomial.js';
 import { mulScalars, TermCollector } from './terms.js';
 import { varName } from './variables.js';
@@ -34,7 +45,11 @@ export function coefficientOf(p: PolyLike, mono: Map<number, number>): Scalar {
   const want = Array.from(p.vars, (id) => mono.get(id) ?? 0);
   for (let t = 0; t < p.length; t++) {
     let ok = true;
-    for (let v = 0; v < nv; v++) if (p.exps[t * nv + v] !== want[v]) { ok = false; break; }
+    for (let v = 0; v < nv; v++)
+      if (p.exps[t * nv + v] !== want[v]) {
+        ok = false;
+        break;
+      }
     if (ok) return p.coefs[t];
   }
   return 0;
@@ -44,8 +59,7 @@ export function coefficientOf(p: PolyLike, mono: Map<number, number>): Scalar {
 export function termsOf(p: PolyLike): PolyLike[] {
   if (!isPolynomial(p)) return sisZero(p) ? [] : [p];
   const out: PolyLike[] = [];
-  for (let t = 0; t < p.length; t++)
-    out.push(makePolynomial(p.vars, p.exps.slice(t * p.nv, (t + 1) * p.nv), [p.coefs[t]]));
+  for (let t = 0; t < p.length; t++) out.push(makePolynomial(p.vars, p.exps.slice(t * p.nv, (t + 1) * p.nv), [p.coefs[t]]));
   return out;
 }
 
@@ -151,7 +165,8 @@ function substitutePolynomials(p: Polynomial, target: (PolyLike | undefined)[]):
   const c = new TermCollector(NV, bound, p.length);
   // The partial products of one term: rows over vars with their coefficients.
   const single = new Int32Array(NV);
-  let rows = single, coefs: Scalar[] = [];
+  let rows = single,
+    coefs: Scalar[] = [];
   for (let t = 0; t < p.length; t++) {
     rows = single;
     rows.fill(0);
@@ -162,7 +177,8 @@ function substitutePolynomials(p: Polynomial, target: (PolyLike | undefined)[]):
       const e = p.exps[t * nv + v];
       if (e === 0 || target[v] === undefined) continue;
       const pw = powerOf(v, e);
-      const k = coefs.length, m = pw.coefs.length;
+      const k = coefs.length,
+        m = pw.coefs.length;
       if (m === 1) {
         // A monomial value: every partial product stays one product.
         for (let a = 0; a < k; a++) {
@@ -206,7 +222,9 @@ export function univariateCoefficients(p: PolyLike, id: number): Scalar[] {
     fail(`${polyText(p)} is not a polynomial in ${varName(id)} alone: it also contains ${others.map(varName).join(', ')}`);
   for (let t = 0; t < p.length; t++)
     if (p.exps[t] < 0)
-      fail(`${polyText(p)} has a negative power of ${varName(id)}: a coefficient list starts at degree 0 (use coefficient(p, ${varName(id)}, k))`);
+      fail(
+        `${polyText(p)} has a negative power of ${varName(id)}: a coefficient list starts at degree 0 (use coefficient(p, ${varName(id)}, k))`,
+      );
   const d = p.exps[0];
   const out: Scalar[] = new Array(d + 1).fill(0);
   for (let t = 0; t < p.length; t++) out[p.exps[t]] = p.coefs[t];

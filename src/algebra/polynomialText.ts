@@ -17,7 +17,9 @@ export function parsePolynomialText(text: string): PolyLike {
   if (src === '') fail('an empty text is not a polynomial');
   // Split into signed terms at + and - outside brackets.
   const terms: { sign: 1 | -1; body: string }[] = [];
-  let depth = 0, start = 0, sign: 1 | -1 = 1;
+  let depth = 0,
+    start = 0,
+    sign: 1 | -1 = 1;
   let i = 0;
   if (src[0] === '-') {
     sign = -1;
@@ -41,7 +43,10 @@ export function parsePolynomialText(text: string): PolyLike {
     if (body === '') fail(`cannot read ${JSON.stringify(text)} as a polynomial: an empty term`);
     let coef: Scalar = 1;
     const mono = new Map<number, number>();
-    for (const [k, f] of body.split('*').map((x) => x.trim()).entries()) {
+    for (const [k, f] of body
+      .split('*')
+      .map((x) => x.trim())
+      .entries()) {
       if (/^\d+(\/\d+)?$/.test(f)) {
         if (k !== 0) fail(`cannot read ${JSON.stringify(text)} as a polynomial: a coefficient must come first in its term`);
         coef = parseScalar(f);

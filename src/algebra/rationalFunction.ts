@@ -15,8 +15,20 @@ import { sdiv, sisZero, smul, sneg, ssub } from '../numbers/scalar.js';
 import { registerDecoder } from '../protocol/decode.js';
 import type { Structured } from '../protocol/structured.js';
 import {
-  isPolynomial, minExps, padd, pdivExact, pequals, pmul, pneg, polyText, ppow, psub, shiftPolynomial, unionVars,
-  Polynomial, type PolyLike,
+  isPolynomial,
+  minExps,
+  padd,
+  pdivExact,
+  pequals,
+  pmul,
+  pneg,
+  polyText,
+  ppow,
+  psub,
+  shiftPolynomial,
+  unionVars,
+  Polynomial,
+  type PolyLike,
 } from './polynomial.js';
 import { univariateCoefficients } from './polynomialOps.js';
 import { parsePolynomialText } from './polynomialText.js';
@@ -49,7 +61,7 @@ export class RationalFunction implements Structured {
   }
 
   encode(): unknown {
-    return { 'rationalFunction': this.toText() };
+    return { rationalFunction: this.toText() };
   }
 }
 
@@ -76,7 +88,8 @@ export function makeRational(num: PolyLike, den: PolyLike): RationalLike {
     for (let v = 0; v < m.length; v++) if (mn[v] < m[v]) m[v] = mn[v];
   } else for (let v = 0; v < m.length; v++) if (m[v] > 0) m[v] = 0;
   const negM = m.map((x) => -x);
-  let n = shiftPolynomial(num, vars, negM), d = shiftPolynomial(den, vars, negM);
+  let n = shiftPolynomial(num, vars, negM),
+    d = shiftPolynomial(den, vars, negM);
   if (vars.length === 1 && isPolynomial(d)) {
     const g = univariateGcd(n, d, vars[0]);
     if (isPolynomial(g)) {
@@ -94,7 +107,8 @@ export function makeRational(num: PolyLike, den: PolyLike): RationalLike {
   // The denominator primitive over the integers with a positive first term.
   const c = content(d);
   const s = isNegative(d.coefs[0]) ? sneg(c) : c;
-  const dn = pdivExact(d, s) as Polynomial, nn = pdivExact(n, s);
+  const dn = pdivExact(d, s) as Polynomial,
+    nn = pdivExact(n, s);
   return new RationalFunction(nn, dn);
 }
 
@@ -104,7 +118,8 @@ function isNegative(c: Scalar): boolean {
 
 /** gcd of the numerators over lcm of the denominators of p's coefficients (positive). */
 function content(p: Polynomial): Scalar {
-  let g = 0n, l = 1n;
+  let g = 0n,
+    l = 1n;
   for (const c of p.coefs) {
     const [a, b] = c instanceof Rat ? [c.num, c.den] : [toBig(c), 1n];
     g = bigGcd(g, a < 0n ? -a : a);
@@ -125,7 +140,8 @@ function tryDivide(a: PolyLike, b: PolyLike): PolyLike | undefined {
 
 /** The monic gcd of two ordinary polynomials in the one variable `id`, by Euclid's algorithm over Q. */
 export function univariateGcd(a: PolyLike, b: PolyLike, id: number): PolyLike {
-  let x = univariateCoefficients(a, id), y = univariateCoefficients(b, id);
+  let x = univariateCoefficients(a, id),
+    y = univariateCoefficients(b, id);
   while (y.length > 0) {
     const r = remainder(x, y);
     x = y;
@@ -142,7 +158,8 @@ export function univariateGcd(a: PolyLike, b: PolyLike, id: number): PolyLike {
 /** The remainder of x by y (coefficient lists, lowest degree first, no trailing zeros). */
 function remainder(x: Scalar[], y: Scalar[]): Scalar[] {
   const r = x.slice();
-  const dy = y.length - 1, ly = y[dy];
+  const dy = y.length - 1,
+    ly = y[dy];
   for (let k = r.length - 1; k >= dy; k--) {
     if (sisZero(r[k])) continue;
     const f = sdiv(r[k], ly);
@@ -159,7 +176,8 @@ export function partsOf(a: RationalLike): [PolyLike, PolyLike] {
 }
 
 export function rfAdd(a: RationalLike, b: RationalLike): RationalLike {
-  const [an, ad] = partsOf(a), [bn, bd] = partsOf(b);
+  const [an, ad] = partsOf(a),
+    [bn, bd] = partsOf(b);
   return makeRational(padd(pmul(an, bd), pmul(bn, ad)), pmul(ad, bd));
 }
 
@@ -168,17 +186,20 @@ export function rfNeg(a: RationalLike): RationalLike {
 }
 
 export function rfSub(a: RationalLike, b: RationalLike): RationalLike {
-  const [an, ad] = partsOf(a), [bn, bd] = partsOf(b);
+  const [an, ad] = partsOf(a),
+    [bn, bd] = partsOf(b);
   return makeRational(psub(pmul(an, bd), pmul(bn, ad)), pmul(ad, bd));
 }
 
 export function rfMul(a: RationalLike, b: RationalLike): RationalLike {
-  const [an, ad] = partsOf(a), [bn, bd] = partsOf(b);
+  const [an, ad] = partsOf(a),
+    [bn, bd] = partsOf(b);
   return makeRational(pmul(an, bn), pmul(ad, bd));
 }
 
 export function rfDiv(a: RationalLike, b: RationalLike): RationalLike {
-  const [an, ad] = partsOf(a), [bn, bd] = partsOf(b);
+  const [an, ad] = partsOf(a),
+    [bn, bd] = partsOf(b);
   if (!isPolynomial(bn) && sisZero(bn)) fail(`division by zero: ${rfText(a)} / 0`);
   return makeRational(pmul(an, bd), pmul(ad, bn));
 }

@@ -30,12 +30,12 @@ export function trimFixedTail(a: readonly number[]): number[] {
 function topClass(kind: SchubertKind, m: number, x: string, y: string): PolyLike {
   if (kind === 'double') {
     let p: PolyLike = 1;
-    for (let i = 1; i < m; i++)
-      for (let j = 1; i + j <= m; j++) p = pmul(p, psub(variable(`${x}[${i}]`), variable(`${y}[${j}]`)));
+    for (let i = 1; i < m; i++) for (let j = 1; i + j <= m; j++) p = pmul(p, psub(variable(`${x}[${i}]`), variable(`${y}[${j}]`)));
     return p;
   }
   // x[1]^{m-1} x[2]^{m-2} ... x[m-1]
-  const ids: number[] = [], e: number[] = [];
+  const ids: number[] = [],
+    e: number[] = [];
   for (let i = 1; i < m; i++) {
     ids.push(indexedVarId(x, i));
     e.push(m - i);
@@ -83,7 +83,8 @@ export function schubertFamily(kind: SchubertKind, a: readonly number[], x: stri
   let p: PolyLike = start;
   for (let s = path.length - 1; s >= 0; s--) {
     const { key: k, i } = path[s];
-    const a1 = indexedVarId(x, i), a2 = indexedVarId(x, i + 1);
+    const a1 = indexedVarId(x, i),
+      a2 = indexedVarId(x, i + 1);
     p = kind === 'grothendieck' ? isobaricDividedDifference(p, a1, a2, variable(`${x}[${i + 1}]`)) : dividedDifference(p, a1, a2);
     memo.set(k, p);
   }
@@ -110,5 +111,3 @@ export function clearSchubertMemo(): void {
 export function schubertMemoSize(): number {
   return memo.size;
 }
-
-

@@ -23,7 +23,8 @@ export function coefficientsByPower(p: PolyLike, id: number): Map<number, PolyLi
     out.set(0, p);
     return out;
   }
-  const nv = p.nv, groups = new Map<number, [number[], Scalar][]>();
+  const nv = p.nv,
+    groups = new Map<number, [number[], Scalar][]>();
   for (let t = 0; t < p.length; t++) {
     const row = Array.from(p.exps.subarray(t * nv, (t + 1) * nv));
     const e = row[v];
@@ -39,14 +40,13 @@ export function coefficientsByPower(p: PolyLike, id: number): Map<number, PolyLi
 /** The coefficient of id^k in f (a number, Laurent polynomial or rational function). */
 export function seriesCoefficient(f: RationalLike, id: number, k: number): PolyLike {
   if (!isRationalFunction(f)) return coefficientsByPower(f, id).get(k) ?? 0;
-  const a = coefficientsByPower(f.num, id), dm = coefficientsByPower(f.den, id);
+  const a = coefficientsByPower(f.num, id),
+    dm = coefficientsByPower(f.den, id);
   const m = Math.min(...dm.keys());
   const d0 = dm.get(m)!;
   const q = varName(id);
   if (!isScalar(d0))
-    fail(
-      `coefficient(f, ${q}, k) needs a denominator whose lowest coefficient in ${q} is a number; ${f.den.toText()} has ${polyText(d0)}`,
-    );
+    fail(`coefficient(f, ${q}, k) needs a denominator whose lowest coefficient in ${q} is a number; ${f.den.toText()} has ${polyText(d0)}`);
   const K = k + m;
   if (K < 0) return 0; // the numerator has no negative powers of q
   const d: PolyLike[] = [];

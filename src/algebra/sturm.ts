@@ -85,10 +85,11 @@ function divideOut(a: IntPoly, b: IntPoly): IntPoly {
 }
 
 function signChanges(values: bigint[]): number {
-  let changes = 0, last = 0n;
+  let changes = 0,
+    last = 0n;
   for (const v of values) {
     if (v === 0n) continue;
-    if (last !== 0n && (v < 0n) !== (last < 0n)) changes++;
+    if (last !== 0n && v < 0n !== last < 0n) changes++;
     last = v;
   }
   return changes;

@@ -19,7 +19,8 @@ function bitLength(n: number): number {
 
 /** Graded lexicographic comparison of two exponent vectors: positive when (ea, ia) comes first. */
 export function compareMonomials(ea: Int32Array, ia: number, eb: Int32Array, ib: number, nv: number): number {
-  let da = 0, db = 0;
+  let da = 0,
+    db = 0;
   for (let v = 0; v < nv; v++) {
     da += ea[ia + v];
     db += eb[ib + v];
@@ -66,7 +67,8 @@ export class TermCollector {
 
   constructor(nv: number, maxExp: ArrayLike<number>, capacity = 16) {
     this.nv = nv;
-    let bits = 0, maxDeg = 0;
+    let bits = 0,
+      maxDeg = 0;
     const widths: number[] = [];
     for (let v = 0; v < nv; v++) {
       const w = bitLength(maxExp[v]);
@@ -101,7 +103,8 @@ export class TermCollector {
     }
     if (this.packed) {
       // Packed keys are merged only when sorting (no hashing per term).
-      let key = 0, deg = 0;
+      let key = 0,
+        deg = 0;
       for (let v = 0; v < nv; v++) {
         const e = src[off + v];
         deg += e;
@@ -132,7 +135,10 @@ export class TermCollector {
   /** Switch to string keys (a Laurent monomial arrived), re-adding the terms collected so far. */
   private unpack(): void {
     this.packed = false;
-    const nv = this.nv, n = this.count, ex = this.exps, co = this.coefs.slice();
+    const nv = this.nv,
+      n = this.count,
+      ex = this.exps,
+      co = this.coefs.slice();
     this.count = 0;
     this.coefs.length = 0;
     this.keys.length = 0;
@@ -144,7 +150,10 @@ export class TermCollector {
   /** The nonzero terms in descending monomial order: [exps (flat), coefs]. */
   sorted(): { exps: Int32Array; coefs: Scalar[] } {
     if (!this.packed) return this.sortedByComparator();
-    const n = this.count, nv = this.nv, ex = this.exps, keys = this.keys;
+    const n = this.count,
+      nv = this.nv,
+      ex = this.exps,
+      keys = this.keys;
     const idxBits = bitLength(n);
     let order: Int32Array, groupKeys: Float64Array;
     if (this.keyBits + idxBits <= 52) {
@@ -185,7 +194,8 @@ export class TermCollector {
   }
 
   private sortedByComparator(): { exps: Int32Array; coefs: Scalar[] } {
-    const nv = this.nv, ex = this.exps;
+    const nv = this.nv,
+      ex = this.exps;
     const order: number[] = [];
     for (let i = 0; i < this.count; i++) if (!sisZero(this.coefs[i])) order.push(i);
     order.sort((a, b) => compareMonomials(ex, b * nv, ex, a * nv, nv));

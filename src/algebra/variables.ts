@@ -18,7 +18,8 @@ let ranks = new Int32Array(0);
 
 function compareNames(a: number, b: number): number {
   if (bases[a] !== bases[b]) return bases[a] < bases[b] ? -1 : 1;
-  const ia = indexLists[a], ib = indexLists[b];
+  const ia = indexLists[a],
+    ib = indexLists[b];
   const n = Math.min(ia.length, ib.length);
   for (let k = 0; k < n; k++) if (ia[k] !== ib[k]) return ia[k] - ib[k];
   return ia.length - ib.length;

@@ -82,11 +82,15 @@ export function check(c: Conjecture, options: ApiCheckOptions = {}): ConjectureR
   const writer = ledgerPath ? new LedgerWriter(ledgerPath) : null;
   const regression = options.regression ?? (options.regressionFirst === false ? null : readRegressionCase(c.project.root, c.spec));
   try {
-    const r = checkConjecture(c.compiled, { ...options, regression }, {
-      shouldStop: () => (performance.now() > deadline ? 'budget' : null),
-      onProgress: options.onProgress,
-      onPiece: (p) => writer?.piece(c.id, c.compiled.hash, p),
-    });
+    const r = checkConjecture(
+      c.compiled,
+      { ...options, regression },
+      {
+        shouldStop: () => (performance.now() > deadline ? 'budget' : null),
+        onProgress: options.onProgress,
+        onPiece: (p) => writer?.piece(c.id, c.compiled.hash, p),
+      },
+    );
     writer?.result(r);
     return r;
   } finally {

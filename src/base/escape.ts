@@ -17,5 +17,9 @@ export function escapeControl(text: string, oneLine = false): string {
 
 /** True when the text holds a character escapeControl would change. */
 export function hasControl(text: string, oneLine = false): boolean {
-  return (oneLine ? /[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/ : /[\u0000-\u0008\u000b-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/).test(text);
+  return (
+    oneLine
+      ? /[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/
+      : /[\u0000-\u0008\u000b-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/
+  ).test(text);
 }

@@ -21,7 +21,9 @@ export function readInputFile(path: string, what: string, limit = MAX_INPUT_BYTE
     if (st.isDirectory()) throw new InputError(`cannot read ${what} ${path}: it is a folder`);
     if (!st.isFile()) throw new InputError(`refusing to read ${what} ${path}: it is not a regular file (a FIFO, device or socket)`);
     if (st.size > limit)
-      throw new InputError(`refusing to read ${what} ${path}: it has ${st.size.toLocaleString('en-US')} bytes, more than the ${limit.toLocaleString('en-US')} an input may have`);
+      throw new InputError(
+        `refusing to read ${what} ${path}: it has ${st.size.toLocaleString('en-US')} bytes, more than the ${limit.toLocaleString('en-US')} an input may have`,
+      );
     return readFileSync(fd, 'utf8');
   } finally {
     closeSync(fd);

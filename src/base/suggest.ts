@@ -2,7 +2,8 @@
 
 /** Edit distance where swapping two neighbouring letters counts as one edit (optimal string alignment). */
 export function editDistance(a: string, b: string): number {
-  const m = a.length, n = b.length;
+  const m = a.length,
+    n = b.length;
   const d: number[][] = Array.from({ length: m + 1 }, (_, i) => {
     const row = new Array<number>(n + 1).fill(0);
     row[0] = i;

@@ -11,7 +11,9 @@ import { commands } from './commands/index.js';
 export async function main(argv: string[]): Promise<number> {
   const t = makeTerminal({ ascii: argv.includes('--ascii') });
   const program = new Command('hunch')
-    .description('Check conjectures in algebraic combinatorics: every small case exhaustively, large ones at random, with the smallest counterexample and a ledger of what was checked.')
+    .description(
+      'Check conjectures in algebraic combinatorics: every small case exhaustively, large ones at random, with the smallest counterexample and a ledger of what was checked.',
+    )
     .version(TOOL_VERSION, '--version', 'print the version')
     .exitOverride()
     .configureOutput({

@@ -6,7 +6,8 @@ import { InputError } from '../base/errors.js';
 export function parseRangeOption(text: string, option: string): [string, number, number] {
   const m = /^\s*([A-Za-z_][A-Za-z0-9_]*)\s*=\s*(-?\d+)\s*(?:\.\.\s*(-?\d+))?\s*$/.exec(text);
   if (!m) throw new InputError(`${option} takes NAME=A..B (for example ${option} n=1..6), not "${text}"`);
-  const lo = Number(m[2]), hi = m[3] === undefined ? lo : Number(m[3]);
+  const lo = Number(m[2]),
+    hi = m[3] === undefined ? lo : Number(m[3]);
   if (!Number.isSafeInteger(lo) || !Number.isSafeInteger(hi)) throw new InputError(`${option}: the bounds must be integers`);
   if (hi < lo) throw new InputError(`${option} ${text}: the range is empty`);
   return [m[1], lo, hi];

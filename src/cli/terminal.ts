@@ -31,7 +31,10 @@ let watching = false;
 function watchClosedPipes(): void {
   if (watching) return;
   watching = true;
-  for (const [name, stream] of [['out', process.stdout], ['err', process.stderr]] as const)
+  for (const [name, stream] of [
+    ['out', process.stdout],
+    ['err', process.stderr],
+  ] as const)
     stream.on('error', (e: NodeJS.ErrnoException) => {
       if (e.code === 'EPIPE' || e.code === 'ERR_STREAM_DESTROYED') closed[name] = true;
       else throw e;

@@ -14,7 +14,8 @@ const memo = new Map<string, bigint>();
 
 function betaToParts(beta: readonly number[]): number[] {
   // beta decreasing; part i = beta_i - (len - 1 - i)
-  const len = beta.length, out: number[] = [];
+  const len = beta.length,
+    out: number[] = [];
   for (let i = 0; i < len; i++) {
     const p = beta[i] - (len - 1 - i);
     if (p > 0) out.push(p);
@@ -64,6 +65,7 @@ defineFunction({
   description: 'chi^lambda(mu), the irreducible character of S_n indexed by lambda on the class of cycle type mu (Murnaghan–Nakayama)',
   example: 'character(partition([3, 1]), partition([2, 1, 1]))',
   exampleValue: '1',
-  source: 'Murnaghan–Nakayama rule; character tables of S_n, James and Kerber, The Representation Theory of the Symmetric Group, Appendix I.A',
+  source:
+    'Murnaghan–Nakayama rule; character tables of S_n, James and Kerber, The Representation Theory of the Symmetric Group, Appendix I.A',
   impl: (l, m) => normBig(characterValue(partitionArg(l, 'lambda'), weightArg(m, 'mu'))),
 });

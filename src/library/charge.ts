@@ -30,10 +30,12 @@ defineFunction({
   topic: 'words',
   params: X,
   returns: 'integer',
-  description: 'the Lascoux–Schützenberger charge of a word whose content is a partition (of a tableau: of its reading word), by standard subwords',
+  description:
+    'the Lascoux–Schützenberger charge of a word whose content is a partition (of a tableau: of its reading word), by standard subwords',
   example: 'charge(word([2, 1, 1, 2]))',
   exampleValue: '1',
-  source: 'Macdonald, Symmetric Functions and Hall Polynomials, III.6 (Lascoux and Schützenberger 1978); sums to K_{lambda mu}(t), Macdonald III.6 tables',
+  source:
+    'Macdonald, Symmetric Functions and Hall Polynomials, III.6 (Lascoux and Schützenberger 1978); sums to K_{lambda mu}(t), Macdonald III.6 tables',
   impl: (w) => charge(letters(w, 'charge(w)'), 'charge(w)'),
 });
 
@@ -62,12 +64,15 @@ defineFunction({
     { name: 't', type: 'scalarOrPolynomial' },
   ],
   returns: 'scalarOrPolynomial',
-  description: 'the Kostka–Foulkes polynomial K_{lambda mu}(t): the sum of t^charge(T) over the semistandard tableaux T of shape lambda and content mu',
+  description:
+    'the Kostka–Foulkes polynomial K_{lambda mu}(t): the sum of t^charge(T) over the semistandard tableaux T of shape lambda and content mu',
   example: 'kostkaFoulkes(partition([2, 1]), partition([1, 1, 1]), t)',
   exampleValue: 't^2 + t',
-  source: 'Lascoux and Schützenberger, C. R. Acad. Sci. Paris 286 (1978); Macdonald, Symmetric Functions and Hall Polynomials, III.6 (tables for n <= 6)',
+  source:
+    'Lascoux and Schützenberger, C. R. Acad. Sci. Paris 286 (1978); Macdonald, Symmetric Functions and Hall Polynomials, III.6 (tables for n <= 6)',
   impl: (l, m, t) => {
-    const lambda = partitionArg(l, 'lambda'), mu = partitionArg(m, 'mu');
+    const lambda = partitionArg(l, 'lambda'),
+      mu = partitionArg(m, 'mu');
     if (sizeOf(lambda) !== sizeOf(mu)) fail(`kostkaFoulkes(lambda, mu, t) needs |lambda| = |mu|, got ${sizeOf(lambda)} and ${sizeOf(mu)}`);
     if (sizeOf(mu) > KF_MAX) fail(`kostkaFoulkes(lambda, mu, t) is limited to partitions of n <= ${KF_MAX}`);
     return evaluateCoefficients(kostkaFoulkesCoefficients(lambda, mu), t as PolyLike);

@@ -28,7 +28,8 @@ defineFunction({
   impl: (x) => {
     const d = new Distribution();
     for (const [v, c] of pairsOf('distributionOf', x, 'count')) {
-      if (typeof c !== 'number' || !Number.isSafeInteger(c) || c < 1) fail(`a count in distributionOf must be a positive integer, not ${String(c)}`);
+      if (typeof c !== 'number' || !Number.isSafeInteger(c) || c < 1)
+        fail(`a count in distributionOf must be a positive integer, not ${String(c)}`);
       d.add(v, c);
     }
     return d;
@@ -40,9 +41,11 @@ defineFunction({
   topic: 'markov',
   params: [{ name: 'pairs', type: 'list' }],
   returns: 'measure',
-  description: 'the probability measure with these [value, mass] pairs (distinct values, positive exact masses summing to 1): how a measure prints',
+  description:
+    'the probability measure with these [value, mass] pairs (distinct values, positive exact masses summing to 1): how a measure prints',
   example: 'measure([[1, 2/5], [2, 3/5]]) == stationary(chain([1, 2], s -> [[1, 1], [2, s]]))',
   exampleValue: 'true',
-  source: 'definition (Kemeny and Snell, Finite Markov Chains, 1960, ch. II); the example is the stationary measure of that chain, solved by hand',
+  source:
+    'definition (Kemeny and Snell, Finite Markov Chains, 1960, ch. II); the example is the stationary measure of that chain, solved by hand',
   impl: (x) => Measure.from(pairsOf('measure', x, 'mass')),
 });

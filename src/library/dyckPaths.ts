@@ -21,7 +21,8 @@ defineFunction({
   topic,
   params: D,
   returns: 'integer',
-  description: 'the number of full cells between the path and the diagonal (U north, D east): the sum of the heights at which the up steps start',
+  description:
+    'the number of full cells between the path and the diagonal (U north, D east): the sum of the heights at which the up steps start',
   example: 'area(dyck("UUDUDD"))',
   exampleValue: '2',
   source: 'OEIS A129182 (geometric area n + 2*area); Haglund, The q,t-Catalan Numbers (2008), ch. 1',
@@ -33,7 +34,8 @@ defineFunction({
   topic,
   params: D,
   returns: 'list',
-  description: 'the area sequence [a_1, ..., a_n]: a_i is the height at which the i-th up step starts (the cells in row i between path and diagonal)',
+  description:
+    'the area sequence [a_1, ..., a_n]: a_i is the height at which the i-th up step starts (the cells in row i between path and diagonal)',
   example: 'areaSequence(dyck("UUDUDD"))',
   exampleValue: '[0, 1, 1]',
   source: 'Haglund, The q,t-Catalan Numbers (2008), ch. 1 (area vector)',
@@ -121,7 +123,8 @@ defineFunction({
     { name: 't', type: 'scalarOrPolynomial' },
   ],
   returns: 'scalarOrPolynomial',
-  description: 'the q,t-Catalan number C_n(q, t), the sum of q^area(d) t^bounce(d) over the Dyck paths of semilength n (Garsia–Haglund recursion)',
+  description:
+    'the q,t-Catalan number C_n(q, t), the sum of q^area(d) t^bounce(d) over the Dyck paths of semilength n (Garsia–Haglund recursion)',
   example: 'qtCatalan(3, q, t)',
   exampleValue: 'q^3 + q^2*t + q*t^2 + t^3 + q*t',
   source: 'Garsia and Haglund, "A proof of the q,t-Catalan positivity conjecture", Discrete Math. 256 (2002); q = t = 1: OEIS A000108',

@@ -16,7 +16,7 @@ const ORDER_TYPES: TypeName[] = ['string', 'list'];
 const ORDERS_DOC =
   'orders: "lex", "deglex", "grevlex" (variables in print order), "antidiagonal", a weight list, or blocks [[vars, order], ...]';
 const BUCHBERGER =
-  'B. Buchberger\'s algorithm with the sugar strategy and the Gebauer–Möller criteria; D. Cox, J. Little, D. O\'Shea, Ideals, Varieties, and Algorithms, ch. 2 (twisted cubic and elimination examples tested)';
+  "B. Buchberger's algorithm with the sugar strategy and the Gebauer–Möller criteria; D. Cox, J. Little, D. O'Shea, Ideals, Varieties, and Algorithms, ch. 2 (twisted cubic and elimination examples tested)";
 
 /** The ring of an ideal together with the variables of further polynomials. */
 function ringWith(I: Ideal, extra: readonly PolyLike[]): number[] {
@@ -55,7 +55,7 @@ defineFunction({
   description: `whether the polynomials G are a Gröbner basis of the ideal they generate (every S-pair reduces to 0), over Q or F_p; ${ORDERS_DOC}`,
   example: 'isGroebnerBasis(minors(genericMatrix(x, 2, 3), 2), "antidiagonal")',
   exampleValue: 'true',
-  source: 'Buchberger\'s criterion (D. Cox, J. Little, D. O\'Shea, Ideals, Varieties, and Algorithms, ch. 2 §6, Thm 6)',
+  source: "Buchberger's criterion (D. Cox, J. Little, D. O'Shea, Ideals, Varieties, and Algorithms, ch. 2 §6, Thm 6)",
   impl: (G, order, p) => {
     const call = 'isGroebnerBasis(G, order)';
     const gs = polynomialListArg(call, 'G', G);
@@ -95,9 +95,10 @@ defineFunction({
   description: `the remainder of f on division by the reduced Gröbner basis of I (unique; 0 exactly when f is in I); ${ORDERS_DOC}`,
   example: 'normalForm(x^3, ideal([x^2 - y]), "lex")',
   exampleValue: 'x*y',
-  source: 'D. Cox, J. Little, D. O\'Shea, Ideals, Varieties, and Algorithms, ch. 2 §6, Prop. 1',
+  source: "D. Cox, J. Little, D. O'Shea, Ideals, Varieties, and Algorithms, ch. 2 §6, Prop. 1",
   impl: (f, I, order) => {
-    const J = I as Ideal, g = f as PolyLike;
+    const J = I as Ideal,
+      g = f as PolyLike;
     const ord = termOrderArg('normalForm(f, I, order)', order, ringWith(J, [g]));
     return normalForm(g, basisFor(J, ord), ord, { ...J.groebnerOptions(), assumeBasis: true });
   },
@@ -114,10 +115,9 @@ defineFunction({
   description: 'whether f lies in I (its normal form for grevlex is 0)',
   example: 'inIdeal(x^3 - y^3, ideal([x - y]))',
   exampleValue: 'true',
-  source: 'D. Cox, J. Little, D. O\'Shea, Ideals, Varieties, and Algorithms, ch. 2 §6, Cor. 2',
+  source: "D. Cox, J. Little, D. O'Shea, Ideals, Varieties, and Algorithms, ch. 2 §6, Cor. 2",
   impl: (f, I) => {
     const J = I as Ideal;
     return inIdeal(f as PolyLike, J.gens, J.groebnerOptions());
   },
 });
-

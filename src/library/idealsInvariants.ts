@@ -6,7 +6,11 @@
 
 import { Ideal } from '../algebra/ideals/ideal.js';
 import {
-  idealDimensionData, idealHilbertFunction, idealHilbertNumerator, idealKPolynomial, idealMultidegree,
+  idealDimensionData,
+  idealHilbertFunction,
+  idealHilbertNumerator,
+  idealKPolynomial,
+  idealMultidegree,
 } from '../algebra/ideals/invariants.js';
 import { facetsOf } from '../algebra/monomialIdeals/stanleyReisner.js';
 import { idealShouldStop } from '../algebra/ideals/stop.js';
@@ -22,7 +26,7 @@ import { defineFunction } from './registry.js';
 
 const topic = 'ideals';
 const HILBERT =
-  'Hilbert series through the initial ideal (Cox, Little, O\'Shea, Ideals, Varieties, and Algorithms, ch. 9 §3), numerator by the pivot algorithm of A. M. Bigatti, J. Pure Appl. Algebra 119 (1997); tested against a count of standard monomials, the determinantal formulas of W. Bruns, U. Vetter, Determinantal Rings, LNM 1327, and the commuting variety (OEIS A029729)';
+  "Hilbert series through the initial ideal (Cox, Little, O'Shea, Ideals, Varieties, and Algorithms, ch. 9 §3), numerator by the pivot algorithm of A. M. Bigatti, J. Pure Appl. Algebra 119 (1997); tested against a count of standard monomials, the determinantal formulas of W. Bruns, U. Vetter, Determinantal Rings, LNM 1327, and the commuting variety (OEIS A029729)";
 const MULTI =
   'A. Knutson, E. Miller, Gröbner geometry of Schubert polynomials, Ann. of Math. 161 (2005), §1; E. Miller, B. Sturmfels, Combinatorial Commutative Algebra, GTM 227, ch. 8; tested: matrix Schubert ideals of S_4, S_5 give Schubert and Grothendieck polynomials';
 
@@ -31,8 +35,7 @@ defineFunction({
   topic,
   params: [{ name: 'I', type: 'ideal' }],
   returns: 'integer',
-  description:
-    'the Krull dimension of S/I (of the affine variety V(I) for a non-homogeneous I; -1 for the whole ring), S the ring of I',
+  description: 'the Krull dimension of S/I (of the affine variety V(I) for a non-homogeneous I; -1 for the whole ring), S the ring of I',
   example: 'dim(ideal(entries(genericMatrix(x, 2, 2) * genericMatrix(y, 2, 2) - genericMatrix(y, 2, 2) * genericMatrix(x, 2, 2))))',
   exampleValue: '6',
   source: `${HILBERT}; commuting variety of 2×2 pairs: dimension n^2 + n (T. S. Motzkin, O. Taussky, Trans. Amer. Math. Soc. 80 (1955))`,
@@ -99,8 +102,7 @@ defineFunction({
     { name: 'y', type: 'polynomial', optional: true },
   ],
   returns: 'scalarOrPolynomial',
-  description:
-    'the multidegree of S/I for the grading deg z[i, j] = x[i] (with y: x[i] - y[j]); I must be homogeneous for it',
+  description: 'the multidegree of S/I for the grading deg z[i, j] = x[i] (with y: x[i] - y[j]); I must be homogeneous for it',
   example: 'multidegree(matrixSchubertIdeal(perm([1, 4, 3, 2]), y), x)',
   exampleValue: 'x[1]^2*x[2] + x[1]^2*x[3] + x[1]*x[2]^2 + x[1]*x[2]*x[3] + x[2]^2*x[3]',
   source: MULTI,

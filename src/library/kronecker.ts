@@ -37,14 +37,19 @@ defineFunction({
     { name: 'nu', type: ['partition', 'list'] },
   ],
   returns: 'integer',
-  description: 'the Kronecker coefficient g_{lambda mu nu}: the multiplicity of chi^nu in the product chi^lambda chi^mu (symmetric in all three)',
+  description:
+    'the Kronecker coefficient g_{lambda mu nu}: the multiplicity of chi^nu in the product chi^lambda chi^mu (symmetric in all three)',
   example: 'kronecker(partition([2, 1]), partition([2, 1]), partition([2, 1]))',
   exampleValue: '1',
-  source: 'Macdonald, Symmetric Functions and Hall Polynomials, I.7 (7.9); Stanley, Enumerative Combinatorics 2, Ex. 7.78 (s_21 * s_21 = s_3 + s_21 + s_111)',
+  source:
+    'Macdonald, Symmetric Functions and Hall Polynomials, I.7 (7.9); Stanley, Enumerative Combinatorics 2, Ex. 7.78 (s_21 * s_21 = s_3 + s_21 + s_111)',
   impl: (a, b, c) => {
-    const l = partitionArg(a, 'lambda'), m = partitionArg(b, 'mu'), v = partitionArg(c, 'nu');
+    const l = partitionArg(a, 'lambda'),
+      m = partitionArg(b, 'mu'),
+      v = partitionArg(c, 'nu');
     const n = sizeOf(l);
-    if (sizeOf(m) !== n || sizeOf(v) !== n) fail(`kronecker(lambda, mu, nu) needs partitions of one size, got ${n}, ${sizeOf(m)} and ${sizeOf(v)}`);
+    if (sizeOf(m) !== n || sizeOf(v) !== n)
+      fail(`kronecker(lambda, mu, nu) needs partitions of one size, got ${n}, ${sizeOf(m)} and ${sizeOf(v)}`);
     if (n > MAX_N) fail(`kronecker(lambda, mu, nu) is limited to partitions of n <= ${MAX_N}`);
     return normBig(kroneckerCoefficient(l, m, v));
   },

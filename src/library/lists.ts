@@ -37,8 +37,17 @@ const LENGTHS: Record<string, (v: Structured) => number> = {
 
 /** What x[i] is and what len(x) counts, by kind (for `hunch list` and index errors). */
 export const INDEX_UNITS: Record<string, string> = {
-  permutation: 'entries', word: 'letters', composition: 'parts', partition: 'parts', dyck: 'steps', subset: 'elements',
-  setPartition: 'blocks', tableau: 'rows', asm: 'rows', pipeDream: 'crosses', matrix: 'rows',
+  permutation: 'entries',
+  word: 'letters',
+  composition: 'parts',
+  partition: 'parts',
+  dyck: 'steps',
+  subset: 'elements',
+  setPartition: 'blocks',
+  tableau: 'rows',
+  asm: 'rows',
+  pipeDream: 'crosses',
+  matrix: 'rows',
 };
 
 /** What to use instead, for kinds whose "length" could mean two things. */

@@ -56,7 +56,8 @@ defineFunction({
     { name: 'nu', type: ['partition', 'list'] },
   ],
   returns: 'integer',
-  description: 'the Littlewood–Richardson coefficient c^lambda_{mu,nu}, the coefficient of s_lambda in s_mu s_nu (argument order: the outer shape lambda first, then mu and nu, which commute)',
+  description:
+    'the Littlewood–Richardson coefficient c^lambda_{mu,nu}, the coefficient of s_lambda in s_mu s_nu (argument order: the outer shape lambda first, then mu and nu, which commute)',
   example: 'lr(partition([3, 2, 1]), partition([2, 1]), partition([2, 1]))',
   exampleValue: '2',
   source: 'Littlewood–Richardson rule, Macdonald, Symmetric Functions and Hall Polynomials, I.9; Fulton, Young Tableaux, §5.2',

@@ -26,7 +26,9 @@ function movesFrom(s: Value, result: Value, f: Lambda): [Value, unknown][] {
     if (!Array.isArray(m) || m.length !== 2) return bad(`one of the moves is ${valueToText(m)}`);
     const [t, w] = m as Value[];
     if (!isScalar(w)) {
-      fail(`the move from ${valueToText(s)} to ${valueToText(t)} has weight ${valueToText(w)}, which is not a number; weights must be nonnegative integers or rationals`);
+      fail(
+        `the move from ${valueToText(s)} to ${valueToText(t)} has weight ${valueToText(w)}, which is not a number; weights must be nonnegative integers or rationals`,
+      );
     }
     return [t, w];
   });

@@ -58,10 +58,12 @@ defineFunction({
   topic,
   params: MS,
   returns: 'integer',
-  description: 'the number of pairs of arcs (a, b), (c, d) with a < c < b < d (of a set partition: of its arc diagram, consecutive elements of each block)',
+  description:
+    'the number of pairs of arcs (a, b), (c, d) with a < c < b < d (of a set partition: of its arc diagram, consecutive elements of each block)',
   example: 'crossings(matching([[1, 3], [2, 4]]))',
   exampleValue: '1',
-  source: 'Touchard–Riordan formula (Riordan, Math. Comp. 29 (1975)); equidistributed with nestings (de Sainte-Catherine 1983), on set partitions too (Chen, Deng, Du, Stanley and Yan, Trans. Amer. Math. Soc. 359 (2007))',
+  source:
+    'Touchard–Riordan formula (Riordan, Math. Comp. 29 (1975)); equidistributed with nestings (de Sainte-Catherine 1983), on set partitions too (Chen, Deng, Du, Stanley and Yan, Trans. Amer. Math. Soc. 359 (2007))',
   impl: (m: Value) => (m instanceof SetPartition ? partitionCrossings(m.rgs) : matchingCrossings((m as Matching).p)),
 });
 

@@ -16,7 +16,8 @@ function matrixRows(rows: Value): unknown[][] {
   if (Array.isArray(rows))
     for (const row of rows)
       if (Array.isArray(row))
-        for (const x of row) if (!isScalar(x) && !isPolynomial(x)) fail(`a matrix entry must be a number or a polynomial, not ${valueToText(x)}`);
+        for (const x of row)
+          if (!isScalar(x) && !isPolynomial(x)) fail(`a matrix entry must be a number or a polynomial, not ${valueToText(x)}`);
   return rows as unknown[][];
 }
 
@@ -39,10 +40,12 @@ defineFunction({
   topic,
   params: [{ name: 'M', type: 'matrix' }],
   returns: 'scalarOrPolynomial',
-  description: 'the determinant of a square matrix, exactly (fraction-free Bareiss elimination for numbers, expansion along rows for polynomial entries)',
+  description:
+    'the determinant of a square matrix, exactly (fraction-free Bareiss elimination for numbers, expansion along rows for polynomial entries)',
   example: 'det(matrix([[2, 1, 0], [1, 2, 1], [0, 1, 2]]))',
   exampleValue: '4',
-  source: 'E. H. Bareiss, Sylvester\'s identity and multistep integer-preserving Gaussian elimination, Math. Comp. 22 (1968); tested on Hilbert (OEIS A005249) and Vandermonde matrices',
+  source:
+    "E. H. Bareiss, Sylvester's identity and multistep integer-preserving Gaussian elimination, Math. Comp. 22 (1968); tested on Hilbert (OEIS A005249) and Vandermonde matrices",
   impl: (m) => matrixDeterminant(m as Matrix),
 });
 
@@ -66,10 +69,12 @@ defineFunction({
   description: 'the transposed matrix; of a standard tableau, the standard tableau of the conjugate shape whose rows are its columns',
   example: 'transpose(matrix([[1, 2, 3], [4, 5, 6]]))',
   exampleValue: 'matrix([[1, 4], [2, 5], [3, 6]])',
-  source: 'definition; on standard tableaux, RSK(w reversed) gives [transpose(P), evacuation(transpose(Q))] (Schützenberger; Stanley, Enumerative Combinatorics 2, Appendix A1.2)',
+  source:
+    'definition; on standard tableaux, RSK(w reversed) gives [transpose(P), evacuation(transpose(Q))] (Schützenberger; Stanley, Enumerative Combinatorics 2, Appendix A1.2)',
   impl: (m) => {
     if (m instanceof Tableau) {
-      if (!m.isStandard()) fail(`transpose(T) needs a standard tableau (the transpose of a semistandard one is not semistandard), got ${m.toText()}`);
+      if (!m.isStandard())
+        fail(`transpose(T) needs a standard tableau (the transpose of a semistandard one is not semistandard), got ${m.toText()}`);
       return new Tableau(transposeRows(m.rows));
     }
     return transpose(m as Matrix);
@@ -87,6 +92,7 @@ defineFunction({
   description: 'the characteristic polynomial det(t*I - M) (monic); t may be an indeterminate or a value',
   example: 'charpoly(matrix([[2, 1], [1, 2]]), t)',
   exampleValue: 't^2 - 4*t + 3',
-  source: 'Faddeev–LeVerrier recurrence (D. K. Faddeev, V. N. Faddeeva, Computational Methods of Linear Algebra, §24); tested on companion matrices (Horn–Johnson, Matrix Analysis, Thm 3.3.14)',
+  source:
+    'Faddeev–LeVerrier recurrence (D. K. Faddeev, V. N. Faddeeva, Computational Methods of Linear Algebra, §24); tested on companion matrices (Horn–Johnson, Matrix Analysis, Thm 3.3.14)',
   impl: (m, t) => charpoly(m as Matrix, t as PolyLike),
 });

@@ -16,15 +16,18 @@ function circlePosition(call: string, m: Matching, i: Value): number {
   const size = m.p.length;
   if (size === 0) fail(`${call}: the empty matching has no points`);
   const x = i as Int;
-  const r = typeof x === 'bigint' ? Number(((x - 1n) % BigInt(size) + BigInt(size)) % BigInt(size)) : (((x - 1) % size) + size) % size;
+  const r = typeof x === 'bigint' ? Number((((x - 1n) % BigInt(size)) + BigInt(size)) % BigInt(size)) : (((x - 1) % size) + size) % size;
   return r;
 }
 
 /** e_i: i and i+1 become an arc, their former partners are joined; unchanged if already an arc. */
 export function joinAt(m: Matching, i0: number): Matching {
-  const p = m.p, size = p.length;
-  const i = i0 + 1, j = i0 === size - 1 ? 1 : i0 + 2; // 1-based points i and i+1 (mod 2n)
-  const a = p[i - 1], b = p[j - 1];
+  const p = m.p,
+    size = p.length;
+  const i = i0 + 1,
+    j = i0 === size - 1 ? 1 : i0 + 2; // 1-based points i and i+1 (mod 2n)
+  const a = p[i - 1],
+    b = p[j - 1];
   if (a === j) return m;
   const q = p.slice();
   q[i - 1] = j;
@@ -36,9 +39,12 @@ export function joinAt(m: Matching, i0: number): Matching {
 
 /** i and i+1 exchange partners; unchanged if they form an arc. */
 export function crossAt(m: Matching, i0: number): Matching {
-  const p = m.p, size = p.length;
-  const i = i0 + 1, j = i0 === size - 1 ? 1 : i0 + 2;
-  const a = p[i - 1], b = p[j - 1];
+  const p = m.p,
+    size = p.length;
+  const i = i0 + 1,
+    j = i0 === size - 1 ? 1 : i0 + 2;
+  const a = p[i - 1],
+    b = p[j - 1];
   if (a === j) return m;
   const q = p.slice();
   q[i - 1] = b;
@@ -78,7 +84,8 @@ defineFunction({
     'the Temperley–Lieb action on a matching around a circle: i and i+1 (mod 2n) become an arc and their former partners are joined; unchanged if i, i+1 already form an arc',
   example: 'joinAt(matching([[1, 3], [2, 4]]), 1)',
   exampleValue: 'matching([[1, 2], [3, 4]])',
-  source: 'Temperley and Lieb, Proc. R. Soc. Lond. A 322 (1971); link patterns as in "Loops, matchings and alternating-sign matrices", arXiv:math/0211285',
+  source:
+    'Temperley and Lieb, Proc. R. Soc. Lond. A 322 (1971); link patterns as in "Loops, matchings and alternating-sign matrices", arXiv:math/0211285',
   impl: (m, i) => joinAt(m as Matching, circlePosition('joinAt(m, i)', m as Matching, i)),
 });
 
@@ -93,7 +100,8 @@ defineFunction({
   description: 'the points i and i+1 (mod 2n) exchange partners; unchanged if they form an arc',
   example: 'crossAt(matching([[1, 4], [2, 3]]), 1)',
   exampleValue: 'matching([[1, 3], [2, 4]])',
-  source: 'the crossing generators of the Brauer algebra; "Inhomogeneous model of crossing loops and multidegrees of some algebraic varieties", Comm. Math. Phys. 262 (2006)',
+  source:
+    'the crossing generators of the Brauer algebra; "Inhomogeneous model of crossing loops and multidegrees of some algebraic varieties", Comm. Math. Phys. 262 (2006)',
   impl: (m, i) => crossAt(m as Matching, circlePosition('crossAt(m, i)', m as Matching, i)),
 });
 
@@ -110,7 +118,8 @@ defineFunction({
   exampleValue: 'perm([3, 2, 1])',
   source: 'definition (right multiplication by the simple transposition s_i)',
   impl: (w, i) => {
-    const p = w as Permutation, n = p.a.length;
+    const p = w as Permutation,
+      n = p.a.length;
     const k = i as Int;
     if (typeof k === 'bigint' || k < 1 || k >= n) {
       fail(`swapAt(w, i) needs 1 <= i <= ${n - 1} for a permutation of ${n}, got i = ${k}`);

@@ -33,7 +33,8 @@ defineFunction({
   topic,
   params: [{ name: 'n', type: 'integer' }],
   returns: 'integer',
-  description: 'n!! = n * (n-2) * (n-4) * ... down to 1 or 2, for n >= -1 ((-1)!! = 0!! = 1); (2n-1)!! counts perfect matchings of 2n points',
+  description:
+    'n!! = n * (n-2) * (n-4) * ... down to 1 or 2, for n >= -1 ((-1)!! = 0!! = 1); (2n-1)!! counts perfect matchings of 2n points',
   example: 'doubleFactorial(9)',
   exampleValue: '945',
   source: 'OEIS A006882; odd case A001147',
@@ -52,7 +53,7 @@ defineFunction({
     'the binomial coefficient C(n, k) = n(n-1)...(n-k+1)/k!, for any integer n (so C(-1, k) = (-1)^k); 0 when k < 0 or 0 <= n < k',
   example: 'binomial(10, 3)',
   exampleValue: '120',
-  source: 'OEIS A007318 (Pascal\'s triangle); negative n: Graham, Knuth, Patashnik, Concrete Mathematics, eq. (5.14)',
+  source: "OEIS A007318 (Pascal's triangle); negative n: Graham, Knuth, Patashnik, Concrete Mathematics, eq. (5.14)",
   impl: (n, k) => {
     const r = C.binomial(n as Int, k as Int, FACTORIAL_MAX);
     if (r === undefined) {
@@ -82,7 +83,8 @@ defineFunction({
     { name: 'k', type: 'integer' },
   ],
   returns: 'integer',
-  description: 'the unsigned Stirling number of the first kind: permutations of n elements with exactly k cycles; defined for n >= 0 (a negative n is an error, unlike binomial)',
+  description:
+    'the unsigned Stirling number of the first kind: permutations of n elements with exactly k cycles; defined for n >= 0 (a negative n is an error, unlike binomial)',
   example: 'stirling1(5, 2)',
   exampleValue: '50',
   source: 'OEIS A132393 (signed: A008275, A048994)',
@@ -100,7 +102,8 @@ defineFunction({
     { name: 'k', type: 'integer' },
   ],
   returns: 'integer',
-  description: 'the Stirling number of the second kind: partitions of an n-element set into exactly k blocks; defined for n >= 0 (a negative n is an error, unlike binomial)',
+  description:
+    'the Stirling number of the second kind: partitions of an n-element set into exactly k blocks; defined for n >= 0 (a negative n is an error, unlike binomial)',
   example: 'stirling2(5, 2)',
   exampleValue: '15',
   source: 'OEIS A008277, A048993',

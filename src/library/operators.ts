@@ -22,16 +22,24 @@ import { Permutation } from '../families/permutations/permutation.js';
 import { isSymLike, isSymmetricFunction, mapCoefficients, symAdd, symNeg, symSub } from '../algebra/symmetric/symmetricFunction.js';
 import { symMul, symPow } from '../algebra/symmetric/products.js';
 import { valueEquals, valueToText } from '../values/operations.js';
-import { isRationalFunction, makeRational, rfAdd, rfDiv, rfMul, rfNeg, rfPow, rfSub, type RationalLike } from '../algebra/rationalFunction.js';
+import {
+  isRationalFunction,
+  makeRational,
+  rfAdd,
+  rfDiv,
+  rfMul,
+  rfNeg,
+  rfPow,
+  rfSub,
+  type RationalLike,
+} from '../algebra/rationalFunction.js';
 import { isStructured } from '../values/structured.js';
 import { article, typeOf } from '../values/types.js';
 import type { Value } from '../values/value.js';
 
 function typeError(op: string, a: Value, b?: Value): never {
   const what = b === undefined ? article(typeOf(a)) : `${article(typeOf(a))} and ${article(typeOf(b))}`;
-  const hint = Array.isArray(a) && (b === undefined || Array.isArray(b)) && op === '+'
-    ? ' (to join lists use concat([A, B]))'
-    : '';
+  const hint = Array.isArray(a) && (b === undefined || Array.isArray(b)) && op === '+' ? ' (to join lists use concat([A, B]))' : '';
   throw new EvalError(`${op} is not defined for ${what}${hint}`);
 }
 
@@ -41,7 +49,9 @@ function isPolyLike(v: Value): v is PolyLike {
 
 /** Operands of rational-function arithmetic: at least one is a rational function. */
 function rationalPair(a: Value, b: Value): boolean {
-  return (isRationalFunction(a) || isRationalFunction(b)) && (isPolyLike(a) || isRationalFunction(a)) && (isPolyLike(b) || isRationalFunction(b));
+  return (
+    (isRationalFunction(a) || isRationalFunction(b)) && (isPolyLike(a) || isRationalFunction(a)) && (isPolyLike(b) || isRationalFunction(b))
+  );
 }
 
 export function add(a: Value, b: Value): Value {
@@ -106,7 +116,11 @@ export function pow(a: Value, e: Value): Value {
     if (a === -1) return e % 2n === 0n ? 1 : -1;
     const digits = (e < 0n ? -e : e).toString();
     // A tower such as 2^2^2^2^2^2 has an exponent of thousands of digits: name its size instead.
-    fail(digits.length > 40 ? `the exponent (${e < 0n ? 'minus ' : ''}a number of ${digits.length} digits) is too large` : `the exponent ${e} is too large`);
+    fail(
+      digits.length > 40
+        ? `the exponent (${e < 0n ? 'minus ' : ''}a number of ${digits.length} digits) is too large`
+        : `the exponent ${e} is too large`,
+    );
   }
   if (isScalar(a)) return spow(a, e);
   if (isPolynomial(a)) return e < 0 && a.length > 1 ? rfPow(a, e) : ppow(a, e);

@@ -18,13 +18,15 @@ const topic = 'partitions';
 /** Reads a list of small integers for a constructor. */
 export function intList(v: Value, what: string): number[] {
   if (!Array.isArray(v)) fail(`${what} must be a list of integers, got ${valueToText(v)}`);
-  for (const x of v) if (typeof x !== 'number' || !Number.isSafeInteger(x)) fail(`${what} must be a list of integers, got ${valueToText(v)}`);
+  for (const x of v)
+    if (typeof x !== 'number' || !Number.isSafeInteger(x)) fail(`${what} must be a list of integers, got ${valueToText(v)}`);
   return v as number[];
 }
 
 /** lambda dominates mu: equal sizes and every partial sum of lambda is at least mu's. */
 export function dominatesParts(lambda: readonly number[], mu: readonly number[]): boolean {
-  let a = 0, b = 0;
+  let a = 0,
+    b = 0;
   const m = Math.max(lambda.length, mu.length);
   for (let i = 0; i < m; i++) {
     a += lambda[i] ?? 0;
@@ -179,8 +181,10 @@ defineFunction({
   exampleValue: 'true',
   source: 'Macdonald, Symmetric Functions and Hall Polynomials, I.1',
   impl: (l, m) => {
-    const a = partitionArg(l, 'lambda'), b = partitionArg(m, 'mu');
-    if (sizeOf(a) !== sizeOf(b)) fail(`dominance compares partitions of the same size, got |lambda| = ${sizeOf(a)} and |mu| = ${sizeOf(b)}`);
+    const a = partitionArg(l, 'lambda'),
+      b = partitionArg(m, 'mu');
+    if (sizeOf(a) !== sizeOf(b))
+      fail(`dominance compares partitions of the same size, got |lambda| = ${sizeOf(a)} and |mu| = ${sizeOf(b)}`);
     return dominatesParts(a, b);
   },
 });

@@ -5,7 +5,14 @@
 import { fail } from '../base/errors.js';
 import { isPolyLike, isPolynomial, polyText, type PolyLike } from '../algebra/polynomial.js';
 import {
-  asMonomial, coefficientOf, coefficientsOf, degreeIn, renameVariables, substitute, termsOf, totalDegree,
+  asMonomial,
+  coefficientOf,
+  coefficientsOf,
+  degreeIn,
+  renameVariables,
+  substitute,
+  termsOf,
+  totalDegree,
   univariateCoefficients,
 } from '../algebra/polynomialOps.js';
 import { indexedName, isBareVar, varBase, varId, varIndex, varIndices, varName } from '../algebra/variables.js';
@@ -26,8 +33,7 @@ defineFunction({
     { name: 'monomial', type: P },
   ],
   returns: 'number',
-  description:
-    'the coefficient (a number) of a monomial such as q^2*x[1] in p; coeff(p, 1) is the constant term',
+  description: 'the coefficient (a number) of a monomial such as q^2*x[1] in p; coeff(p, 1) is the constant term',
   example: 'coeff((1 + q)^4, q^2)',
   exampleValue: '6',
   source: 'definition',
@@ -43,8 +49,7 @@ defineFunction({
   topic,
   params: [{ name: 'p', type: P }],
   returns: 'list',
-  description:
-    'the nonzero coefficients of p, in the order p prints: highest total degree first, then lexicographic (so [] for 0)',
+  description: 'the nonzero coefficients of p, in the order p prints: highest total degree first, then lexicographic (so [] for 0)',
   example: 'coefficients(2*q^2 - q + 5)',
   exampleValue: '[2, -1, 5]',
   source: 'definition',
@@ -76,7 +81,7 @@ defineFunction({
   example: 'degree(q^3*x[1] + q, q)',
   exampleValue: '3',
   source:
-    'definition; for ideals, the leading coefficient of the Hilbert polynomial times (dim - 1)!, through the initial ideal (D. Cox, J. Little, D. O\'Shea, Ideals, Varieties, and Algorithms, ch. 9 §3-§4); tested on the commuting variety (OEIS A029729) and determinantal varieties (W. Bruns, U. Vetter, Determinantal Rings, LNM 1327)',
+    "definition; for ideals, the leading coefficient of the Hilbert polynomial times (dim - 1)!, through the initial ideal (D. Cox, J. Little, D. O'Shea, Ideals, Varieties, and Algorithms, ch. 9 §3-§4); tested on the commuting variety (OEIS A029729) and determinantal varieties (W. Bruns, U. Vetter, Determinantal Rings, LNM 1327)",
   impl: (p, v) => {
     if (isIdeal(p)) {
       if (v !== undefined) fail('degree(I) of an ideal takes no variable');
@@ -149,10 +154,12 @@ defineFunction({
   impl: (p, a, b) => {
     const call = 'swapVars(p, a, b)';
     const poly = p as PolyLike;
-    const ia = variableArg(call, 'a', a), ib = variableArg(call, 'b', b);
+    const ia = variableArg(call, 'a', a),
+      ib = variableArg(call, 'b', b);
     const rename = new Map<number, number>();
     if (isBareVar(ia) && isBareVar(ib) && ia !== ib) {
-      const ba = varBase(ia), bb = varBase(ib);
+      const ba = varBase(ia),
+        bb = varBase(ib);
       const partner = (id: number, to: string) => varId(indexedName(to, varIndices(id)));
       for (const id of familyIn(poly, ba)) rename.set(id, partner(id, bb));
       for (const id of familyIn(poly, bb)) rename.set(id, partner(id, ba));
@@ -172,8 +179,7 @@ defineFunction({
     { name: 'q', type: 'polynomial' },
   ],
   returns: 'list',
-  description:
-    'the coefficients [c_0, c_1, ..., c_d] of a polynomial in q alone, from degree 0 up, zeros included ([] for 0)',
+  description: 'the coefficients [c_0, c_1, ..., c_d] of a polynomial in q alone, from degree 0 up, zeros included ([] for 0)',
   example: 'coefficientList((1 + q)^3, q)',
   exampleValue: '[1, 3, 3, 1]',
   source: 'definition',

@@ -100,7 +100,8 @@ defineFunction({
   topic,
   params: [{ name: 'n', type: 'integer' }, { name: 'k', type: 'integer' }, qParam],
   returns: 'scalarOrPolynomial',
-  description: 'the Gaussian binomial coefficient [n choose k]_q = [n]_q! / ([k]_q! [n-k]_q!), 0 unless 0 <= k <= n; defined for n >= 0 (a negative n is an error, unlike binomial)',
+  description:
+    'the Gaussian binomial coefficient [n choose k]_q = [n]_q! / ([k]_q! [n-k]_q!), 0 unless 0 <= k <= n; defined for n >= 0 (a negative n is an error, unlike binomial)',
   example: 'qbinomial(4, 2, q)',
   exampleValue: 'q^4 + q^3 + 2*q^2 + q + 1',
   source: 'OEIS A008967 (triangle of Gaussian binomial coefficients); G. E. Andrews, The Theory of Partitions, Thm 3.1',

@@ -25,7 +25,8 @@ function compositionArg(v: Value, call: string): number[] {
 
 /** Exponent vectors of M_alpha in m variables: alpha placed on each increasing choice of k positions. */
 export function monomialQuasiTerms(alpha: readonly number[], m: number): number[][] {
-  const k = alpha.length, out: number[][] = [];
+  const k = alpha.length,
+    out: number[][] = [];
   const pos: number[] = [];
   const go = (t: number, from: number) => {
     if (t === k) {
@@ -73,7 +74,10 @@ export function fundamentalQuasiTerms(alpha: readonly number[], m: number): numb
 function build(terms: number[][], x: string, m: number): PolyLike {
   if (m === 0 || terms.length === 0) return terms.length === 1 ? 1 : terms.length === 0 ? 0 : terms.length;
   const ids = Array.from({ length: m }, (_, i) => indexedVarId(x, i + 1));
-  return fromTerms(ids, terms.map((t) => [t, 1] as [number[], number]));
+  return fromTerms(
+    ids,
+    terms.map((t) => [t, 1] as [number[], number]),
+  );
 }
 
 const params: ParamDecl[] = [
@@ -93,7 +97,11 @@ defineFunction({
   source: 'Gessel, Contemp. Math. 34 (1984); Stanley, Enumerative Combinatorics 2, §7.19',
   impl: (al, x, m) => {
     const mm = smallIntArg('quasiMonomial(alpha, x, m)', 'm', m, 0, 1000);
-    return build(monomialQuasiTerms(compositionArg(al, 'quasiMonomial(alpha, x, m)'), mm), indexedBaseArg('quasiMonomial(alpha, x, m)', 'x', x), mm);
+    return build(
+      monomialQuasiTerms(compositionArg(al, 'quasiMonomial(alpha, x, m)'), mm),
+      indexedBaseArg('quasiMonomial(alpha, x, m)', 'x', x),
+      mm,
+    );
   },
 });
 
@@ -102,12 +110,18 @@ defineFunction({
   topic,
   params,
   returns: 'scalarOrPolynomial',
-  description: "Gessel's fundamental quasisymmetric polynomial F_alpha(x[1..m]): the sum of x[i_1] ... x[i_n] over i_1 <= ... <= i_n with i_j < i_(j+1) at the partial sums j of alpha",
+  description:
+    "Gessel's fundamental quasisymmetric polynomial F_alpha(x[1..m]): the sum of x[i_1] ... x[i_n] over i_1 <= ... <= i_n with i_j < i_(j+1) at the partial sums j of alpha",
   example: 'quasiFundamental(composition([1, 1]), x, 3)',
   exampleValue: 'x[1]*x[2] + x[1]*x[3] + x[2]*x[3]',
-  source: 'Gessel, Contemp. Math. 34 (1984); s_lambda = sum of F over the descent compositions of the standard tableaux (Stanley, EC2, Thm 7.19.7)',
+  source:
+    'Gessel, Contemp. Math. 34 (1984); s_lambda = sum of F over the descent compositions of the standard tableaux (Stanley, EC2, Thm 7.19.7)',
   impl: (al, x, m) => {
     const mm = smallIntArg('quasiFundamental(alpha, x, m)', 'm', m, 0, 1000);
-    return build(fundamentalQuasiTerms(compositionArg(al, 'quasiFundamental(alpha, x, m)'), mm), indexedBaseArg('quasiFundamental(alpha, x, m)', 'x', x), mm);
+    return build(
+      fundamentalQuasiTerms(compositionArg(al, 'quasiFundamental(alpha, x, m)'), mm),
+      indexedBaseArg('quasiFundamental(alpha, x, m)', 'x', x),
+      mm,
+    );
   },
 });

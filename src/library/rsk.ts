@@ -14,9 +14,11 @@ const topic = 'tableaux';
 
 /** Row-insert the letters in order: x bumps the leftmost entry of the row strictly greater than it. */
 export function rskRows(word: readonly number[]): { P: number[][]; Q: number[][] } {
-  const P: number[][] = [], Q: number[][] = [];
+  const P: number[][] = [],
+    Q: number[][] = [];
   word.forEach((letter, step) => {
-    let x = letter, r = 0;
+    let x = letter,
+      r = 0;
     for (;;) {
       if (r === P.length) {
         P.push([x]);
@@ -25,7 +27,8 @@ export function rskRows(word: readonly number[]): { P: number[][]; Q: number[][]
       }
       const row = P[r];
       // Binary search for the first entry > x.
-      let lo = 0, hi = row.length;
+      let lo = 0,
+        hi = row.length;
       while (lo < hi) {
         const mid = (lo + hi) >> 1;
         if (row[mid] > x) hi = mid;

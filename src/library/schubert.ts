@@ -7,9 +7,7 @@ import { fail } from '../base/errors.js';
 import { dividedDifference } from '../algebra/divided.js';
 import { isPolynomial, pequals, polyText, type PolyLike } from '../algebra/polynomial.js';
 import { renameVariables, univariateCoefficients } from '../algebra/polynomialOps.js';
-import {
-  doubleSchubertPolynomial, grothendieckPolynomial, schubertPolynomial, trimFixedTail,
-} from '../algebra/schubertPolynomials.js';
+import { doubleSchubertPolynomial, grothendieckPolynomial, schubertPolynomial, trimFixedTail } from '../algebra/schubertPolynomials.js';
 import { schurPolynomial } from '../algebra/schur.js';
 import { isRealRootedCoefficients } from '../algebra/sturm.js';
 import { indexedVarId, varBase, varIndex } from '../algebra/variables.js';
@@ -60,14 +58,15 @@ defineFunction({
     { name: 'y', type: 'polynomial' },
   ],
   returns: 'scalarOrPolynomial',
-  description:
-    'the double Schubert polynomial S_w(x; y): top class prod_{i+j<=n} (x[i] - y[j]), divided differences in the x variables',
+  description: 'the double Schubert polynomial S_w(x; y): top class prod_{i+j<=n} (x[i] - y[j]), divided differences in the x variables',
   example: 'doubleSchubert(perm([1, 3, 2]), x, y)',
   exampleValue: 'x[1] + x[2] - y[1] - y[2]',
-  source: 'A. Lascoux, M.-P. Schützenberger (1982); I. G. Macdonald, Notes on Schubert Polynomials (1991), ch. VI; tested: S_w(x; 0) = S_w(x) and S_w(x; x) = 0 for w != id',
+  source:
+    'A. Lascoux, M.-P. Schützenberger (1982); I. G. Macdonald, Notes on Schubert Polynomials (1991), ch. VI; tested: S_w(x; 0) = S_w(x) and S_w(x; x) = 0 for w != id',
   impl: (w, x, y) => {
     const call = 'doubleSchubert(w, x, y)';
-    const bx = indexedBaseArg(call, 'x', x), by = indexedBaseArg(call, 'y', y);
+    const bx = indexedBaseArg(call, 'x', x),
+      by = indexedBaseArg(call, 'y', y);
     if (bx === by) fail(`${call} needs two different indeterminates, got ${bx} twice`);
     return doubleSchubertPolynomial(permArg(call, w), bx, by);
   },
@@ -105,7 +104,9 @@ function refuseHugeSchur(parts: readonly number[], m: number): void {
   for (let i = 1; i < m && binom <= BigInt(SCHUR_TERMS_MAX); i++) binom = (binom * BigInt(d + i)) / BigInt(i);
   if (binom <= BigInt(SCHUR_TERMS_MAX)) return;
   if (d <= 5000 && hookContentCount(parts, m) <= BigInt(SCHUR_TERMS_MAX)) return;
-  fail(`schur(lambda, x, m) would have more than ${SCHUR_TERMS_MAX.toLocaleString('en-US')} terms for lambda = [${parts.join(', ')}] and m = ${m}`);
+  fail(
+    `schur(lambda, x, m) would have more than ${SCHUR_TERMS_MAX.toLocaleString('en-US')} terms for lambda = [${parts.join(', ')}] and m = ${m}`,
+  );
 }
 
 defineFunction({
@@ -193,7 +194,10 @@ defineFunction({
     const poly = p as PolyLike;
     const ids = symmetricVars('isSymmetric(p, vars)', poly, vars, m);
     for (let k = 0; k + 1 < ids.length; k++) {
-      const swap = new Map([[ids[k], ids[k + 1]], [ids[k + 1], ids[k]]]);
+      const swap = new Map([
+        [ids[k], ids[k + 1]],
+        [ids[k + 1], ids[k]],
+      ]);
       if (!pequals(renameVariables(poly, swap), poly)) return false;
     }
     return true;
@@ -212,7 +216,8 @@ defineFunction({
     'whether every complex root of the nonzero polynomial p in q alone is real (multiple roots allowed; constants are real-rooted); exact, by Sturm sequences',
   example: 'isRealRooted(q^3 + 4*q^2 + q, q)',
   exampleValue: 'true',
-  source: 'Sturm\'s theorem (e.g. S. Basu, R. Pollack, M.-F. Roy, Algorithms in Real Algebraic Geometry, Thm 2.50); tested on Eulerian polynomials (OEIS A008292, real-rooted by Frobenius) and products of linear factors',
+  source:
+    "Sturm's theorem (e.g. S. Basu, R. Pollack, M.-F. Roy, Algorithms in Real Algebraic Geometry, Thm 2.50); tested on Eulerian polynomials (OEIS A008292, real-rooted by Frobenius) and products of linear factors",
   impl: (p, q) => {
     const call = 'isRealRooted(p, q)';
     const id = variableArg(call, 'q', q);
@@ -221,4 +226,3 @@ defineFunction({
     return isRealRootedCoefficients(c);
   },
 });
-

@@ -32,7 +32,10 @@ export function zOf(parts: readonly number[]): bigint {
 defineFunction({
   name: 'narayana',
   topic,
-  params: [{ name: 'n', type: 'integer' }, { name: 'k', type: 'integer' }],
+  params: [
+    { name: 'n', type: 'integer' },
+    { name: 'k', type: 'integer' },
+  ],
   returns: 'integer',
   description: 'the Narayana number N(n, k) = C(n, k) C(n, k-1) / n: Dyck paths of semilength n with k peaks (N(0, 0) = 1)',
   example: 'narayana(5, 3)',
@@ -44,7 +47,10 @@ defineFunction({
 defineFunction({
   name: 'eulerian',
   topic,
-  params: [{ name: 'n', type: 'integer' }, { name: 'k', type: 'integer' }],
+  params: [
+    { name: 'n', type: 'integer' },
+    { name: 'k', type: 'integer' },
+  ],
   returns: 'integer',
   description: 'the Eulerian number A(n, k): permutations of 1..n with exactly k descents, 0 <= k <= n - 1 (A(0, 0) = 1)',
   example: 'eulerian(4, 1)',

@@ -23,7 +23,8 @@ defineFunction({
   exampleValue: 'signedPermutation([-2, 1, 3])',
   source: 'definition (Björner and Brenti, Combinatorics of Coxeter Groups, §8.1)',
   impl: (v) => {
-    if (!Array.isArray(v) || !v.every((x) => typeof x === 'number')) fail(`a signed permutation is a list of nonzero integers, got ${valueToText(v)}`);
+    if (!Array.isArray(v) || !v.every((x) => typeof x === 'number'))
+      fail(`a signed permutation is a list of nonzero integers, got ${valueToText(v)}`);
     return SignedPermutation.from(v as number[]);
   },
 });
@@ -72,6 +73,7 @@ defineFunction({
   description: 'neg(w): the number of negative entries of the window',
   example: 'negatives(signedPermutation([-2, 1, -3]))',
   exampleValue: '2',
-  source: 'definition (Björner and Brenti, Combinatorics of Coxeter Groups, §8.1); binomial(n, k) n! signed permutations have k negative entries',
+  source:
+    'definition (Björner and Brenti, Combinatorics of Coxeter Groups, §8.1); binomial(n, k) n! signed permutations have k negative entries',
   impl: (w) => negatives(a(w)),
 });

@@ -35,11 +35,35 @@ export function basisIndexArg(call: string, v: Value): number[] {
 }
 
 const constructors: [string, BasisName, string, string, string][] = [
-  ['schurSym', 'schur', 'the Schur function s_lambda', 'schurSym([2, 1]) * schurSym(1)', 'schurSym([3, 1]) + schurSym([2, 2]) + schurSym([2, 1, 1])'],
+  [
+    'schurSym',
+    'schur',
+    'the Schur function s_lambda',
+    'schurSym([2, 1]) * schurSym(1)',
+    'schurSym([3, 1]) + schurSym([2, 2]) + schurSym([2, 1, 1])',
+  ],
   ['monomialSym', 'monomial', 'the monomial symmetric function m_lambda', 'monomialSym([1, 1])', 'schurSym([1, 1])'],
-  ['elementarySym', 'elementary', 'the elementary symmetric function e_lambda = e_lambda1 e_lambda2 ...', 'elementarySym([2, 1])', 'schurSym([2, 1]) + schurSym([1, 1, 1])'],
-  ['completeSym', 'complete', 'the complete homogeneous symmetric function h_lambda = h_lambda1 h_lambda2 ...', 'completeSym([2, 1])', 'schurSym([3]) + schurSym([2, 1])'],
-  ['powerSym', 'power', 'the power sum p_lambda = p_lambda1 p_lambda2 ...', 'powerSym(3)', 'schurSym([3]) - schurSym([2, 1]) + schurSym([1, 1, 1])'],
+  [
+    'elementarySym',
+    'elementary',
+    'the elementary symmetric function e_lambda = e_lambda1 e_lambda2 ...',
+    'elementarySym([2, 1])',
+    'schurSym([2, 1]) + schurSym([1, 1, 1])',
+  ],
+  [
+    'completeSym',
+    'complete',
+    'the complete homogeneous symmetric function h_lambda = h_lambda1 h_lambda2 ...',
+    'completeSym([2, 1])',
+    'schurSym([3]) + schurSym([2, 1])',
+  ],
+  [
+    'powerSym',
+    'power',
+    'the power sum p_lambda = p_lambda1 p_lambda2 ...',
+    'powerSym(3)',
+    'schurSym([3]) - schurSym([2, 1]) + schurSym([1, 1, 1])',
+  ],
 ];
 
 for (const [name, basis, what, example, exampleValue] of constructors) {
@@ -77,8 +101,7 @@ defineFunction({
   example: 'expand(powerSym([1, 1]), "monomial")',
   exampleValue: '[[partition([2]), 1], [partition([1, 1]), 2]]',
   source: `${MACDONALD_I}, I.6 (transition matrices) and the tables of the appendix to ch. I`,
-  impl: (f, b) =>
-    expandIn(symArg(f), basisNameArg('expand(f, basis)', b)).map((t) => [new Partition(t.parts.slice()), t.coef] as Value),
+  impl: (f, b) => expandIn(symArg(f), basisNameArg('expand(f, basis)', b)).map((t) => [new Partition(t.parts.slice()), t.coef] as Value),
 });
 
 /** A coefficient is positive when it is a nonnegative number or a polynomial with nonnegative coefficients. */
@@ -106,7 +129,8 @@ defineFunction({
       if (b !== undefined) fail(`${call}: a list of [key, coefficient] pairs takes no basis`);
       return (f as Value[]).every((pair) => {
         const c = Array.isArray(pair) && pair.length === 2 ? pair[1] : pair;
-        if (!(isScalar(c) || isPolynomial(c))) fail(`${call}: ${valueToText(pair as Value)} is not a [key, coefficient] pair with a numeric coefficient`);
+        if (!(isScalar(c) || isPolynomial(c)))
+          fail(`${call}: ${valueToText(pair as Value)} is not a [key, coefficient] pair with a numeric coefficient`);
         return nonnegative(c as PolyLike);
       });
     }
@@ -120,7 +144,7 @@ defineFunction({
   topic,
   params: [{ name: 'f', type: SYM }],
   returns: SYM,
-  description: 'the involution omega of the ring of symmetric functions: omega(s_lambda) = s_lambda\', omega(h_n) = e_n',
+  description: "the involution omega of the ring of symmetric functions: omega(s_lambda) = s_lambda', omega(h_n) = e_n",
   example: 'omega(completeSym([2, 1]))',
   exampleValue: 'schurSym([2, 1]) + schurSym([1, 1, 1])',
   source: `${MACDONALD_I}, I (2.7) and (3.8)`,
@@ -135,7 +159,8 @@ defineFunction({
     { name: 'g', type: SYM },
   ],
   returns: 'scalarOrPolynomial',
-  description: 'the Hall inner product <f, g>, for which the Schur functions are orthonormal (<h_lambda, m_mu> = delta, <p_lambda, p_mu> = z_lambda delta)',
+  description:
+    'the Hall inner product <f, g>, for which the Schur functions are orthonormal (<h_lambda, m_mu> = delta, <p_lambda, p_mu> = z_lambda delta)',
   example: 'hall(powerSym([2, 1]), powerSym([2, 1]))',
   exampleValue: '2',
   source: `${MACDONALD_I}, I (4.5)–(4.8)`,

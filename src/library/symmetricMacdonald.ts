@@ -59,7 +59,8 @@ defineFunction({
     { name: 't', type: 'scalarOrPolynomial' },
   ],
   returns: 'symmetric',
-  description: 'the Hall–Littlewood function Q_lambda(x; t) = b_lambda(t) P_lambda(x; t), b_lambda(t) = prod_i (1 - t)(1 - t^2)...(1 - t^(m_i(lambda)))',
+  description:
+    'the Hall–Littlewood function Q_lambda(x; t) = b_lambda(t) P_lambda(x; t), b_lambda(t) = prod_i (1 - t)(1 - t^2)...(1 - t^(m_i(lambda)))',
   example: 'hallLittlewoodQ([2], t)',
   exampleValue: '(-t + 1)*schurSym([2]) + (t^2 - t)*schurSym([1, 1])',
   source: `${MACDONALD}, III (2.11); tested against Q_(n) = sum_r (-t)^r e_r h_(n-r), III (2.9)–(2.10)`,

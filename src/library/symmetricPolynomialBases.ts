@@ -18,7 +18,9 @@ import { indexedBaseArg } from './polyArgs.js';
 import { defineFunction } from './registry.js';
 
 const topic = 'symmetric functions';
-const KEY_MAX_LENGTH = 10, KEY_MAX_SIZE = 24, STANLEY_MAX = 8;
+const KEY_MAX_LENGTH = 10,
+  KEY_MAX_SIZE = 24,
+  STANLEY_MAX = 8;
 
 function weakCompositionArg(call: string, v: Value): number[] {
   let a: readonly unknown[] | undefined;
@@ -81,7 +83,7 @@ defineFunction({
   example: 'schubertExpand(schubert(perm([1, 3, 2]), x) * schubert(perm([2, 1, 3]), x), x)',
   exampleValue: '[[perm([2, 3, 1]), 1], [perm([3, 1, 2]), 1]]',
   source:
-    'I. G. Macdonald, Notes on Schubert Polynomials (1991), (4.11) (leading term x^code(w)); tested against Monk\'s rule (D. Monk, The geometry of flag manifolds, Proc. London Math. Soc. 9 (1959))',
+    "I. G. Macdonald, Notes on Schubert Polynomials (1991), (4.11) (leading term x^code(w)); tested against Monk's rule (D. Monk, The geometry of flag manifolds, Proc. London Math. Soc. 9 (1959))",
   impl: (P, x) => {
     const call = 'schubertExpand(P, x)';
     const pairs = schubertExpansion(P as PolyLike, indexedBaseArg(call, 'x', x), call);
@@ -108,7 +110,8 @@ defineFunction({
     'R. Stanley, On the number of reduced decompositions of elements of Coxeter groups, European J. Combin. 5 (1984); P. Edelman, C. Greene, Balanced tableaux, Adv. Math. 63 (1987); tested against F_{w0} = s_staircase and S_{1^m × w}(x_1..x_m)',
   impl: (w) => {
     const a = trimFixedTail((w as Permutation).a);
-    if (a.length > STANLEY_MAX) fail(`stanleySym(w) is limited to permutations that fix every point after ${STANLEY_MAX}; ${(w as Permutation).toText()} does not`);
+    if (a.length > STANLEY_MAX)
+      fail(`stanleySym(w) is limited to permutations that fix every point after ${STANLEY_MAX}; ${(w as Permutation).toText()} does not`);
     const m = new TermMap();
     for (const [lam, c] of stanleySchurCoefficients(a)) m.add(lam, c);
     return m.result();

@@ -37,7 +37,8 @@ function rowsArg(v: Value, what: string): number[][] {
  * the row of the outer corner where the hole ended (that cell is removed).
  */
 export function slideOut(rows: number[][]): number {
-  let i = 0, j = 0;
+  let i = 0,
+    j = 0;
   for (;;) {
     const right = j + 1 < rows[i].length ? rows[i][j + 1] : Infinity;
     const below = i + 1 < rows.length && j < rows[i + 1].length ? rows[i + 1][j] : Infinity;
@@ -109,7 +110,8 @@ defineFunction({
   topic: 'pipe dreams',
   params: [{ name: 'crosses', type: 'list' }],
   returns: 'pipeDream',
-  description: 'the pipe dream with crosses at the given cells [row, column] (elbows elsewhere); the pipe entering at the left of row i exits at the top of column w(i)',
+  description:
+    'the pipe dream with crosses at the given cells [row, column] (elbows elsewhere); the pipe entering at the left of row i exits at the top of column w(i)',
   example: 'pipeDream([[1, 2], [1, 1]])',
   exampleValue: 'pipeDream([[1, 1], [1, 2]])',
   source: 'definition; "Gröbner geometry of Schubert polynomials", Ann. of Math. 161 (2005), §1.4',
@@ -142,10 +144,11 @@ defineFunction({
   source: 'Macdonald, Symmetric Functions and Hall Polynomials, I.5 (the weight of a tableau)',
   impl: (t) => {
     const c: number[] = [];
-    for (const r of (t as Tableau).rows) for (const v of r) {
-      while (c.length < v) c.push(0);
-      c[v - 1]++;
-    }
+    for (const r of (t as Tableau).rows)
+      for (const v of r) {
+        while (c.length < v) c.push(0);
+        c[v - 1]++;
+      }
     return c;
   },
 });
@@ -165,12 +168,17 @@ defineFunction({
 defineFunction({
   name: 'promotion',
   topic,
-  params: [{ name: 'T', type: 'tableau' }, { name: 'm', type: 'integer', optional: true }],
+  params: [
+    { name: 'T', type: 'tableau' },
+    { name: 'm', type: 'integer', optional: true },
+  ],
   returns: 'tableau',
-  description: 'Schützenberger promotion: of a standard tableau, delete 1, slide by jeu de taquin, subtract 1, put n in the vacated cell; of a semistandard tableau with entries in 1..m (m defaults to the largest entry), the Bender–Knuth product t_{m-1} ... t_1',
+  description:
+    'Schützenberger promotion: of a standard tableau, delete 1, slide by jeu de taquin, subtract 1, put n in the vacated cell; of a semistandard tableau with entries in 1..m (m defaults to the largest entry), the Bender–Knuth product t_{m-1} ... t_1',
   example: 'promotion(tableau([[1, 2], [3, 4]]))',
   exampleValue: 'tableau([[1, 3], [2, 4]])',
-  source: 'Schützenberger, Discrete Math. 2 (1972); Stanley, "Promotion and evacuation", Electron. J. Combin. 16(2) (2009); order m on rectangles: Rhoades, J. Combin. Theory A 117 (2010)',
+  source:
+    'Schützenberger, Discrete Math. 2 (1972); Stanley, "Promotion and evacuation", Electron. J. Combin. 16(2) (2009); order m on rectangles: Rhoades, J. Combin. Theory A 117 (2010)',
   impl: (t, m) => {
     const T = t as Tableau;
     if (m === undefined && T.isStandard()) return new Tableau(promotionRows(T.rows));
@@ -181,12 +189,17 @@ defineFunction({
 defineFunction({
   name: 'evacuation',
   topic,
-  params: [{ name: 'T', type: 'tableau' }, { name: 'm', type: 'integer', optional: true }],
+  params: [
+    { name: 'T', type: 'tableau' },
+    { name: 'm', type: 'integer', optional: true },
+  ],
   returns: 'tableau',
-  description: 'Schützenberger evacuation (an involution preserving the shape): of a standard tableau by jeu de taquin; of a semistandard tableau with entries in 1..m (m defaults to the largest entry) by Bender–Knuth involutions',
+  description:
+    'Schützenberger evacuation (an involution preserving the shape): of a standard tableau by jeu de taquin; of a semistandard tableau with entries in 1..m (m defaults to the largest entry) by Bender–Knuth involutions',
   example: 'evacuation(tableau([[1, 2, 3], [4]]))',
   exampleValue: 'tableau([[1, 3, 4], [2]])',
-  source: 'Schützenberger, Math. Scand. 12 (1963); Stanley, Enumerative Combinatorics 2, A1.2, and "Promotion and evacuation", Electron. J. Combin. 16(2) (2009)',
+  source:
+    'Schützenberger, Math. Scand. 12 (1963); Stanley, Enumerative Combinatorics 2, A1.2, and "Promotion and evacuation", Electron. J. Combin. 16(2) (2009)',
   impl: (t, m) => {
     const T = t as Tableau;
     if (m === undefined && T.isStandard()) return new Tableau(evacuationRows(T.rows));

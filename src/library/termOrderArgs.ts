@@ -45,20 +45,25 @@ function didYouMean(s: string): string {
 
 function namedSpec(call: string, s: string): 'lex' | 'deglex' | 'grevlex' {
   if (s === 'lex' || s === 'deglex' || s === 'grevlex') return s;
-  fail(`${call}: ${JSON.stringify(s)} is not a term order; the named orders are ${NAMED.map((x) => JSON.stringify(x)).join(', ')}${didYouMean(s)}`);
+  fail(
+    `${call}: ${JSON.stringify(s)} is not a term order; the named orders are ${NAMED.map((x) => JSON.stringify(x)).join(', ')}${didYouMean(s)}`,
+  );
 }
 
 /** A named order or a weight vector over `count` variables. */
 function innerSpec(call: string, v: Value, count: number): OrderSpec {
   if (typeof v === 'string') {
-    if (v === 'antidiagonal') fail(`${call}: "antidiagonal" cannot be the order inside a block; list the block's variables in antidiagonal order with "lex"`);
+    if (v === 'antidiagonal')
+      fail(`${call}: "antidiagonal" cannot be the order inside a block; list the block's variables in antidiagonal order with "lex"`);
     return namedSpec(call, v);
   }
   if (Array.isArray(v) && v.every((x) => typeof x === 'number' && Number.isSafeInteger(x) && x >= 0)) {
     if (v.length !== count) fail(`${call}: a weight vector needs one weight per variable (${count}), not ${v.length}`);
     return { weights: v as number[], then: 'grevlex' };
   }
-  fail(`${call}: ${valueToText(v)} is not a term order (a name such as "grevlex", a list of nonnegative weights, or a list of [variables, order] blocks)`);
+  fail(
+    `${call}: ${valueToText(v)} is not a term order (a name such as "grevlex", a list of nonnegative weights, or a list of [variables, order] blocks)`,
+  );
 }
 
 function blockArg(call: string, b: readonly Value[], k: number, ring: readonly number[]): { vars: number[]; order: OrderSpec } {

@@ -75,7 +75,8 @@ export function isign(a: Int): -1 | 0 | 1 {
 
 export function icmp(a: Int, b: Int): -1 | 0 | 1 {
   if (typeof a === 'number' && typeof b === 'number') return a < b ? -1 : a > b ? 1 : 0;
-  const x = toBig(a), y = toBig(b);
+  const x = toBig(a),
+    y = toBig(b);
   return x < y ? -1 : x > y ? 1 : 0;
 }
 
@@ -88,9 +89,10 @@ export function ieq(a: Int, b: Int): boolean {
 export function iquo(a: Int, b: Int): Int {
   if (isZero(b)) fail('division by zero');
   if (typeof a === 'number' && typeof b === 'number') return Math.floor(a / b) + 0;
-  const x = toBig(a), y = toBig(b);
+  const x = toBig(a),
+    y = toBig(b);
   let q = x / y;
-  if ((x % y !== 0n) && ((x < 0n) !== (y < 0n))) q -= 1n;
+  if (x % y !== 0n && x < 0n !== y < 0n) q -= 1n;
   return normBig(q);
 }
 
@@ -99,11 +101,12 @@ export function imod(a: Int, b: Int): Int {
   if (isZero(b)) fail('division by zero');
   if (typeof a === 'number' && typeof b === 'number') {
     const r = a % b;
-    return (r !== 0 && (r < 0) !== (b < 0) ? r + b : r) + 0;
+    return (r !== 0 && r < 0 !== b < 0 ? r + b : r) + 0;
   }
-  const x = toBig(a), y = toBig(b);
+  const x = toBig(a),
+    y = toBig(b);
   let r = x % y;
-  if (r !== 0n && (r < 0n) !== (y < 0n)) r += y;
+  if (r !== 0n && r < 0n !== y < 0n) r += y;
   return normBig(r);
 }
 
@@ -139,7 +142,9 @@ export function ipow(a: Int, e: number): Int {
   // Refuse, before trying, a power with more bits than an exact integer here may have.
   const bits = toBig(iabs(a)).toString(2).length;
   if (bits > 1 && (bits - 1) * e > MAX_POWER_BITS)
-    fail(`${bits <= 64 ? intToString(a) : `(a number of ${Math.round(bits / 3.3219)} digits)`}^${e} would have about ${Math.round(((bits - 1) * e) / 3.3219)} digits; hunch computes exact integers of at most about ${Math.round(MAX_POWER_BITS / 3.3219)} digits`);
+    fail(
+      `${bits <= 64 ? intToString(a) : `(a number of ${Math.round(bits / 3.3219)} digits)`}^${e} would have about ${Math.round(((bits - 1) * e) / 3.3219)} digits; hunch computes exact integers of at most about ${Math.round(MAX_POWER_BITS / 3.3219)} digits`,
+    );
   return normBig(toBig(a) ** BigInt(e));
 }
 

@@ -39,7 +39,8 @@ export function sisOne(a: Scalar): boolean {
 
 export function scmp(a: Scalar, b: Scalar): -1 | 0 | 1 {
   if (!(a instanceof Rat) && !(b instanceof Rat)) return icmp(a, b);
-  const x = numOf(a) * denOf(b), y = numOf(b) * denOf(a);
+  const x = numOf(a) * denOf(b),
+    y = numOf(b) * denOf(a);
   return x < y ? -1 : x > y ? 1 : 0;
 }
 

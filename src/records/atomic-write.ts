@@ -6,7 +6,19 @@
 // `.<name>.hunch-<pid>-<random>.tmp`; one left by a killed process is removed by the next write to
 // the same file, once its process is gone.
 
-import { closeSync, fsyncSync, lstatSync, statSync, mkdirSync, openSync, readdirSync, realpathSync, renameSync, unlinkSync, writeSync } from 'node:fs';
+import {
+  closeSync,
+  fsyncSync,
+  lstatSync,
+  statSync,
+  mkdirSync,
+  openSync,
+  readdirSync,
+  realpathSync,
+  renameSync,
+  unlinkSync,
+  writeSync,
+} from 'node:fs';
 import { randomBytes } from 'node:crypto';
 import { basename, dirname, join, relative, isAbsolute, sep } from 'node:path';
 import { InputError } from '../base/errors.js';
@@ -78,7 +90,8 @@ export function checkWritablePath(path: string, opts: AtomicWriteOptions = {}): 
   } catch {
     st = null;
   }
-  if (st?.isSymbolicLink()) throw new InputError(`refusing to write ${what} ${path}: it is a symbolic link, and hunch never writes through a link`);
+  if (st?.isSymbolicLink())
+    throw new InputError(`refusing to write ${what} ${path}: it is a symbolic link, and hunch never writes through a link`);
   if (st && !st.isFile()) throw new InputError(`cannot write ${what} ${path}: it is not a regular file`);
   if (opts.within) {
     const root = realOrSelf(opts.within);
@@ -95,7 +108,9 @@ export function checkWritablePath(path: string, opts: AtomicWriteOptions = {}): 
       }
     }
     if (!isInside(root, join(realOrSelf(dir), relative(dir, dirname(path)))))
-      throw new InputError(`refusing to write ${what} ${path}: it would land outside the project ${opts.within} (through a link or a path that leaves it)`);
+      throw new InputError(
+        `refusing to write ${what} ${path}: it would land outside the project ${opts.within} (through a link or a path that leaves it)`,
+      );
   }
 }
 
@@ -109,7 +124,8 @@ export function writeFileAtomic(path: string, content: string, opts: AtomicWrite
       if (!statSync(dir).isDirectory()) throw new Error(`${dir} is not a folder`);
     } else mkdirSync(dir, { recursive: true });
   } catch (e) {
-    if ((e as NodeJS.ErrnoException).code === 'ENOENT') throw new InputError(`cannot write ${what} ${path}: the folder ${dir} does not exist`);
+    if ((e as NodeJS.ErrnoException).code === 'ENOENT')
+      throw new InputError(`cannot write ${what} ${path}: the folder ${dir} does not exist`);
     throw new InputError(`cannot write ${what} ${path}: ${(e as Error).message}`);
   }
   if (opts.within) checkWritablePath(path, opts); // the folders made just now: still inside

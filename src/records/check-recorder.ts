@@ -37,7 +37,8 @@ export function createCheckRecorder(project: Project, compiled: CompiledConjectu
   const writer = ledgerPath ? new LedgerWriter(ledgerPath, undefined, typeof opts.ledger === 'string' ? undefined : project.root) : null;
   // A counterexample file that would be written through a link or outside the project.
   if (opts.counterexamples !== false)
-    for (const cc of compiled) checkWritablePath(counterexamplePath(project.root, cc.spec.id), { within: project.root, what: 'the counterexample file' });
+    for (const cc of compiled)
+      checkWritablePath(counterexamplePath(project.root, cc.spec.id), { within: project.root, what: 'the counterexample file' });
   writer?.open(); // a ledger that cannot be written is reported before any work is done
   const warnings: string[] = [];
   return {

@@ -115,21 +115,35 @@ function header(f: CounterexampleFile, texts: Record<string, string>): string {
     'The case:',
     ...Object.entries(texts).map(([k, v]) => `    ${k} = ${v}`),
     ...(f.sides ? [`The two sides of the claim: ${sideText(f.sides[0])} and ${sideText(f.sides[1])}.`] : []),
-    ...(f.witnesses ?? []).filter((w) => w.kind === 'element').map((w) =>
-      `Witness: ${w.at} ${w.reducer === 'min' || w.reducer === 'max' ? `= ${sideText(w.value)}` : `is ${w.reducer === 'any' ? 'true' : 'false'}`} at ${Object.entries(w.bindings).map(([k, v]) => `${k} = ${sideText(v)}`).join(', ')}.`),
+    ...(f.witnesses ?? [])
+      .filter((w) => w.kind === 'element')
+      .map(
+        (w) =>
+          `Witness: ${w.at} ${w.reducer === 'min' || w.reducer === 'max' ? `= ${sideText(w.value)}` : `is ${w.reducer === 'any' ? 'true' : 'false'}`} at ${Object.entries(
+            w.bindings,
+          )
+            .map(([k, v]) => `${k} = ${sideText(v)}`)
+            .join(', ')}.`,
+      ),
     `Found ${found}.`,
     '',
     'This file holds everything needed to check it again, including the conjecture as it was checked',
     '(under "document" below). To replay it:',
     `    ${f.replay}`,
-    ...(f.plugins.length ? ['', `It uses functions from plugins: ${f.plugins.map((p) => `${p.file} (${p.functions.join(', ')})`).join('; ')}.`] : []),
+    ...(f.plugins.length
+      ? ['', `It uses functions from plugins: ${f.plugins.map((p) => `${p.file} (${p.functions.join(', ')})`).join('; ')}.`]
+      : []),
   ];
   // Every header line is one comment line: text from input (the statement) keeps no newline or control byte.
   return lines.map((l) => (l ? `# ${escapeControl(l, true)}` : '#')).join('\n') + '\n';
 }
 
 function sizeText(size: Record<string, number>): string {
-  return Object.entries(size).map(([k, v]) => `${k} = ${v}`).join(', ') || 'the only size';
+  return (
+    Object.entries(size)
+      .map(([k, v]) => `${k} = ${v}`)
+      .join(', ') || 'the only size'
+  );
 }
 
 function sideText(x: unknown): string {
@@ -181,7 +195,11 @@ export function counterexampleText(f: CounterexampleFile, texts?: Record<string,
   const { defines, document, ...rest } = f;
   // The readable part first, the conjecture last; values as compact [1, 3, 2] lists.
   const doc = new Document({ ...rest, defines, document });
-  for (let pass = 0; pass < 4; pass++) // inner lists first: a tableau [[1, 2], [3]] takes two passes
+  for (
+    let pass = 0;
+    pass < 4;
+    pass++ // inner lists first: a tableau [[1, 2], [3]] takes two passes
+  )
     visit(doc, {
       Seq(_, node) {
         if (node.items.every((x) => isScalar(x) || (isSeq(x) && x.flow))) node.flow = true;
@@ -219,7 +237,10 @@ export function writeCounterexampleFile(
       // unreadable: rewrite it below
     }
   }
-  writeFileAtomic(path, counterexampleText(counterexampleRecord(spec, result.hash, cx, shown, plugins), cx.text), { within: root, what: 'the counterexample file' });
+  writeFileAtomic(path, counterexampleText(counterexampleRecord(spec, result.hash, cx, shown, plugins), cx.text), {
+    within: root,
+    what: 'the counterexample file',
+  });
   return shown;
 }
 
@@ -254,10 +275,16 @@ export function parseCounterexampleFile(text: string, path: string): Counterexam
   if (typeof f.conjecture !== 'string') throw badFile(path, 'the "conjecture" id is missing');
   if (typeof f.hash !== 'string' || !/^[0-9a-f]{64}$/.test(f.hash)) throw badFile(path, 'the "hash" is missing or malformed');
   if (!isObj(f.bindings)) throw badFile(path, '"bindings" must map each binding name to its value');
-  if (!isObj(f.document) || typeof f.document.conjecture !== 'string') throw badFile(path, '"document" must hold the conjecture as checked');
-  if (f.document.conjecture !== f.conjecture) throw badFile(path, `"document" holds the conjecture ${f.document.conjecture}, not ${f.conjecture}`);
-  if (f.defines !== undefined && (!Array.isArray(f.defines) || !f.defines.every(isObj))) throw badFile(path, '"defines" must be a list of define documents');
-  if (f.plugins !== undefined && (!Array.isArray(f.plugins) || !f.plugins.every((p) => isObj(p) && typeof p.file === 'string' && Array.isArray(p.functions))))
+  if (!isObj(f.document) || typeof f.document.conjecture !== 'string')
+    throw badFile(path, '"document" must hold the conjecture as checked');
+  if (f.document.conjecture !== f.conjecture)
+    throw badFile(path, `"document" holds the conjecture ${f.document.conjecture}, not ${f.conjecture}`);
+  if (f.defines !== undefined && (!Array.isArray(f.defines) || !f.defines.every(isObj)))
+    throw badFile(path, '"defines" must be a list of define documents');
+  if (
+    f.plugins !== undefined &&
+    (!Array.isArray(f.plugins) || !f.plugins.every((p) => isObj(p) && typeof p.file === 'string' && Array.isArray(p.functions)))
+  )
     throw badFile(path, '"plugins" must list {file, sha256, functions}');
   const found = isObj(f.found) ? f.found : {};
   return {
@@ -311,7 +338,12 @@ export function bindingsInOrder(f: CounterexampleFile, names: readonly string[])
  * conjecture as it stands now (`hash`): after an edit, the old case may no longer be the simplest,
  * so the full check runs instead (and rewrites the file).
  */
-export function readRegressionEncoded(root: string, spec: ConjectureSpec, warn?: (message: string) => void, hash?: string): unknown[] | null {
+export function readRegressionEncoded(
+  root: string,
+  spec: ConjectureSpec,
+  warn?: (message: string) => void,
+  hash?: string,
+): unknown[] | null {
   const path = counterexamplePath(root, spec.id);
   let f: CounterexampleFile;
   try {
@@ -326,7 +358,10 @@ export function readRegressionEncoded(root: string, spec: ConjectureSpec, warn?:
   }
   if (f.conjecture !== spec.id) return null;
   if (hash !== undefined && f.hash !== hash) return null;
-  return bindingsInOrder(f, spec.bindings.map((b) => b.name));
+  return bindingsInOrder(
+    f,
+    spec.bindings.map((b) => b.name),
+  );
 }
 
 /** Like readRegressionEncoded, decoded to values (for callers in the same thread). */

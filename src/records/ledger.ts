@@ -58,8 +58,15 @@ const HASH = /^[0-9a-f]{64}$/;
 /** A record as one line, keys in a fixed order (so identical records are identical lines). */
 export function recordLine(r: LedgerRecord): string {
   const o: Record<string, unknown> = {
-    v: r.v, id: r.id, hash: r.hash, tool: r.tool, phase: r.phase, size: sortedSize(r.size),
-    cases: r.cases, failures: r.failures, skipped: r.skipped,
+    v: r.v,
+    id: r.id,
+    hash: r.hash,
+    tool: r.tool,
+    phase: r.phase,
+    size: sortedSize(r.size),
+    cases: r.cases,
+    failures: r.failures,
+    skipped: r.skipped,
   };
   if (r.shard !== undefined) o.shard = r.shard;
   if (r.seed !== undefined) o.seed = r.seed;
@@ -91,9 +98,19 @@ export function pieceOutcome(p: Pick<CheckedPiece, 'failures' | 'partial'>): Pie
 /** The ledger record of a finished piece. */
 export function pieceRecord(id: string, hash: string, piece: CheckedPiece, ctx: RunContext, at: Date = new Date()): LedgerRecord {
   const r: LedgerRecord = {
-    v: LEDGER_VERSION, id, hash, tool: ctx.tool, phase: piece.phase, size: { ...piece.size },
-    cases: piece.cases, failures: piece.failures, skipped: piece.skipped,
-    ms: Math.round(piece.ms * 10) / 10, at: at.toISOString(), host: ctx.host, run: ctx.run,
+    v: LEDGER_VERSION,
+    id,
+    hash,
+    tool: ctx.tool,
+    phase: piece.phase,
+    size: { ...piece.size },
+    cases: piece.cases,
+    failures: piece.failures,
+    skipped: piece.skipped,
+    ms: Math.round(piece.ms * 10) / 10,
+    at: at.toISOString(),
+    host: ctx.host,
+    run: ctx.run,
     outcome: pieceOutcome(piece),
   };
   if (piece.shard !== undefined) r.shard = piece.shard;
@@ -131,7 +148,12 @@ export class LedgerWriter {
       this.fd = openSync(this.path, constants.O_APPEND | constants.O_CREAT | constants.O_RDWR | constants.O_NOFOLLOW, 0o644);
     } catch (e) {
       const code = (e as NodeJS.ErrnoException).code;
-      const why = code === 'ELOOP' ? 'it is a symbolic link, and hunch never writes through a link' : code === 'EISDIR' ? 'it is a folder' : (e as Error).message;
+      const why =
+        code === 'ELOOP'
+          ? 'it is a symbolic link, and hunch never writes through a link'
+          : code === 'EISDIR'
+            ? 'it is a folder'
+            : (e as Error).message;
       throw new InputError(`cannot open the ledger ${this.path} for writing: ${why}`);
     }
     if (!fstatSync(this.fd).isFile()) {
@@ -219,7 +241,9 @@ function bad(file: string, line: number, what: string, text: string): InputError
 
 /** A damaged line as it may be shown on a terminal: control and undecodable bytes escaped. */
 function printable(text: string): string {
-  return text.replace(/[\u0000-\u001f\u007f-\u009f\ufffd]/g, (c) => (c === '\ufffd' ? '?' : `\\x${c.charCodeAt(0).toString(16).padStart(2, '0')}`));
+  return text.replace(/[\u0000-\u001f\u007f-\u009f\ufffd]/g, (c) =>
+    c === '\ufffd' ? '?' : `\\x${c.charCodeAt(0).toString(16).padStart(2, '0')}`,
+  );
 }
 
 const isCount = (x: unknown) => typeof x === 'number' && Number.isSafeInteger(x) && x >= 0;
@@ -277,7 +301,8 @@ export function parseLedger(text: string, file: string): LedgerContents {
     }
     if (!o || typeof o !== 'object' || Array.isArray(o)) throw bad(file, lineNo, 'it is not a JSON object', raw);
     const rec = o as Record<string, unknown>;
-    if (typeof rec.v !== 'number' || !Number.isSafeInteger(rec.v) || rec.v < 1) throw bad(file, lineNo, 'the format version "v" is missing', raw);
+    if (typeof rec.v !== 'number' || !Number.isSafeInteger(rec.v) || rec.v < 1)
+      throw bad(file, lineNo, 'the format version "v" is missing', raw);
     if (rec.v > LEDGER_VERSION) {
       out.warnings.push(
         `${file}:${lineNo}: skipping a record of ledger format ${rec.v}, written by a newer hunch (this one reads format ${LEDGER_VERSION}); upgrade hunch to count it`,

@@ -73,7 +73,8 @@ export function coverageOf(records: readonly LedgerRecord[]): VersionCoverage[] 
           const whole = c.complete.length === 1 && c.complete[0].shard === undefined;
           return { size, complete: true, slices: whole ? null : c.complete.length, cases: c.complete.reduce((a, r) => a + r.cases, 0) };
         }
-        let of = 0, present: number[] = [];
+        let of = 0,
+          present: number[] = [];
         for (const [k, is] of Object.entries(c.partialSlices)) if (is.length > present.length) (of = Number(k)), (present = is);
         const missing = Array.from({ length: of }, (_, i) => i + 1).filter((i) => !present.includes(i));
         const cases = sr.filter((r) => !r.partial && r.shard && parseShard(r.shard)?.of === of).reduce((a, r) => a + r.cases, 0);
@@ -99,5 +100,11 @@ export function mergeLedgers(paths: readonly string[], out: string | null): Merg
   });
   const { records, duplicates } = mergeRecords(lists);
   if (out) writeFileAtomic(out, records.map((r) => recordLine(r) + '\n').join(''), { what: 'the merged ledger' });
-  return { records, inputs: inputs.map((p, i) => ({ path: p, records: lists[i].length })), duplicates, coverage: coverageOf(records), warnings };
+  return {
+    records,
+    inputs: inputs.map((p, i) => ({ path: p, records: lists[i].length })),
+    duplicates,
+    coverage: coverageOf(records),
+    warnings,
+  };
 }

@@ -53,10 +53,14 @@ export function approvedPlugins(project: Project): ApprovedPlugin[] {
  */
 export async function openProjectAt(root: string, approved: readonly ApprovedPlugin[] = []): Promise<Project> {
   const config = readProjectConfig(root);
-  const plugins = await loadPlugins(approved.map((a) => a.path), root);
+  const plugins = await loadPlugins(
+    approved.map((a) => a.path),
+    root,
+  );
   for (const p of plugins) {
     const want = approved.find((a) => a.path === p.path);
-    if (want && want.sha256 !== p.sha256) throw new InputError(`the plugin ${p.file} changed while hunch was starting; run the command again`);
+    if (want && want.sha256 !== p.sha256)
+      throw new InputError(`the plugin ${p.file} changed while hunch was starting; run the command again`);
   }
   return { root, config, plugins, skipped: null };
 }
@@ -82,7 +86,8 @@ function trustDirHint(project: Project): string {
  */
 export function explainSkippedPlugins(e: unknown, project: Project | null): unknown {
   if (!project?.skipped || !(e instanceof InputError) || !/^unknown function /.test(e.message)) return e;
-  const note = `; the project's plugins (${project.skipped.files.join(', ')}) were not loaded: ${project.skipped.why}. ` +
+  const note =
+    `; the project's plugins (${project.skipped.files.join(', ')}) were not loaded: ${project.skipped.why}. ` +
     `If you trust them, run "hunch trust ${trustDirHint(project)}" once, or pass --allow-plugins`;
   return new InputError(e.message + note, e.pos, e.snippet, e.suggestion);
 }

@@ -89,14 +89,16 @@ function readTypeName(file: string, what: string, t: string): TypeName {
 }
 
 function readParams(file: string, fname: string, raw: unknown): ParamDecl[] {
-  if (!Array.isArray(raw)) throw pluginError(file, `declares ${fname} without a "params" list (e.g. params: [{ name: 'w', type: 'permutation' }])`);
+  if (!Array.isArray(raw))
+    throw pluginError(file, `declares ${fname} without a "params" list (e.g. params: [{ name: 'w', type: 'permutation' }])`);
   return raw.map((p, i) => {
     if (typeof p === 'string') return { name: `x${i + 1}`, type: readTypeName(file, `parameter ${i + 1} of ${fname}`, p) };
     if (p && typeof p === 'object') {
       const o = p as Record<string, unknown>;
       const type = o.type;
       const ok = typeof type === 'string' || (Array.isArray(type) && type.every((t) => typeof t === 'string'));
-      if (!ok) throw pluginError(file, `declares parameter ${i + 1} of ${fname} without a type (a type name such as 'integer' or 'permutation')`);
+      if (!ok)
+        throw pluginError(file, `declares parameter ${i + 1} of ${fname} without a type (a type name such as 'integer' or 'permutation')`);
       return {
         name: typeof o.name === 'string' ? o.name : `x${i + 1}`,
         type: Array.isArray(type)

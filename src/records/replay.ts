@@ -48,12 +48,19 @@ export interface ReplayResult {
 /** The keys of two canonical forms that differ, in words. */
 export function describeDifferences(was: Record<string, unknown>, now: Record<string, unknown>): string[] {
   const names: Record<string, string> = {
-    indeterminates: 'the indeterminates', for: 'the bindings (for)', where: 'where', let: 'the lets',
-    claim: 'the claim', sample: 'the sample ranges', define: 'the definitions it uses', plugins: 'the plugin files it uses',
+    indeterminates: 'the indeterminates',
+    for: 'the bindings (for)',
+    where: 'where',
+    let: 'the lets',
+    claim: 'the claim',
+    sample: 'the sample ranges',
+    define: 'the definitions it uses',
+    plugins: 'the plugin files it uses',
   };
   const out: string[] = [];
   for (const k of Object.keys(names)) {
-    const a = JSON.stringify(was[k] ?? null), b = JSON.stringify(now[k] ?? null);
+    const a = JSON.stringify(was[k] ?? null),
+      b = JSON.stringify(now[k] ?? null);
     if (a !== b) out.push(`${names[k]}: was ${a}, now ${b}`);
   }
   return out;
@@ -65,7 +72,8 @@ function embeddedSpec(f: CounterexampleFile, path: string): ConjectureSpec {
   try {
     loaded = loadConjectureFile(`${path} (the conjecture inside it)`, text);
   } catch (e) {
-    if (e instanceof InputError) throw new InputError(`the conjecture inside ${path} cannot be read: ${e.message}`, e.pos, e.snippet, e.suggestion);
+    if (e instanceof InputError)
+      throw new InputError(`the conjecture inside ${path} cannot be read: ${e.message}`, e.pos, e.snippet, e.suggestion);
     throw e;
   }
   const spec = loaded.conjectures.find((c) => c.id === f.conjecture);
@@ -85,15 +93,30 @@ function localConjecture(project: Project | null, id: string): ConjectureSpec | 
 /** How long a replay may take by default (the case of a mailed file may be slow, but not endless). */
 export const DEFAULT_REPLAY_BUDGET_MS = 5 * 60_000;
 
-export function replayCounterexample(path: string, project: Project | null, opts: { budgetMs?: number; interrupted?: () => boolean } = {}): ReplayResult {
+export function replayCounterexample(
+  path: string,
+  project: Project | null,
+  opts: { budgetMs?: number; interrupted?: () => boolean } = {},
+): ReplayResult {
   const f = readCounterexampleFile(path);
   const base: ReplayResult = {
-    file: f, verdict: 'error', bindings: {}, values: {}, sides: null, witnesses: [], error: null,
-    missingPlugins: [], changedPlugins: [], embeddedHashMatches: true, local: null,
+    file: f,
+    verdict: 'error',
+    bindings: {},
+    values: {},
+    sides: null,
+    witnesses: [],
+    error: null,
+    missingPlugins: [],
+    changedPlugins: [],
+    embeddedHashMatches: true,
+    local: null,
   };
   const local = pluginHashes();
   base.missingPlugins = f.plugins.filter((p) => p.functions.some((fn) => !getFunction(fn)));
-  base.changedPlugins = f.plugins.filter((p) => !base.missingPlugins.includes(p) && p.functions.some((fn) => local[fn] !== undefined && local[fn] !== p.sha256));
+  base.changedPlugins = f.plugins.filter(
+    (p) => !base.missingPlugins.includes(p) && p.functions.some((fn) => local[fn] !== undefined && local[fn] !== p.sha256),
+  );
   if (base.missingPlugins.length) return { ...base, verdict: 'needs-plugins' };
 
   const spec = embeddedSpec(f, path);
@@ -105,7 +128,11 @@ export function replayCounterexample(path: string, project: Project | null, opts
   if (here) {
     const hash = conjectureHash(here, { pluginHashes: local });
     if (hash !== f.hash)
-      base.local = { file: here.file, hash, differences: describeDifferences(canonicalForm(spec, { pluginHashes: recorded }), canonicalForm(here, { pluginHashes: local })) };
+      base.local = {
+        file: here.file,
+        hash,
+        differences: describeDifferences(canonicalForm(spec, { pluginHashes: recorded }), canonicalForm(here, { pluginHashes: local })),
+      };
   }
 
   const cc = compileConjecture(spec);
@@ -141,4 +168,3 @@ export function replayCounterexample(path: string, project: Project | null, opts
     throw e;
   }
 }
-

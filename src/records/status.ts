@@ -98,7 +98,8 @@ function sampledOf(records: readonly LedgerRecord[]): SampledSize[] {
         if (!prev || r.cases > prev.cases) g.shards.set(r.shard, r);
       }
     }
-    let cases = 0, failures = 0;
+    let cases = 0,
+      failures = 0;
     for (const g of seeds.values()) {
       const sc = [...g.shards.values()].reduce((a, r) => a + r.cases, 0);
       const sf = [...g.shards.values()].reduce((a, r) => a + r.failures, 0);
@@ -142,7 +143,12 @@ export function conjectureStatus(c: ConjectureInfo, all: readonly LedgerRecord[]
     expect: c.expect,
     hash: c.hash,
     latest,
-    agrees: latest === null || latest.outcome === 'incomplete' ? null : c.expect === 'fails' ? latest.outcome === 'fails' : latest.outcome === 'holds',
+    agrees:
+      latest === null || latest.outcome === 'incomplete'
+        ? null
+        : c.expect === 'fails'
+          ? latest.outcome === 'fails'
+          : latest.outcome === 'holds',
     exhaustive,
     unfinished,
     sampled: sampledOf(current.filter((r) => r.phase === 'sample')),
@@ -158,6 +164,8 @@ export function computeStatus(conjectures: readonly ConjectureInfo[], records: r
   for (const r of records) if (!ids.has(r.id)) (unknown.get(r.id) ?? unknown.set(r.id, []).get(r.id)!).push(r);
   return {
     conjectures: conjectures.map((c) => conjectureStatus(c, records)),
-    unknown: [...unknown.entries()].sort((a, b) => (a[0] < b[0] ? -1 : 1)).map(([id, rs]) => ({ id, records: rs.length, lastAt: maxAt(rs) })),
+    unknown: [...unknown.entries()]
+      .sort((a, b) => (a[0] < b[0] ? -1 : 1))
+      .map(([id, rs]) => ({ id, records: rs.length, lastAt: maxAt(rs) })),
   };
 }

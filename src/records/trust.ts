@@ -89,16 +89,17 @@ function readTrustList(): TrustList {
   try {
     const d = JSON.parse(text) as TrustList;
     if (d && Array.isArray(d.projects))
-      return { format: TRUST_FORMAT, projects: d.projects.filter((p) => p && typeof p.config === 'string' && p.plugins && typeof p.plugins === 'object') };
+      return {
+        format: TRUST_FORMAT,
+        projects: d.projects.filter((p) => p && typeof p.config === 'string' && p.plugins && typeof p.plugins === 'object'),
+      };
   } catch {
     // a damaged list trusts nothing; `hunch trust` writes a fresh one
   }
   return { format: TRUST_FORMAT, projects: [] };
 }
 
-export type TrustVerdict =
-  | { trusted: true; why: 'flag' | 'trusted' | 'no-plugins' }
-  | { trusted: false; why: string };
+export type TrustVerdict = { trusted: true; why: 'flag' | 'trusted' | 'no-plugins' } | { trusted: false; why: string };
 
 /** Whether the project's plugins may run: --allow-plugins, or the allow list matches every plugin file. */
 export function pluginConsent(config: ProjectConfig, allowFlag: boolean): TrustVerdict {

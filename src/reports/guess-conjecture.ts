@@ -40,7 +40,9 @@ export function evidenceText(g: Guess): string {
 }
 
 function sourceText(o: GuessOrigin): string {
-  return o.expr !== undefined ? `a(${o.variable}) = ${o.expr} for ${o.variable} = ${o.lo}..${o.hi}` : `the terms given for n = ${o.lo}..${o.hi}`;
+  return o.expr !== undefined
+    ? `a(${o.variable}) = ${o.expr} for ${o.variable} = ${o.lo}..${o.hi}`
+    : `the terms given for n = ${o.lo}..${o.hi}`;
 }
 
 /** The YAML text of a file with one conjecture per picked guess (ranks are 1-based positions in the ranking). */
@@ -59,9 +61,10 @@ export function guessConjectureFile(picked: Array<{ rank: number; guess: Guess }
     const plan = guess.plan(f);
     const last = plan.lastFor(top);
     if (last < plan.first) continue;
-    const checked = origin.expr !== undefined
-      ? `To be checked for n up to ${top}, beyond the ${origin.hi - origin.lo + 1} terms it was guessed from.`
-      : 'The terms were given as a list, so checking this restates only those terms; state the sequence as an expression to check it further.';
+    const checked =
+      origin.expr !== undefined
+        ? `To be checked for n up to ${top}, beyond the ${origin.hi - origin.lo + 1} terms it was guessed from.`
+        : 'The terms were given as a list, so checking this restates only those terms; state the sequence as an expression to check it further.';
     const doc: Record<string, unknown> = {
       conjecture: `${opts.idPrefix}-${rank}`,
       statement: `Guessed by hunch guess from ${sourceText(origin)}: ${guess.title}, ${guess.formula} (${evidenceText(guess)}). ${checked}`,
@@ -78,5 +81,8 @@ export function guessConjectureFile(picked: Array<{ rank: number; guess: Guess }
     ];
     docs.push(stringify(doc, { lineWidth: 0 }));
   }
-  return `# Conjectures guessed by hunch guess from ${sourceText(origin)}.\n# They agree with every term they were guessed from; that proves nothing beyond those terms.\n` + docs.join('---\n');
+  return (
+    `# Conjectures guessed by hunch guess from ${sourceText(origin)}.\n# They agree with every term they were guessed from; that proves nothing beyond those terms.\n` +
+    docs.join('---\n')
+  );
 }

@@ -4,7 +4,8 @@
 import { MIN_CONFIRMING_TERMS, type Guess, type GuessReport } from '../algebra/guessing/index.js';
 import { evidenceText } from './guess-conjecture.js';
 
-export const GUESS_CAVEAT = 'Guesses agree with every term given; that proves nothing beyond those terms. Write them as conjectures (--write FILE) and check them on more.';
+export const GUESS_CAVEAT =
+  'Guesses agree with every term given; that proves nothing beyond those terms. Write them as conjectures (--write FILE) and check them on more.';
 
 function terms(k: number): string {
   return k === 1 ? '1 term' : `${k} terms`;

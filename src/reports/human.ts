@@ -53,7 +53,10 @@ export function verdictLabel(r: ConjectureResult, c: ChalkInstance, unicode: boo
       word = r.expect === 'fails' ? c.red('holds, but expected to fail') : c.green('holds');
       break;
     case 'fails':
-      word = r.expect === 'fails' ? c.green('fails, as expected') : c.red(r.expect === 'open' ? 'fails (a counterexample to an open conjecture)' : 'FAILS, but expected to hold');
+      word =
+        r.expect === 'fails'
+          ? c.green('fails, as expected')
+          : c.red(r.expect === 'open' ? 'fails (a counterexample to an open conjecture)' : 'FAILS, but expected to hold');
       break;
     case 'error':
       word = c.red('error');
@@ -70,7 +73,8 @@ function counterexampleBlock(cx: Counterexample, r: ConjectureResult, s: ReportS
   let how: string;
   if (cx.phase === 'exhaustive') {
     const piece = r.checked.find((p) => p.phase === 'exhaustive' && sizeText(p.size) === sizeText(cx.size));
-    const failing = cx.failuresAtSize !== null ? `${formatCount(cx.failuresAtSize)}${piece ? ` of ${formatCount(piece.cases)}` : ''}` : null;
+    const failing =
+      cx.failuresAtSize !== null ? `${formatCount(cx.failuresAtSize)}${piece ? ` of ${formatCount(piece.cases)}` : ''}` : null;
     how = `the simplest failing case at ${sizeText(cx.size)}${failing ? ` (failing: ${failing} cases)` : ''}`;
   } else if (cx.phase === 'sample') {
     how = `found by random sampling at ${sizeText(cx.shrunkFrom ?? cx.size)} (seed ${cx.seed}), shrunk in ${cx.shrinkSteps} step${cx.shrinkSteps === 1 ? '' : 's'} to ${sizeText(cx.size)}`;
@@ -87,7 +91,10 @@ function counterexampleBlock(cx: Counterexample, r: ConjectureResult, s: ReportS
     }
   }
   for (const [name, enc] of Object.entries(cx.values)) lines.push(`  ${c.cyan(name)} = ${encodedToText(enc)}`);
-  if (cx.sides) lines.push(`  ${r.claim ? `claim ${r.claim}: ` : 'the two sides: '}${encodedToText(cx.sides[0])} against ${encodedToText(cx.sides[1])}`);
+  if (cx.sides)
+    lines.push(
+      `  ${r.claim ? `claim ${r.claim}: ` : 'the two sides: '}${encodedToText(cx.sides[0])} against ${encodedToText(cx.sides[1])}`,
+    );
   lines.push(...witnessLines(cx.witnesses, s).map((l) => `  ${l}`));
   if (replayPath) lines.push(`  replay: hunch replay ${replayPath}`);
   return lines.join('\n');
@@ -99,14 +106,17 @@ export function formatResult(r: ConjectureResult, s: ReportStyle, replayPath: st
   const covered = [cov.exhaustive, cov.sampled].filter(Boolean).join('; ');
   let out = `${verdictLabel(r, c, s.unicode)}  ${c.dim(formatMs(r.ms))}\n`;
   if (covered) out += `    ${covered}\n`;
-  if (cov.sampled && r.outcome !== 'fails') out += c.dim('    (random cases are evidence, not proof: only the exhaustive sizes are verified)\n');
+  if (cov.sampled && r.outcome !== 'fails')
+    out += c.dim('    (random cases are evidence, not proof: only the exhaustive sizes are verified)\n');
   if (r.counterexample) out += indent(counterexampleBlock(r.counterexample, r, s, replayPath), '    ') + '\n';
   if (r.error) {
     const e = r.error;
     const where = e.file ? `${e.file}${e.line ? `:${e.line}` : ''}${e.column ? `:${e.column}` : ''}: ` : '';
     out += `    ${c.red('error:')} ${where}${e.message}\n`;
     if (e.bindings) {
-      out += `    in the case ${Object.entries(e.bindings).map(([k, v]) => `${k} = ${encodedToText(v)}`).join(', ')}\n`;
+      out += `    in the case ${Object.entries(e.bindings)
+        .map(([k, v]) => `${k} = ${encodedToText(v)}`)
+        .join(', ')}\n`;
       out += '    (a case that cannot be evaluated is never counted as a pass)\n';
     }
   }

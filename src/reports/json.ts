@@ -24,9 +24,7 @@ export function resultDocument(results: ConjectureResult[]): unknown {
         ...(p.shard ? { shard: p.shard } : {}),
         ...(p.seed !== undefined ? { seed: p.seed } : {}),
       })),
-      counterexample: r.counterexample
-        ? (({ text: _text, ...rest }) => rest)(r.counterexample)
-        : null,
+      counterexample: r.counterexample ? (({ text: _text, ...rest }) => rest)(r.counterexample) : null,
       error: r.error,
       ...(r.stoppedBy ? { stoppedBy: r.stoppedBy } : {}),
       ms: Math.round(r.ms * 10) / 10,

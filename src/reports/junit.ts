@@ -25,7 +25,13 @@ function coverage(r: ConjectureResult): string {
   const line = (phase: string, word: string) => {
     const ps = by(phase);
     if (!ps.length) return null;
-    const sizes = ps.map((p) => Object.entries(p.size).map(([k, v]) => `${k}=${v}`).join(',')).filter(Boolean);
+    const sizes = ps
+      .map((p) =>
+        Object.entries(p.size)
+          .map(([k, v]) => `${k}=${v}`)
+          .join(','),
+      )
+      .filter(Boolean);
     return `${word}: ${formatCount(ps.reduce((a, p) => a + p.cases, 0))} cases${sizes.length ? ` (${sizes[0]}${sizes.length > 1 ? ` .. ${sizes[sizes.length - 1]}` : ''})` : ''}`;
   };
   return [line('exhaustive', 'exhaustive'), line('sample', 'sampled (evidence, not proof)')].filter(Boolean).join('\n');
@@ -36,7 +42,11 @@ function verdict(r: ConjectureResult): { kind: 'pass' | 'failure' | 'error' | 's
   if (r.outcome === 'error') {
     const e = r.error!;
     const where = e.file ? `${e.file}${e.line ? `:${e.line}` : ''}${e.column ? `:${e.column}` : ''}: ` : '';
-    const inCase = e.bindings ? `\nin the case ${Object.entries(e.bindings).map(([k, v]) => `${k} = ${text(v)}`).join(', ')}` : '';
+    const inCase = e.bindings
+      ? `\nin the case ${Object.entries(e.bindings)
+          .map(([k, v]) => `${k} = ${text(v)}`)
+          .join(', ')}`
+      : '';
     return { kind: 'error', message: e.message, body: `${where}${e.message}${inCase}` };
   }
   if (r.outcome === 'incomplete') {
@@ -45,15 +55,26 @@ function verdict(r: ConjectureResult): { kind: 'pass' | 'failure' | 'error' | 's
       ? { kind: 'failure', message: `incomplete (${why}) before the expected counterexample was found`, body: '' }
       : { kind: 'skipped', message: `incomplete (${why}): no counterexample in what was checked`, body: '' };
   }
-  if (r.outcome === 'holds') return { kind: 'failure', message: 'expected to fail, but no counterexample was found over the ranges checked', body: '' };
+  if (r.outcome === 'holds')
+    return { kind: 'failure', message: 'expected to fail, but no counterexample was found over the ranges checked', body: '' };
   const c = r.counterexample!;
   const lines = [
-    `counterexample (${c.phase}${Object.keys(c.size).length ? `, ${Object.entries(c.size).map(([k, v]) => `${k} = ${v}`).join(', ')}` : ''}):`,
+    `counterexample (${c.phase}${
+      Object.keys(c.size).length
+        ? `, ${Object.entries(c.size)
+            .map(([k, v]) => `${k} = ${v}`)
+            .join(', ')}`
+        : ''
+    }):`,
     ...Object.entries(c.bindings).map(([k, v]) => `  ${k} = ${c.text?.[k] ?? text(v)}`),
     ...Object.entries(c.values).map(([k, v]) => `  ${k} = ${text(v)}`),
     ...(c.sides ? [`  sides: ${text(c.sides[0])} and ${text(c.sides[1])}`] : []),
   ];
-  return { kind: 'failure', message: `a counterexample to a conjecture expected to ${r.expect === 'open' ? 'be open' : 'hold'}`, body: lines.join('\n') };
+  return {
+    kind: 'failure',
+    message: `a counterexample to a conjecture expected to ${r.expect === 'open' ? 'be open' : 'hold'}`,
+    body: lines.join('\n'),
+  };
 }
 
 export function junitXml(results: readonly ConjectureResult[]): string {
@@ -68,8 +89,10 @@ export function junitXml(results: readonly ConjectureResult[]): string {
     for (const r of rs) {
       const v = verdict(r);
       out += `    <testcase classname="${xmlEscape(file)}" name="${xmlEscape(r.id)}" time="${seconds(r.ms)}">\n`;
-      if (v.kind === 'failure') out += `      <failure type="contradicts-expect" message="${xmlEscape(v.message)}">${xmlEscape(v.body)}</failure>\n`;
-      if (v.kind === 'error') out += `      <error type="evaluation-error" message="${xmlEscape(v.message)}">${xmlEscape(v.body)}</error>\n`;
+      if (v.kind === 'failure')
+        out += `      <failure type="contradicts-expect" message="${xmlEscape(v.message)}">${xmlEscape(v.body)}</failure>\n`;
+      if (v.kind === 'error')
+        out += `      <error type="evaluation-error" message="${xmlEscape(v.message)}">${xmlEscape(v.body)}</error>\n`;
       if (v.kind === 'skipped') out += `      <skipped message="${xmlEscape(v.message)}"/>\n`;
       const cov = coverage(r);
       out += `      <system-out>${xmlEscape(`expect: ${r.expect}; outcome: ${r.outcome}; hash ${r.hash}${cov ? `\n${cov}` : ''}`)}</system-out>\n`;

@@ -19,7 +19,10 @@ export function formatMerge(m: MergeResult, out: string | null, color: Styler): 
   for (const v of m.coverage) {
     s += `\n${color.bold(v.id)}${(multi.get(v.id) ?? 0) > 1 ? color.dim(` (version ${v.hash.slice(0, 12)})`) : ''}\n`;
     for (const z of v.sizes) {
-      const label = Object.entries(z.size).map(([k, x]) => `${k} = ${x}`).join(', ') || 'the whole';
+      const label =
+        Object.entries(z.size)
+          .map(([k, x]) => `${k} = ${x}`)
+          .join(', ') || 'the whole';
       if (z.complete)
         s += `  ${color.green('complete')}  ${label}: ${formatCount(z.cases)} cases${z.slices ? ` from ${z.slices} slices` : ''}\n`;
       else if (z.of === 0) s += `  ${color.red('missing ')}  ${label}: only pieces stopped before their end are present\n`;

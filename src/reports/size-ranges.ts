@@ -5,7 +5,11 @@
  * Split items (in order) into runs whose values go up by one; an item whose value is null stands
  * alone, and `canJoin` may keep two neighbours apart (say, sizes of different bindings).
  */
-export function consecutiveRuns<T>(items: readonly T[], valueOf: (t: T) => number | null, canJoin: (a: T, b: T) => boolean = () => true): T[][] {
+export function consecutiveRuns<T>(
+  items: readonly T[],
+  valueOf: (t: T) => number | null,
+  canJoin: (a: T, b: T) => boolean = () => true,
+): T[][] {
   const runs: T[][] = [];
   for (const t of items) {
     const run = runs[runs.length - 1];

@@ -16,12 +16,22 @@ function sizeLabel(size: Record<string, number>): string {
 }
 
 /** Runs of consecutive sizes (one size binding) merged: `n = 1..8 (46,233 cases)`. */
-function compress<T extends { size: Record<string, number>; cases: number }>(items: T[], joinable: (t: T) => boolean, word: string, extra: (t: T) => string): string[] {
+function compress<T extends { size: Record<string, number>; cases: number }>(
+  items: T[],
+  joinable: (t: T) => boolean,
+  word: string,
+  extra: (t: T) => string,
+): string[] {
   const firstName = (t: T) => Object.keys(t.size)[0];
-  return consecutiveRuns(items, (t) => (joinable(t) ? sizeValue(t.size) : null), (a, b) => firstName(a) === firstName(b)).map((run) => {
+  return consecutiveRuns(
+    items,
+    (t) => (joinable(t) ? sizeValue(t.size) : null),
+    (a, b) => firstName(a) === firstName(b),
+  ).map((run) => {
     const a = run[0];
     const v = sizeValue(a.size);
-    if (v === null || !joinable(a)) return `${Object.keys(a.size).length ? sizeLabel(a.size) + ' ' : ''}${word} (${plural(a.cases, 'case')}${extra(a)})`;
+    if (v === null || !joinable(a))
+      return `${Object.keys(a.size).length ? sizeLabel(a.size) + ' ' : ''}${word} (${plural(a.cases, 'case')}${extra(a)})`;
     const cases = run.reduce((sum, t) => sum + t.cases, 0);
     return `${firstName(a)} = ${rangeText(v, sizeValue(run[run.length - 1].size)!)} ${word} (${plural(cases, 'case')})`;
   });
@@ -29,12 +39,22 @@ function compress<T extends { size: Record<string, number>; cases: number }>(ite
 
 export function exhaustiveText(s: ConjectureStatus): string {
   if (s.exhaustive.length === 0) return s.unfinished.length ? 'none finished' : 'none';
-  return compress(s.exhaustive, (e) => e.failures === 0, 'exhaustive', (e) => (e.failures ? `, ${formatCount(e.failures)} failing` : '')).join('; ');
+  return compress(
+    s.exhaustive,
+    (e) => e.failures === 0,
+    'exhaustive',
+    (e) => (e.failures ? `, ${formatCount(e.failures)} failing` : ''),
+  ).join('; ');
 }
 
 export function sampledText(s: ConjectureStatus): string {
   if (s.sampled.length === 0) return 'none';
-  return compress(s.sampled, (e) => e.failures === 0, 'sampled', (e) => (e.failures ? `, ${formatCount(e.failures)} failing` : '')).join('; ');
+  return compress(
+    s.sampled,
+    (e) => e.failures === 0,
+    'sampled',
+    (e) => (e.failures ? `, ${formatCount(e.failures)} failing` : ''),
+  ).join('; ');
 }
 
 /** "2025-03-01 14:02 UTC" from an ISO time. */
@@ -46,9 +66,16 @@ type Styler = Pick<ChalkInstance, 'bold' | 'red' | 'green' | 'yellow' | 'dim'>;
 
 function table(rows: string[][], style: Array<(s: string, row: number) => string>): string {
   const widths = rows[0].map((_, c) => Math.max(...rows.map((r) => r[c].length)));
-  return rows
-    .map((r, i) => r.map((cell, c) => (c === r.length - 1 ? style[c](cell, i) : style[c](cell.padEnd(widths[c]), i))).join('  ').trimEnd())
-    .join('\n') + '\n';
+  return (
+    rows
+      .map((r, i) =>
+        r
+          .map((cell, c) => (c === r.length - 1 ? style[c](cell, i) : style[c](cell.padEnd(widths[c]), i)))
+          .join('  ')
+          .trimEnd(),
+      )
+      .join('\n') + '\n'
+  );
 }
 
 export function formatStatus(report: StatusReport, color: Styler, warnings: readonly string[] = []): string {
@@ -73,7 +100,8 @@ export function formatStatus(report: StatusReport, color: Styler, warnings: read
   out += table(rows, [
     plain,
     plain,
-    (x, row) => (row === 0 ? color.bold(x) : agreeOf(row) === true ? color.green(x) : agreeOf(row) === false ? color.red(x) : color.yellow(x)),
+    (x, row) =>
+      row === 0 ? color.bold(x) : agreeOf(row) === true ? color.green(x) : agreeOf(row) === false ? color.red(x) : color.yellow(x),
     plain,
     plain,
     (x, row) => (row === 0 ? color.bold(x) : color.dim(x)),
@@ -93,8 +121,11 @@ export function formatStatus(report: StatusReport, color: Styler, warnings: read
       );
   }
   for (const u of report.unknown)
-    notes.push(`${u.id}: ${plural(u.records, 'record')} for a conjecture not among these files (renamed or removed?), last ${shortTime(u.lastAt)}`);
+    notes.push(
+      `${u.id}: ${plural(u.records, 'record')} for a conjecture not among these files (renamed or removed?), last ${shortTime(u.lastAt)}`,
+    );
   if (notes.length) out += '\n' + notes.map((n) => color.dim('• ') + n).join('\n') + '\n';
-  if (report.conjectures.some((s) => s.sampled.length)) out += color.dim('Sampled cases are evidence, not proof; only exhaustive sizes are verified.\n');
+  if (report.conjectures.some((s) => s.sampled.length))
+    out += color.dim('Sampled cases are evidence, not proof; only exhaustive sizes are verified.\n');
   return out;
 }

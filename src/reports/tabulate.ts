@@ -6,7 +6,14 @@ import { isScalar, type Scalar } from '../numbers/rational.js';
 import { valueToText } from '../values/operations.js';
 import type { Value } from '../values/value.js';
 
-export function tabulate(expr: string, name: string, lo: number, hi: number, lets: Array<[string, string]> = [], indeterminates: string[] = []): Array<[number, Value]> {
+export function tabulate(
+  expr: string,
+  name: string,
+  lo: number,
+  hi: number,
+  lets: Array<[string, string]> = [],
+  indeterminates: string[] = [],
+): Array<[number, Value]> {
   const rows: Array<[number, Value]> = [];
   for (let v = lo; v <= hi; v++) {
     try {
@@ -27,4 +34,3 @@ export function scalarColumn(rows: Array<[number, Value]>, name: string, what: s
     return x;
   });
 }
-

@@ -28,7 +28,10 @@ function picture(x: unknown, unicode: boolean): string | null {
 }
 
 function indent(s: string, by: string): string {
-  return s.split('\n').map((l) => (l ? by + l : l)).join('\n');
+  return s
+    .split('\n')
+    .map((l) => (l ? by + l : l))
+    .join('\n');
 }
 
 /** What an element witness says about its quantifier. */
@@ -58,7 +61,9 @@ export function witnessLines(witnesses: readonly Witness[] | undefined, style: {
     const at = w.at || '(expression)';
     const where = w.line ? ` [${w.line}:${w.column}]` : '';
     if (w.kind === 'value') {
-      const given = Object.entries(w.bindings).map(([k, v]) => `${k} = ${text(v)}`).join(', ');
+      const given = Object.entries(w.bindings)
+        .map(([k, v]) => `${k} = ${text(v)}`)
+        .join(', ');
       const sides = w.sides ? `: ${text(w.sides[0])} against ${text(w.sides[1])}` : '';
       lines.push(`  ${at} is ${text(w.value)}${sides}${given ? ` when ${given}` : ''}${where}`);
       continue;
@@ -67,7 +72,9 @@ export function witnessLines(witnesses: readonly Witness[] | undefined, style: {
     const fresh = entries.filter(([k, v]) => !drawn.has(`${k}=${JSON.stringify(v)}`));
     const shown = entries.map(([k, v]) => `${k} = ${text(v)}`).join(', ');
     const sides = w.sides ? `; there its two sides are ${text(w.sides[0])} against ${text(w.sides[1])}` : '';
-    lines.push(`  ${verdict(w, at)} ${shown || 'its first element'}${sides}${w.partial ? ' (the simplest among the elements scanned: the source is very large)' : ''}${where}`);
+    lines.push(
+      `  ${verdict(w, at)} ${shown || 'its first element'}${sides}${w.partial ? ' (the simplest among the elements scanned: the source is very large)' : ''}${where}`,
+    );
     for (const [k, v] of fresh) {
       drawn.add(`${k}=${JSON.stringify(v)}`);
       const pic = picture(v, style.unicode);

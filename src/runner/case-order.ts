@@ -11,7 +11,8 @@ export function compareCases(cc: CompiledConjecture, a: readonly Value[], b: rea
     const src = cc.bindings[i].source;
     let c: number;
     if (src.kind === 'family') {
-      const x = a[i] as any, y = b[i] as any;
+      const x = a[i] as any,
+        y = b[i] as any;
       c = x.kind === y.kind ? src.family.compare(x, y) : compareValues(x, y);
     } else c = compareValues(a[i], b[i]);
     if (c !== 0) return c;

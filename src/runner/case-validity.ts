@@ -37,8 +37,10 @@ export function notACaseReason(cc: CompiledConjecture, vals: Value[], sampleRang
         const s = sampleRanges.get(b.name);
         const min = s ? Math.min(lo, s[0]) : lo;
         const n = Number(v);
-        if (typeof v === 'bigint' || n < min) return `${b.name} = ${shown(v)} is outside its range ${lo}..${hi}${s ? ` (sampled ${s[0]}..${s[1]})` : ''}`;
-        if (i !== cc.sizeIndex && n > (s ? Math.max(hi, s[1]) : hi)) return `${b.name} = ${shown(v)} is outside its range ${lo}..${hi}${s ? ` (sampled ${s[0]}..${s[1]})` : ''}`;
+        if (typeof v === 'bigint' || n < min)
+          return `${b.name} = ${shown(v)} is outside its range ${lo}..${hi}${s ? ` (sampled ${s[0]}..${s[1]})` : ''}`;
+        if (i !== cc.sizeIndex && n > (s ? Math.max(hi, s[1]) : hi))
+          return `${b.name} = ${shown(v)} is outside its range ${lo}..${hi}${s ? ` (sampled ${s[0]}..${s[1]})` : ''}`;
       } else if (src.kind === 'family') {
         const fam = src.family;
         const args = src.args.map((f) => f(frame));

@@ -26,7 +26,10 @@ export interface CheckOptions {
 
 export const DEFAULT_SAMPLE_COUNT = 100;
 
-const constFn = (v: number): Fn => () => v;
+const constFn =
+  (v: number): Fn =>
+  () =>
+    v;
 
 /** --sizes applied to the range bindings other than the size (the size's range is read by `exhaustiveSizes`). */
 export function withSizeOverrides(cc: CompiledConjecture, opts: CheckOptions): CompiledConjecture {
@@ -47,7 +50,8 @@ export function sizesOf(cc: CompiledConjecture): number[] {
   const b = cc.bindings[cc.sizeIndex];
   if (b.source.kind !== 'range') return [];
   const frame: Value[] = new Array(cc.frameSize);
-  const lo = rangeBound(b.source.lo(frame), b.name), hi = rangeBound(b.source.hi(frame), b.name);
+  const lo = rangeBound(b.source.lo(frame), b.name),
+    hi = rangeBound(b.source.hi(frame), b.name);
   const out: number[] = [];
   for (let v = lo; v <= hi; v++) out.push(v);
   return out;

@@ -23,7 +23,12 @@ export interface CounterexampleDetails {
 }
 
 /** The counterexample of a failing case, given by its binding values in `for` order. */
-export function buildCounterexample(cc: CompiledConjecture, phase: Phase, values: readonly Value[], d: CounterexampleDetails = {}): Counterexample {
+export function buildCounterexample(
+  cc: CompiledConjecture,
+  phase: Phase,
+  values: readonly Value[],
+  d: CounterexampleDetails = {},
+): Counterexample {
   const f = frameFor(cc, values);
   const explained = explainCase(cc, f);
   const cx: Counterexample = {

@@ -17,13 +17,7 @@ export function rangeBound(v: Value, name: string): number {
  * Visit every case. `fixed` pins binding index -> value (the size). `onCase` returns true to stop.
  * Returns true when stopped.
  */
-export function enumerateCases(
-  cc: CompiledConjecture,
-  frame: Frame,
-  fixed: Map<number, Value>,
-  onCase: () => boolean,
-  from = 0,
-): boolean {
+export function enumerateCases(cc: CompiledConjecture, frame: Frame, fixed: Map<number, Value>, onCase: () => boolean, from = 0): boolean {
   const bs = cc.bindings;
   const level = (i: number): boolean => {
     if (i === bs.length) return onCase();
@@ -35,7 +29,8 @@ export function enumerateCases(
     const src = b.source;
     switch (src.kind) {
       case 'range': {
-        const lo = rangeBound(src.lo(frame), b.name), hi = rangeBound(src.hi(frame), b.name);
+        const lo = rangeBound(src.lo(frame), b.name),
+          hi = rangeBound(src.hi(frame), b.name);
         for (let v = lo; v <= hi; v++) {
           frame[b.slot] = v;
           if (level(i + 1)) return true;

@@ -14,10 +14,13 @@ export function checkConjecture(compiled: CompiledConjecture, opts: CheckOptions
   while (engine.advance()) {
     for (let t = engine.next(); t; t = engine.next()) {
       const ticket = t;
-      engine.accept(ticket, executeUnit(engine.prepared, ticket.unit, {
-        shouldStop: hooks.shouldStop,
-        onProgress: (visited) => engine.progress(ticket, visited),
-      }));
+      engine.accept(
+        ticket,
+        executeUnit(engine.prepared, ticket.unit, {
+          shouldStop: hooks.shouldStop,
+          onProgress: (visited) => engine.progress(ticket, visited),
+        }),
+      );
     }
   }
   return engine.result();

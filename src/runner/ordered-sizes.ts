@@ -93,7 +93,17 @@ export class OrderedSizes<P, O> {
         return null;
       }
       const units = this.s.units(plan);
-      this.sizes.push({ plan, units, outcomes: new Map(), started: 0, returned: 0, closed: false, t0: performance.now(), done: 0, running: new Map() });
+      this.sizes.push({
+        plan,
+        units,
+        outcomes: new Map(),
+        started: 0,
+        returned: 0,
+        closed: false,
+        t0: performance.now(),
+        done: 0,
+        running: new Map(),
+      });
       this.emit(); // a size with nothing to run (resumed) is ready at once
     }
   }

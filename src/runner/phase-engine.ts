@@ -27,7 +27,12 @@ import { ResumeIndex } from './work/resume.js';
 import { coveredSamplePiece, finishSampleSize, plannedDraws, planSampleSize, quotaOf, type SamplePlan } from './work/sample-size.js';
 import type { Shard } from './work/slicing.js';
 import {
-  prepareConjecture, type ChunkOutcome, type PreparedConjecture, type SliceOutcome, type UnitOutcome, type WorkUnit,
+  prepareConjecture,
+  type ChunkOutcome,
+  type PreparedConjecture,
+  type SliceOutcome,
+  type UnitOutcome,
+  type WorkUnit,
 } from './work/units.js';
 
 export interface EngineShape {
@@ -170,7 +175,11 @@ export class PhaseEngine {
           if (!t) return null;
           const plan = this.exhaustivePlans[t.i];
           const range = unitRange(plan, t.unit);
-          return { stage: this.stageNo, size: t, unit: { kind: 'slice', size: plan.size, lo: range ? range[0] : null, hi: range ? range[1] : null } };
+          return {
+            stage: this.stageNo,
+            size: t,
+            unit: { kind: 'slice', size: plan.size, lo: range ? range[0] : null, hi: range ? range[1] : null },
+          };
         }
         case 'sample': {
           const t = this.sample!.next();
@@ -229,7 +238,9 @@ export class PhaseEngine {
   private readonly exhaustivePlans: SizePlan[] = [];
 
   private exhaustiveQueue(): OrderedSizes<SizePlan, SliceOutcome> {
-    const cc = this.cc, res = this.res, hooks = this.hooks;
+    const cc = this.cc,
+      res = this.res,
+      hooks = this.hooks;
     const sizes: Array<number | null> = cc.sizeIndex < 0 ? [null] : exhaustiveSizes(cc, this.opts);
     return new OrderedSizes<SizePlan, SliceOutcome>({
       planAt: (i) => {
@@ -278,7 +289,9 @@ export class PhaseEngine {
   private readonly samplePlans: SamplePlan[] = [];
 
   private sampleQueue(sizes: number[], count: number): OrderedSizes<SamplePlan, ChunkOutcome> {
-    const cc = this.cc, res = this.res, hooks = this.hooks;
+    const cc = this.cc,
+      res = this.res,
+      hooks = this.hooks;
     const seed = this.prepared.sample.seed;
     return new OrderedSizes<SamplePlan, ChunkOutcome>({
       planAt: (i) => {

@@ -28,7 +28,8 @@ export function plannedCases(cc: CompiledConjecture, fixed: Map<number, Value>, 
     const src = b.source;
     try {
       if (src.kind === 'range') {
-        const lo = rangeBound(src.lo(frame), b.name), hi = rangeBound(src.hi(frame), b.name);
+        const lo = rangeBound(src.lo(frame), b.name),
+          hi = rangeBound(src.hi(frame), b.name);
         if (hi < lo) return 0n;
         let total = 0n;
         // Later bindings may depend on this one; sum exactly over a modest number of values.
@@ -63,8 +64,7 @@ export function plannedCases(cc: CompiledConjecture, fixed: Map<number, Value>, 
         p = src.family.prepare(args);
       } catch (e) {
         // The arguments are known, so the family itself refuses them: a mistake in the file.
-        if (strict && e instanceof EvalError)
-          throw new InputError(`${b.name}: ${e.message}`, b.pos, b.name);
+        if (strict && e instanceof EvalError) throw new InputError(`${b.name}: ${e.message}`, b.pos, b.name);
         throw e;
       }
       const n = src.family.count(p);

@@ -43,7 +43,10 @@ export function prepareRun(req: RunRequest): CompiledConjecture[] {
   if (req.ids) {
     for (const id of req.ids) {
       if (!specs.some((s) => s.id === id)) {
-        const s = nearest(id, specs.map((x) => x.id));
+        const s = nearest(
+          id,
+          specs.map((x) => x.id),
+        );
         throw new InputError(`no conjecture has the id ${id}${s ? `; did you mean ${s}?` : ''}`, undefined, id, s);
       }
     }

@@ -75,7 +75,9 @@ export class Distribution implements Structured {
 
   /** distributionOf([[0, 1], [1, 2], [2, 2], [3, 1]]): each value with its multiplicity, an expression that evaluates back to it. */
   toText(): string {
-    return `distributionOf([${this.pairs().map((e) => `[${valueToText(e.value)}, ${e.count}]`).join(', ')}])`;
+    return `distributionOf([${this.pairs()
+      .map((e) => `[${valueToText(e.value)}, ${e.count}]`)
+      .join(', ')}])`;
   }
 
   /** {"distribution": [[value, count], ...]} with values encoded as in CLI.md. */

@@ -106,7 +106,12 @@ export class MarkovChain implements Structured {
 
   key(): string {
     return this.states
-      .map((s, i) => `${valueKey(s)}>${this.movesOut(i).map(([j, w]) => `${j}:${w.toString()}`).join(',')}`)
+      .map(
+        (s, i) =>
+          `${valueKey(s)}>${this.movesOut(i)
+            .map(([j, w]) => `${j}:${w.toString()}`)
+            .join(',')}`,
+      )
       .join(';');
   }
 

@@ -19,7 +19,8 @@ function comparableKinds(a: string, b: string): boolean {
  */
 export function valueEquals(a: Value, b: Value): boolean {
   if (a === b) return true;
-  const ta = typeof a, tb = typeof b;
+  const ta = typeof a,
+    tb = typeof b;
   if ((ta === 'number' || ta === 'bigint') && (tb === 'number' || tb === 'bigint')) return false; // normalised ints
   if (isScalar(a) && isScalar(b)) return seq(a, b);
   if (Array.isArray(a) && Array.isArray(b)) {
@@ -28,7 +29,8 @@ export function valueEquals(a: Value, b: Value): boolean {
     return true;
   }
   if (isStructured(a) && isStructured(b) && a.kind === b.kind) return a.equals(b);
-  const ka = typeOf(a), kb = typeOf(b);
+  const ka = typeOf(a),
+    kb = typeOf(b);
   if (comparableKinds(ka, kb)) return false;
   // Two lists of different element kinds are unequal; anything else unrelated is a mistake.
   throw new EvalError(`cannot compare ${article(ka)} with ${article(kb)}`);

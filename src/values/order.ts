@@ -37,17 +37,20 @@ const INTEGER_TEXT = /^-?\d+$/;
 
 /** Order of decoded JSON payloads: numbers < strings < arrays < objects; numeric strings numerically. */
 function compareEncoded(a: unknown, b: unknown): number {
-  const ra = encodedRank(a), rb = encodedRank(b);
+  const ra = encodedRank(a),
+    rb = encodedRank(b);
   if (ra !== rb) return ra - rb;
   switch (ra) {
     case 0: {
-      const x = BigInt(a as number | string), y = BigInt(b as number | string);
+      const x = BigInt(a as number | string),
+        y = BigInt(b as number | string);
       return x < y ? -1 : x > y ? 1 : 0;
     }
     case 1:
       return cmpStrings(a as string, b as string);
     case 2: {
-      const x = a as unknown[], y = b as unknown[];
+      const x = a as unknown[],
+        y = b as unknown[];
       const n = Math.min(x.length, y.length);
       for (let i = 0; i < n; i++) {
         const c = compareEncoded(x[i], y[i]);
@@ -56,8 +59,10 @@ function compareEncoded(a: unknown, b: unknown): number {
       return x.length - y.length;
     }
     case 3: {
-      const x = a as Record<string, unknown>, y = b as Record<string, unknown>;
-      const kx = Object.keys(x).sort(), ky = Object.keys(y).sort();
+      const x = a as Record<string, unknown>,
+        y = b as Record<string, unknown>;
+      const kx = Object.keys(x).sort(),
+        ky = Object.keys(y).sort();
       const c = compareEncoded(kx, ky);
       if (c !== 0) return c;
       for (const k of kx) {
@@ -82,7 +87,8 @@ function encodedRank(x: unknown): number {
 export function compareValues(a: Value, b: Value): number {
   if (a === b) return 0;
   if (typeof a === 'number' && typeof b === 'number') return a < b ? -1 : a > b ? 1 : 0;
-  const ra = rank(a), rb = rank(b);
+  const ra = rank(a),
+    rb = rank(b);
   if (ra !== rb) return ra - rb;
   switch (ra) {
     case 0:
@@ -92,7 +98,8 @@ export function compareValues(a: Value, b: Value): number {
     case 2:
       return cmpStrings(a as string, b as string);
     case 3: {
-      const x = a as readonly Value[], y = b as readonly Value[];
+      const x = a as readonly Value[],
+        y = b as readonly Value[];
       const n = Math.min(x.length, y.length);
       for (let i = 0; i < n; i++) {
         const c = compareValues(x[i], y[i]);

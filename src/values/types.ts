@@ -44,7 +44,9 @@ export function typeAccepts(expected: TypeName, actual: TypeName): boolean {
   if (expected === 'polynomial') return actual === 'integer' || actual === 'rational' || actual === 'number';
   // A number or polynomial is a symmetric function of degree 0 (constants are never kept as one).
   if (expected === 'symmetric')
-    return actual === 'integer' || actual === 'rational' || actual === 'number' || actual === 'polynomial' || actual === 'scalarOrPolynomial';
+    return (
+      actual === 'integer' || actual === 'rational' || actual === 'number' || actual === 'polynomial' || actual === 'scalarOrPolynomial'
+    );
   // A statically inferred 'number' may turn out to be an integer at run time.
   if (expected === 'integer') return actual === 'number';
   return false;

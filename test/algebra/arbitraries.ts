@@ -15,6 +15,9 @@ export const scalarArb: fc.Arbitrary<Scalar> = fc.oneof(
 const termArb = fc.tuple(fc.array(fc.integer({ min: 0, max: 3 }), { minLength: VARS.length, maxLength: VARS.length }), scalarArb);
 
 /** Polynomials (and constants) over VARS with up to 5 terms. */
-export const polyArb: fc.Arbitrary<PolyLike> = fc
-  .array(termArb, { maxLength: 5 })
-  .map((terms) => fromTerms(VARS.map((v) => varId(v)), terms as [number[], Scalar][]));
+export const polyArb: fc.Arbitrary<PolyLike> = fc.array(termArb, { maxLength: 5 }).map((terms) =>
+  fromTerms(
+    VARS.map((v) => varId(v)),
+    terms as [number[], Scalar][],
+  ),
+);

@@ -1,7 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
-  charpoly, charpolyCoefficients, determinant, Matrix, matrixPower, matrixProduct, matrixScale, matrixSum, rank, transpose,
+  charpoly,
+  charpolyCoefficients,
+  determinant,
+  Matrix,
+  matrixPower,
+  matrixProduct,
+  matrixScale,
+  matrixSum,
+  rank,
+  transpose,
 } from '../../src/algebra/matrix.js';
 import { polyText, variable } from '../../src/algebra/polynomial.js';
 import { makeRat, type Scalar } from '../../src/numbers/rational.js';
@@ -30,8 +39,7 @@ function leibniz(m: Matrix): Scalar {
   return total;
 }
 
-const squareArb = (n: number) =>
-  fc.array(scalarArb, { minLength: n * n, maxLength: n * n }).map((e) => new Matrix(n, n, e));
+const squareArb = (n: number) => fc.array(scalarArb, { minLength: n * n, maxLength: n * n }).map((e) => new Matrix(n, n, e));
 
 describe('determinant', () => {
   it('Hilbert matrices: det H_n = c_n^4 / c_{2n}, c_n = 1!2!...(n-1)! (M.-D. Choi, "Tricks or treats with the Hilbert matrix", Amer. Math. Monthly 90 (1983) 301-312)', () => {
@@ -46,7 +54,8 @@ describe('determinant', () => {
       expect(seq(determinant(Matrix.from(rows)), expected)).toBe(true);
     }
     // OEIS A005249 (1/det H_n): 12, 2160, 6048000 for n = 2, 3, 4.
-    const h = (n: number) => Matrix.from(Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => makeRat(1n, BigInt(i + j + 1)))));
+    const h = (n: number) =>
+      Matrix.from(Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => makeRat(1n, BigInt(i + j + 1)))));
     expect([2, 3, 4].map((n) => sdiv(1, determinant(h(n))))).toEqual([12, 2160, 6048000]);
   });
   it('Vandermonde matrices: det = prod_{i<j} (x_j - x_i) (the classical formula)', () => {
@@ -63,17 +72,34 @@ describe('determinant', () => {
   });
   it('agrees with the Leibniz expansion, and det(AB) = det A det B, det(A^T) = det A', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 0, max: 5 }).chain((n) => fc.tuple(squareArb(n), squareArb(n))), ([a, b]) => {
-        expect(seq(determinant(a), leibniz(a))).toBe(true);
-        expect(seq(determinant(matrixProduct(a, b)), smul(determinant(a), determinant(b)))).toBe(true);
-        expect(seq(determinant(transpose(a)), determinant(a))).toBe(true);
-      }),
+      fc.property(
+        fc.integer({ min: 0, max: 5 }).chain((n) => fc.tuple(squareArb(n), squareArb(n))),
+        ([a, b]) => {
+          expect(seq(determinant(a), leibniz(a))).toBe(true);
+          expect(seq(determinant(matrixProduct(a, b)), smul(determinant(a), determinant(b)))).toBe(true);
+          expect(seq(determinant(transpose(a)), determinant(a))).toBe(true);
+        },
+      ),
       { numRuns: 80 },
     );
   });
   it('singular matrices and zero pivots', () => {
-    expect(determinant(Matrix.from([[0, 1], [1, 0]]))).toBe(-1);
-    expect(determinant(Matrix.from([[1, 2], [2, 4]]))).toBe(0);
+    expect(
+      determinant(
+        Matrix.from([
+          [0, 1],
+          [1, 0],
+        ]),
+      ),
+    ).toBe(-1);
+    expect(
+      determinant(
+        Matrix.from([
+          [1, 2],
+          [2, 4],
+        ]),
+      ),
+    ).toBe(0);
     expect(determinant(Matrix.from([]))).toBe(1);
     expect(() => determinant(Matrix.from([[1, 2]]))).toThrow(/square/);
   });
@@ -81,15 +107,33 @@ describe('determinant', () => {
 
 describe('rank', () => {
   it('counts independent rows; rank of a product is at most each rank', () => {
-    expect(rank(Matrix.from([[1, 2, 3], [2, 4, 6], [1, 0, 1]]))).toBe(2);
-    expect(rank(Matrix.from([[0, 0], [0, 0]]))).toBe(0);
+    expect(
+      rank(
+        Matrix.from([
+          [1, 2, 3],
+          [2, 4, 6],
+          [1, 0, 1],
+        ]),
+      ),
+    ).toBe(2);
+    expect(
+      rank(
+        Matrix.from([
+          [0, 0],
+          [0, 0],
+        ]),
+      ),
+    ).toBe(0);
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 4 }).chain((n) => fc.tuple(squareArb(n), squareArb(n))), ([a, b]) => {
-        const r = rank(matrixProduct(a, b));
-        expect(r).toBeLessThanOrEqual(Math.min(rank(a), rank(b)));
-        expect(rank(a) === a.rows).toBe(!seq(determinant(a), 0));
-        expect(rank(transpose(a))).toBe(rank(a));
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 4 }).chain((n) => fc.tuple(squareArb(n), squareArb(n))),
+        ([a, b]) => {
+          const r = rank(matrixProduct(a, b));
+          expect(r).toBeLessThanOrEqual(Math.min(rank(a), rank(b)));
+          expect(rank(a) === a.rows).toBe(!seq(determinant(a), 0));
+          expect(rank(transpose(a))).toBe(rank(a));
+        },
+      ),
       { numRuns: 60 },
     );
   });
@@ -120,15 +164,31 @@ describe('characteristic polynomial', () => {
     );
   });
   it('evaluates at a number', () => {
-    expect(charpoly(Matrix.from([[2, 1], [1, 2]]), 3)).toBe(0); // eigenvalues 1 and 3
+    expect(
+      charpoly(
+        Matrix.from([
+          [2, 1],
+          [1, 2],
+        ]),
+        3,
+      ),
+    ).toBe(0); // eigenvalues 1 and 3
   });
 });
 
 describe('text and record forms', () => {
   it('prints in the language syntax and round-trips through the record encoding', () => {
-    const m = Matrix.from([[1, makeRat(1n, 2n)], [2n ** 60n, -3]]);
+    const m = Matrix.from([
+      [1, makeRat(1n, 2n)],
+      [2n ** 60n, -3],
+    ]);
     expect(m.toText()).toBe('matrix([[1, 1/2], [1152921504606846976, -3]])');
-    expect(m.encode()).toEqual({ matrix: [[1, '1/2'], ['1152921504606846976', -3]] });
+    expect(m.encode()).toEqual({
+      matrix: [
+        [1, '1/2'],
+        ['1152921504606846976', -3],
+      ],
+    });
     expect((decodeValue(m.encode()) as Matrix).equals(m)).toBe(true);
     expect(() => Matrix.from([[1, 2], [3]])).toThrow(/equal lengths/);
   });

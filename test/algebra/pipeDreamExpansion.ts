@@ -19,16 +19,24 @@ export function inversions(w: number[]): number {
 export function tracePipes(n: number, crosses: Set<string>): number[] {
   const w: number[] = [];
   for (let start = 1; start <= n; start++) {
-    let i = start, j = 1, dir: 'right' | 'up' = 'right';
+    let i = start,
+      j = 1,
+      dir: 'right' | 'up' = 'right';
     // Entering tile (i, j) moving `dir`; elbows join left-top and bottom-right.
     while (i >= 1) {
       const cross = crosses.has(`${i},${j}`);
       if (dir === 'right') {
         if (cross) j++;
-        else { dir = 'up'; i--; }
+        else {
+          dir = 'up';
+          i--;
+        }
       } else {
         if (cross) i--;
-        else { dir = 'right'; j++; }
+        else {
+          dir = 'right';
+          j++;
+        }
       }
     }
     w.push(j);
@@ -106,10 +114,14 @@ export function doubleSchubertByPipeDreams(n: number): Map<string, Expansion> {
     if (!out.has(k)) out.set(k, new Map());
     const m = out.get(k)!;
     for (let mask = 0; mask < 1 << cells.length; mask++) {
-      const ex = new Array(n).fill(0), ey = new Array(n).fill(0);
+      const ex = new Array(n).fill(0),
+        ey = new Array(n).fill(0);
       let sign = 1n;
       cells.forEach(([i, j], t) => {
-        if (mask & (1 << t)) { ey[j - 1]++; sign = -sign; } else ex[i - 1]++;
+        if (mask & (1 << t)) {
+          ey[j - 1]++;
+          sign = -sign;
+        } else ex[i - 1]++;
       });
       addTo(m, `${ex.join(',')}|${ey.join(',')}`, sign);
     }

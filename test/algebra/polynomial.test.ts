@@ -1,13 +1,26 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
-  isPolynomial, padd, pdivExact, pequals, pmul, pneg, ppow, psub, variable, type PolyLike, polyText,
+  isPolynomial,
+  padd,
+  pdivExact,
+  pequals,
+  pmul,
+  pneg,
+  ppow,
+  psub,
+  variable,
+  type PolyLike,
+  polyText,
 } from '../../src/algebra/polynomial.js';
 import { makeRat } from '../../src/numbers/rational.js';
 import { EvalError } from '../../src/base/errors.js';
 import { polyArb } from './arbitraries.js';
 
-const q = variable('q'), x1 = variable('x[1]'), x2 = variable('x[2]'), x10 = variable('x[10]');
+const q = variable('q'),
+  x1 = variable('x[1]'),
+  x2 = variable('x[2]'),
+  x10 = variable('x[10]');
 const eq = (a: PolyLike, b: PolyLike) => pequals(a, b);
 
 describe('polynomial printing (FORMAT.md §2 syntax)', () => {

@@ -3,14 +3,23 @@
 
 import { describe, expect, it } from 'vitest';
 import {
-  clearSchubertMemo, doubleSchubertPolynomial, grothendieckPolynomial, schubertPolynomial,
+  clearSchubertMemo,
+  doubleSchubertPolynomial,
+  grothendieckPolynomial,
+  schubertPolynomial,
 } from '../../src/algebra/schubertPolynomials.js';
 import { dividedDifference } from '../../src/algebra/divided.js';
 import { fromTerms, pequals, polyText, type PolyLike, Polynomial } from '../../src/algebra/polynomial.js';
 import { substitute } from '../../src/algebra/polynomialOps.js';
 import { indexedVarId } from '../../src/algebra/variables.js';
 import {
-  doubleSchubertByPipeDreams, grothendieckByPipeDreams, inversions, pipeDreamsIn, sameArray, schubertByPipeDreams, type Expansion,
+  doubleSchubertByPipeDreams,
+  grothendieckByPipeDreams,
+  inversions,
+  pipeDreamsIn,
+  sameArray,
+  schubertByPipeDreams,
+  type Expansion,
 } from './pipeDreamExpansion.js';
 
 function permutationsOf(n: number): number[][] {
@@ -26,12 +35,22 @@ function asExpansion(p: PolyLike, nx: number, ny = 0): Expansion {
   const yids = Array.from({ length: ny }, (_, i) => indexedVarId('y', i + 1));
   const m: Expansion = new Map();
   if (!(p instanceof Polynomial)) {
-    if (p !== 0) m.set(ny ? `${new Array(nx).fill(0).join(',')}|${new Array(ny).fill(0).join(',')}` : new Array(nx).fill(0).join(','), BigInt(p as number));
+    if (p !== 0)
+      m.set(
+        ny ? `${new Array(nx).fill(0).join(',')}|${new Array(ny).fill(0).join(',')}` : new Array(nx).fill(0).join(','),
+        BigInt(p as number),
+      );
     return m;
   }
   for (let t = 0; t < p.length; t++) {
-    const ex = ids.map((id) => { const v = p.vars.indexOf(id); return v < 0 ? 0 : p.exps[t * p.nv + v]; });
-    const ey = yids.map((id) => { const v = p.vars.indexOf(id); return v < 0 ? 0 : p.exps[t * p.nv + v]; });
+    const ex = ids.map((id) => {
+      const v = p.vars.indexOf(id);
+      return v < 0 ? 0 : p.exps[t * p.nv + v];
+    });
+    const ey = yids.map((id) => {
+      const v = p.vars.indexOf(id);
+      return v < 0 ? 0 : p.exps[t * p.nv + v];
+    });
     m.set(ny ? `${ex.join(',')}|${ey.join(',')}` : ex.join(','), BigInt(p.coefs[t] as number));
   }
   return m;
@@ -42,7 +61,12 @@ const sortedEntries = (m: Expansion | undefined) => [...(m ?? new Map()).entries
 describe('Schubert polynomials', () => {
   it('match the table of S_3 and S_4 (I. G. Macdonald, Notes on Schubert Polynomials, 1991, table after ch. IV; values also re-derived by pipe dreams below)', () => {
     const table: [number[], string][] = [
-      [[1, 2, 3], '1'], [[2, 1, 3], 'x[1]'], [[1, 3, 2], 'x[1] + x[2]'], [[2, 3, 1], 'x[1]*x[2]'], [[3, 1, 2], 'x[1]^2'], [[3, 2, 1], 'x[1]^2*x[2]'],
+      [[1, 2, 3], '1'],
+      [[2, 1, 3], 'x[1]'],
+      [[1, 3, 2], 'x[1] + x[2]'],
+      [[2, 3, 1], 'x[1]*x[2]'],
+      [[3, 1, 2], 'x[1]^2'],
+      [[3, 2, 1], 'x[1]^2*x[2]'],
       [[1, 2, 4, 3], 'x[1] + x[2] + x[3]'],
       [[1, 4, 2, 3], 'x[1]^2 + x[1]*x[2] + x[2]^2'],
       [[2, 1, 4, 3], 'x[1]^2 + x[1]*x[2] + x[1]*x[3]'],
@@ -83,18 +107,25 @@ describe('Schubert polynomials', () => {
 
   it('exactly five w in S_5 have a coefficient > 1: 12543, 13254, 13524, 13542, 21543 (A. Fink, K. Mészáros, A. St. Dizier, Zero-one Schubert polynomials, Math. Z. 297 (2021); and by brute force over pipe dreams)', () => {
     const byPipes = schubertByPipeDreams(5);
-    const viaLibrary = permutationsOf(5).filter((w) => {
-      const p = schubertPolynomial(w, 'x');
-      return p instanceof Polynomial && p.coefs.some((c) => (c as number) > 1);
-    }).map((w) => w.join('')).sort();
-    const viaPipes = [...byPipes.entries()].filter(([, m]) => [...m.values()].some((c) => c > 1n)).map(([k]) => k.replace(/,/g, '')).sort();
+    const viaLibrary = permutationsOf(5)
+      .filter((w) => {
+        const p = schubertPolynomial(w, 'x');
+        return p instanceof Polynomial && p.coefs.some((c) => (c as number) > 1);
+      })
+      .map((w) => w.join(''))
+      .sort();
+    const viaPipes = [...byPipes.entries()]
+      .filter(([, m]) => [...m.values()].some((c) => c > 1n))
+      .map(([k]) => k.replace(/,/g, ''))
+      .sort();
     expect(viaLibrary).toEqual(viaPipes);
     expect(viaLibrary).toEqual(['12543', '13254', '13524', '13542', '21543']);
     // S_3 and S_4 have only 0/1 coefficients.
-    for (const n of [3, 4]) for (const w of permutationsOf(n)) {
-      const p = schubertPolynomial(w, 'x');
-      if (p instanceof Polynomial) expect(p.coefs.every((c) => c === 1)).toBe(true);
-    }
+    for (const n of [3, 4])
+      for (const w of permutationsOf(n)) {
+        const p = schubertPolynomial(w, 'x');
+        if (p instanceof Polynomial) expect(p.coefs.every((c) => c === 1)).toBe(true);
+      }
   });
 
   it('are stable: computed from w0 of S_5 without trimming, S_{w×1} equals S_w for w in S_4', () => {
@@ -136,8 +167,12 @@ describe('Grothendieck polynomials', () => {
   });
   it('have the Schubert polynomial as lowest-degree part', () => {
     for (const w of permutationsOf(5)) {
-      const g = grothendieckPolynomial(w, 'x'), s = schubertPolynomial(w, 'x');
-      if (!(g instanceof Polynomial)) { expect(g).toBe(s); continue; }
+      const g = grothendieckPolynomial(w, 'x'),
+        s = schubertPolynomial(w, 'x');
+      if (!(g instanceof Polynomial)) {
+        expect(g).toBe(s);
+        continue;
+      }
       const low = g.termDegree(g.length - 1);
       const lowTerms = [...asExpansion(g, 4).entries()].filter(([k]) => k.split(',').reduce((a, b) => a + +b, 0) === low);
       expect(lowTerms.sort()).toEqual(sortedEntries(asExpansion(s, 4)));
@@ -161,7 +196,9 @@ describe('double Schubert polynomials', () => {
       const d = doubleSchubertPolynomial(w, 'x', 'y');
       const zero = new Map(Array.from({ length: 4 }, (_, j) => [indexedVarId('y', j + 1), 0 as PolyLike]));
       expect(pequals(substitute(d, zero), schubertPolynomial(w, 'x'))).toBe(true);
-      const diag = new Map(Array.from({ length: 4 }, (_, j) => [indexedVarId('y', j + 1), fromTerms([indexedVarId('x', j + 1)], [[[1], 1]])]));
+      const diag = new Map(
+        Array.from({ length: 4 }, (_, j) => [indexedVarId('y', j + 1), fromTerms([indexedVarId('x', j + 1)], [[[1], 1]])]),
+      );
       expect(substitute(d, diag)).toBe(w.every((v, i) => v === i + 1) ? 1 : 0);
     }
   });

@@ -16,7 +16,11 @@ import { polyArb } from './arbitraries.js';
 
 const x = (i: number) => variable(`x[${i}]`);
 const partitionsOf = (n: number, max = n): number[][] =>
-  n === 0 ? [[]] : Array.from({ length: Math.min(n, max) }, (_, k) => k + 1).reverse().flatMap((p) => partitionsOf(n - p, p).map((r) => [p, ...r]));
+  n === 0
+    ? [[]]
+    : Array.from({ length: Math.min(n, max) }, (_, k) => k + 1)
+        .reverse()
+        .flatMap((p) => partitionsOf(n - p, p).map((r) => [p, ...r]));
 
 describe('Schur polynomials', () => {
   it('equal the bialternant a_{lambda+delta} / a_delta (Macdonald, SFHP, I (3.1)), for |lambda| <= 5, m <= 3', () => {
@@ -24,7 +28,22 @@ describe('Schur polynomials', () => {
       const alt = (exps: number[]): PolyLike => {
         // det(x_i^{e_j}) by Leibniz over S_m
         let s: PolyLike = 0;
-        const perms = m === 1 ? [[0]] : m === 2 ? [[0, 1], [1, 0]] : [[0, 1, 2], [0, 2, 1], [1, 0, 2], [1, 2, 0], [2, 0, 1], [2, 1, 0]];
+        const perms =
+          m === 1
+            ? [[0]]
+            : m === 2
+              ? [
+                  [0, 1],
+                  [1, 0],
+                ]
+              : [
+                  [0, 1, 2],
+                  [0, 2, 1],
+                  [1, 0, 2],
+                  [1, 2, 0],
+                  [2, 0, 1],
+                  [2, 1, 0],
+                ];
         const signs = m === 1 ? [1] : m === 2 ? [1, -1] : [1, -1, -1, 1, 1, -1];
         perms.forEach((p, k) => {
           let t: PolyLike = signs[k];
@@ -36,7 +55,10 @@ describe('Schur polynomials', () => {
       const delta = Array.from({ length: m }, (_, i) => m - 1 - i);
       for (let n = 0; n <= 5; n++)
         for (const lam of partitionsOf(n)) {
-          if (lam.length > m) { expect(schurPolynomial(lam, 'x', m)).toBe(0); continue; }
+          if (lam.length > m) {
+            expect(schurPolynomial(lam, 'x', m)).toBe(0);
+            continue;
+          }
           const e = delta.map((d, i) => d + (lam[i] ?? 0));
           expect(pequals(schurPolynomial(lam, 'x', m), pdivExact(alt(e), alt(delta)))).toBe(true);
         }
@@ -48,13 +70,20 @@ describe('Schur polynomials', () => {
         for (const lam of partitionsOf(n)) {
           let expected: Scalar = 1;
           const conj = (j: number) => lam.filter((p) => p > j).length;
-          lam.forEach((row, i) => { for (let j = 0; j < row; j++) expected = sdiv(smul(expected, m + j - i), row - j - 1 + conj(j) - i - 1 + 1); });
+          lam.forEach((row, i) => {
+            for (let j = 0; j < row; j++) expected = sdiv(smul(expected, m + j - i), row - j - 1 + conj(j) - i - 1 + 1);
+          });
           const ones = new Map(Array.from({ length: m }, (_, i) => [indexedVarId('x', i + 1), 1 as PolyLike]));
           expect(substitute(schurPolynomial(lam, 'x', m), ones)).toEqual(expected);
         }
   });
   it('equal the Schubert polynomial of the Grassmannian permutation with descent at m (Macdonald, Notes, (4.8))', () => {
-    for (const [lam, m] of [[[2, 1], 2], [[3, 1], 2], [[2, 2], 3], [[2, 1, 1], 3]] as [number[], number][]) {
+    for (const [lam, m] of [
+      [[2, 1], 2],
+      [[3, 1], 2],
+      [[2, 2], 3],
+      [[2, 1, 1], 3],
+    ] as [number[], number][]) {
       const w: number[] = [];
       for (let i = 1; i <= m; i++) w.push(i + (lam[m - i] ?? 0));
       for (let v = 1; w.length < m + lam[0]; v++) if (!w.slice(0, m).includes(v)) w.push(v);
@@ -65,20 +94,34 @@ describe('Schur polynomials', () => {
 
 describe('divided differences', () => {
   it('equal (p - s p) / (a - b) by exact division (fast-check)', () => {
-    const a = varId('x[1]'), b = varId('x[2]');
+    const a = varId('x[1]'),
+      b = varId('x[2]');
     fc.assert(
       fc.property(polyArb, (p) => {
-        const swapped = renameVariables(p, new Map([[a, b], [b, a]]));
+        const swapped = renameVariables(
+          p,
+          new Map([
+            [a, b],
+            [b, a],
+          ]),
+        );
         expect(pequals(dividedDifference(p, a, b), pdivExact(psub(p, swapped), psub(x(1), x(2))))).toBe(true);
       }),
       { numRuns: 100 },
     );
   });
   it('satisfy the Leibniz rule d(fg) = d(f) g + s(f) d(g) (fast-check)', () => {
-    const a = varId('x[1]'), b = varId('x[2]');
+    const a = varId('x[1]'),
+      b = varId('x[2]');
     fc.assert(
       fc.property(polyArb, polyArb, (f, g) => {
-        const sf = renameVariables(f, new Map([[a, b], [b, a]]));
+        const sf = renameVariables(
+          f,
+          new Map([
+            [a, b],
+            [b, a],
+          ]),
+        );
         const rhs = padd(pmul(dividedDifference(f, a, b), g), pmul(sf, dividedDifference(g, a, b)));
         expect(pequals(dividedDifference(pmul(f, g), a, b), rhs)).toBe(true);
       }),
@@ -105,15 +148,22 @@ describe('real-rootedness by Sturm sequences', () => {
     expect(isRealRootedCoefficients([5])).toBe(true);
   });
   it('products of linear factors are real-rooted; adding an irreducible quadratic factor breaks it (fast-check)', () => {
-    const rootArb = fc.tuple(fc.integer({ min: -6, max: 6 }), fc.integer({ min: 1, max: 3 })).map(([a, b]) => makeRat(BigInt(a), BigInt(b)));
+    const rootArb = fc
+      .tuple(fc.integer({ min: -6, max: 6 }), fc.integer({ min: 1, max: 3 }))
+      .map(([a, b]) => makeRat(BigInt(a), BigInt(b)));
     fc.assert(
-      fc.property(fc.array(rootArb, { minLength: 1, maxLength: 6 }), fc.integer({ min: 1, max: 5 }), fc.integer({ min: -3, max: 3 }), (roots, c, shift) => {
-        let p: PolyLike = 1;
-        for (const r of roots) p = pmul(p, psub(q, r));
-        expect(isRealRootedCoefficients(coeffs(p))).toBe(true);
-        const quad = padd(ppow(psub(q, shift), 2), c); // (q - s)^2 + c, c > 0
-        expect(isRealRootedCoefficients(coeffs(pmul(p, quad)))).toBe(false);
-      }),
+      fc.property(
+        fc.array(rootArb, { minLength: 1, maxLength: 6 }),
+        fc.integer({ min: 1, max: 5 }),
+        fc.integer({ min: -3, max: 3 }),
+        (roots, c, shift) => {
+          let p: PolyLike = 1;
+          for (const r of roots) p = pmul(p, psub(q, r));
+          expect(isRealRootedCoefficients(coeffs(p))).toBe(true);
+          const quad = padd(ppow(psub(q, shift), 2), c); // (q - s)^2 + c, c > 0
+          expect(isRealRootedCoefficients(coeffs(pmul(p, quad)))).toBe(false);
+        },
+      ),
       { numRuns: 100 },
     );
   });

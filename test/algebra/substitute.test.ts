@@ -31,10 +31,15 @@ function byDefinition(p: PolyLike, values: Map<number, PolyLike>): PolyLike {
 describe('substitute', () => {
   it('agrees with the definition for up to three simultaneous values (fast-check)', () => {
     fc.assert(
-      fc.property(polyArb, fc.subarray(VARS, { minLength: 1, maxLength: 3 }), fc.array(polyArb, { minLength: 3, maxLength: 3 }), (p, names, vals) => {
-        const values = new Map<number, PolyLike>(names.map((n, i) => [varId(n), vals[i]]));
-        expect(pequals(substitute(p, values), byDefinition(p, values))).toBe(true);
-      }),
+      fc.property(
+        polyArb,
+        fc.subarray(VARS, { minLength: 1, maxLength: 3 }),
+        fc.array(polyArb, { minLength: 3, maxLength: 3 }),
+        (p, names, vals) => {
+          const values = new Map<number, PolyLike>(names.map((n, i) => [varId(n), vals[i]]));
+          expect(pequals(substitute(p, values), byDefinition(p, values))).toBe(true);
+        },
+      ),
       { numRuns: 200 },
     );
   });

@@ -70,7 +70,10 @@ describe('library API', () => {
     });
     expect(suites).toHaveLength(1);
     expect(made.map((m) => m.name)).toEqual(['maj-le-inv', 'inv-of-inverse']);
-    const err = await Promise.resolve(made[0].body()).then(() => null, (e) => e);
+    const err = await Promise.resolve(made[0].body()).then(
+      () => null,
+      (e) => e,
+    );
     expect(err).toBeInstanceOf(ConjectureTestFailure);
     expect(String(err.message)).toMatch(/maj-le-inv \(expect: holds\) came out fails/);
     expect(String(err.message)).toMatch(/w = /);

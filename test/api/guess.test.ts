@@ -29,9 +29,11 @@ describe('guessExpression', () => {
     const g = r.guesses[0];
     expect(g.kind).toBe('product');
     const closed = g.formula.replace(/^a\(n\) == /, '');
-    for (let n = 1; n <= 24; n++) expect(valueToText(evaluate(closed, [['n', String(n)]]))).toBe(valueToText(evaluate(direct, [['n', String(n)]])));
+    for (let n = 1; n <= 24; n++)
+      expect(valueToText(evaluate(closed, [['n', String(n)]]))).toBe(valueToText(evaluate(direct, [['n', String(n)]])));
     // The exhaustive count of alternating sign matrices agrees on the small sizes.
-    for (let n = 1; n <= 5; n++) expect(valueToText(evaluate(closed, [['n', String(n)]]))).toBe(valueToText(evaluate(`count(a in asms(${n}))`)));
+    for (let n = 1; n <= 5; n++)
+      expect(valueToText(evaluate(closed, [['n', String(n)]]))).toBe(valueToText(evaluate(`count(a in asms(${n}))`)));
     expect(await roundTrip('asm', r.conjectureFile({ to: 22 }))).toEqual(['holds']);
   }, 60_000);
 

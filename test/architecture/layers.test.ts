@@ -10,7 +10,21 @@ import { describe, expect, it } from 'vitest';
 const SRC = resolve(dirname(fileURLToPath(import.meta.url)), '../../src');
 
 /** Bottom first. `version.ts` at the top of src/ is part of the bottom layer. */
-const LAYERS = ['base', 'numbers', 'protocol', 'algebra', 'values', 'families', 'library', 'language', 'runner', 'records', 'reports', 'api', 'cli'];
+const LAYERS = [
+  'base',
+  'numbers',
+  'protocol',
+  'algebra',
+  'values',
+  'families',
+  'library',
+  'language',
+  'runner',
+  'records',
+  'reports',
+  'api',
+  'cli',
+];
 
 /** The only imports that go up, and why. */
 const ALLOWED_UPWARD: Array<{ from: string; to: string; why: string }> = [
@@ -48,7 +62,13 @@ function importsOf(file: string): Edge[] {
     // `import { type A, type B } from` is type-only too.
     const names = (m[3] ?? '').trim();
     const braced = /^\{([^}]*)\}$/.exec(names);
-    const allTypes = braced !== null && braced[1].split(',').map((x) => x.trim()).filter(Boolean).every((x) => x.startsWith('type '));
+    const allTypes =
+      braced !== null &&
+      braced[1]
+        .split(',')
+        .map((x) => x.trim())
+        .filter(Boolean)
+        .every((x) => x.startsWith('type '));
     add(m[4], Boolean(m[2]) || allTypes);
   }
   // `import('...')`: at run time after `await`, else in a type position (`import('./x.js').T`).
@@ -66,7 +86,14 @@ const edges = files.flatMap(importsOf);
 
 describe('layers', () => {
   it('every top folder of src/ is a layer', () => {
-    const tops = [...new Set(files.map((f) => relative(SRC, f)).filter((p) => p.includes('/')).map((p) => p.split('/')[0]))];
+    const tops = [
+      ...new Set(
+        files
+          .map((f) => relative(SRC, f))
+          .filter((p) => p.includes('/'))
+          .map((p) => p.split('/')[0]),
+      ),
+    ];
     expect(tops.filter((t) => !LAYERS.includes(t))).toEqual([]);
   });
 
@@ -79,7 +106,11 @@ describe('layers', () => {
   });
 
   it('the allowed upward imports still exist (else drop them from the list)', () => {
-    for (const a of ALLOWED_UPWARD) expect(edges.some((e) => e.from === a.from && e.to === a.to), a.from).toBe(true);
+    for (const a of ALLOWED_UPWARD)
+      expect(
+        edges.some((e) => e.from === a.from && e.to === a.to),
+        a.from,
+      ).toBe(true);
   });
 
   it('runtime imports have no circle', () => {

@@ -38,7 +38,8 @@ function inversions(a) {
   return c;
 }
 function plainLoop() {
-  let holds = 0, cases = 0;
+  let holds = 0,
+    cases = 0;
   for (let n = 1; n <= N; n++) {
     const a = Array.from({ length: n }, (_, i) => i + 1);
     do {
@@ -76,7 +77,9 @@ for (let round = 0; round < 3; round++) {
   const [th, h] = time(viaHunch);
   if (l.cases !== h.cases || h.outcome !== 'holds') throw new Error(`mismatch: ${JSON.stringify({ l, h })}`);
   ratios.push(th / tl);
-  console.log(`round ${round + 1}: plain loop ${tl.toFixed(0)} ms, hunch check ${th.toFixed(0)} ms, ratio ${(th / tl).toFixed(2)} (${h.cases} cases)`);
+  console.log(
+    `round ${round + 1}: plain loop ${tl.toFixed(0)} ms, hunch check ${th.toFixed(0)} ms, ratio ${(th / tl).toFixed(2)} (${h.cases} cases)`,
+  );
 }
 ratios.sort((a, b) => a - b);
 console.log(`check-vs-loop S_1..S_${N}: median ratio hunch/loop = ${ratios[1].toFixed(2)} (target <= 3)`);

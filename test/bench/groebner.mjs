@@ -11,7 +11,7 @@
 
 import { padd, pmul, psub, variable } from '../../dist/algebra/polynomial.js';
 import { varId } from '../../dist/algebra/variables.js';
-import { groebnerBasis, termOrder, } from '../../dist/algebra/groebner/index.js';
+import { groebnerBasis, termOrder } from '../../dist/algebra/groebner/index.js';
 
 const arg = (name, dflt) => {
   const i = process.argv.indexOf(name);
@@ -22,7 +22,8 @@ const BASELINE_TIMEOUT = arg('--baseline-timeout', 60) * 1000;
 const P = 32003;
 
 function vars(base, n, from = 1) {
-  const v = [], ids = [];
+  const v = [],
+    ids = [];
   for (let i = 0; i < n; i++) {
     v.push(variable(`${base}[${i + from}]`));
     ids.push(varId(`${base}[${i + from}]`));
@@ -42,7 +43,12 @@ function cyclic(n) {
     }
     gens.push(s);
   }
-  gens.push(psub(v.reduce((a, b) => pmul(a, b), 1), 1));
+  gens.push(
+    psub(
+      v.reduce((a, b) => pmul(a, b), 1),
+      1,
+    ),
+  );
   return { gens, ids };
 }
 
@@ -61,13 +67,13 @@ function katsura(n) {
 }
 
 function commuting(n) {
-  const A = vars('ca', n * n), B = vars('cb', n * n);
+  const A = vars('ca', n * n),
+    B = vars('cb', n * n);
   const gens = [];
   for (let i = 0; i < n; i++)
     for (let j = 0; j < n; j++) {
       let s = 0;
-      for (let k = 0; k < n; k++)
-        s = padd(s, psub(pmul(A.v[i * n + k], B.v[k * n + j]), pmul(B.v[i * n + k], A.v[k * n + j])));
+      for (let k = 0; k < n; k++) s = padd(s, psub(pmul(A.v[i * n + k], B.v[k * n + j]), pmul(B.v[i * n + k], A.v[k * n + j])));
       if (s !== 0) gens.push(s);
     }
   return { gens, ids: [...A.ids, ...B.ids] };
@@ -75,8 +81,12 @@ function commuting(n) {
 
 // ---- the plain baseline: polynomials as arrays of [exponent array, coefficient] sorted by grevlex
 function grevlex(a, b) {
-  let da = 0, db = 0;
-  for (let i = 0; i < a.length; i++) { da += a[i]; db += b[i]; }
+  let da = 0,
+    db = 0;
+  for (let i = 0; i < a.length; i++) {
+    da += a[i];
+    db += b[i];
+  }
   if (da !== db) return da - db;
   for (let i = a.length - 1; i >= 0; i--) if (a[i] !== b[i]) return b[i] - a[i];
   return 0;
@@ -84,7 +94,11 @@ function grevlex(a, b) {
 const mulmod = (a, b) => (a * b) % P;
 function inv(a) {
   let [r0, r1, t0, t1] = [P, a, 0, 1];
-  while (r1) { const q = Math.floor(r0 / r1); [r0, r1] = [r1, r0 - q * r1]; [t0, t1] = [t1, t0 - q * t1]; }
+  while (r1) {
+    const q = Math.floor(r0 / r1);
+    [r0, r1] = [r1, r0 - q * r1];
+    [t0, t1] = [t1, t0 - q * t1];
+  }
   return ((t0 % P) + P) % P;
 }
 function toPlain(f, ids) {
@@ -124,8 +138,17 @@ function remainder(f, G, deadline) {
     if (process.cpuUsage().user / 1000 > deadline) throw new Error('timeout');
     const [e, c] = p[0];
     const g = G.find((g) => g[0][0].every((x, i) => x <= e[i]));
-    if (g) p = subMul(p, c, e.map((x, i) => x - g[0][0][i]), g);
-    else { r.push(p[0]); p = p.slice(1); }
+    if (g)
+      p = subMul(
+        p,
+        c,
+        e.map((x, i) => x - g[0][0][i]),
+        g,
+      );
+    else {
+      r.push(p[0]);
+      p = p.slice(1);
+    }
   }
   return r;
 }
@@ -139,7 +162,17 @@ function plainBuchberger(F, deadline) {
     for (let k = 1; k < pairs.length; k++) if (lcmDeg(pairs[k]) < lcmDeg(pairs[best])) best = k;
     const [i, j] = pairs.splice(best, 1)[0];
     const l = G[i][0][0].map((x, v) => Math.max(x, G[j][0][0][v]));
-    const s = subMul(subMul([], P - 1, l.map((x, v) => x - G[i][0][0][v]), G[i]), 1, l.map((x, v) => x - G[j][0][0][v]), G[j]);
+    const s = subMul(
+      subMul(
+        [],
+        P - 1,
+        l.map((x, v) => x - G[i][0][0][v]),
+        G[i],
+      ),
+      1,
+      l.map((x, v) => x - G[j][0][0][v]),
+      G[j],
+    );
     const r = remainder(s, G, deadline);
     if (r.length) {
       G.push(monic(r));
@@ -148,7 +181,8 @@ function plainBuchberger(F, deadline) {
   }
   // reduce: drop redundant leading terms, count the reduced basis size
   const lms = G.map((g) => g[0][0]);
-  return G.filter((g, a) => !lms.some((m, b) => b !== a && m.every((x, i) => x <= g[0][0][i]) && (m.join() !== g[0][0].join() || b < a))).length;
+  return G.filter((g, a) => !lms.some((m, b) => b !== a && m.every((x, i) => x <= g[0][0][i]) && (m.join() !== g[0][0].join() || b < a)))
+    .length;
 }
 
 const median = (xs) => xs.slice().sort((a, b) => a - b)[Math.floor(xs.length / 2)];
@@ -173,13 +207,20 @@ if (commutingOnly >= 0) {
   const wall = Date.now();
   const [ms, G] = time(() => engine(commuting(n), prime));
   const field = prime ? `GF(${prime})` : 'Q, exact';
-  console.log(`commuting ideal n = ${n} over ${field}: ${G.length} polynomials in ${(ms / 1000).toFixed(1)} s CPU (${((Date.now() - wall) / 1000).toFixed(0)} s wall)`);
+  console.log(
+    `commuting ideal n = ${n} over ${field}: ${G.length} polynomials in ${(ms / 1000).toFixed(1)} s CPU (${((Date.now() - wall) / 1000).toFixed(0)} s wall)`,
+  );
   process.exit(0);
 }
 
 console.log('Gröbner bases, grevlex (CPU times on a loaded shared 2-core machine; medians of', REPEAT, 'runs)');
 const peer = { 'cyclic-6': 52.6, 'Katsura-6': 23.5 };
-const cases = [['cyclic-5', cyclic(5)], ['Katsura-5', katsura(5)], ['cyclic-6', cyclic(6)], ['Katsura-6', katsura(6)]];
+const cases = [
+  ['cyclic-5', cyclic(5)],
+  ['Katsura-5', katsura(5)],
+  ['cyclic-6', cyclic(6)],
+  ['Katsura-6', katsura(6)],
+];
 engine(cyclic(5), P); // warm up the JIT
 for (const [name, sys] of cases) {
   const runs = [];

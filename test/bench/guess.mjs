@@ -9,18 +9,34 @@
 import { fitRecurrence, guessSequence, recurrenceCandidates } from '../../dist/algebra/guessing/index.js';
 
 const repeats = Number(process.argv[2] ?? 3);
-const binom = (n, k) => { if (k < 0 || k > n) return 0n; let r = 1n; for (let i = 1; i <= k; i++) r = (r * BigInt(n - k + i)) / BigInt(i); return r; };
+const binom = (n, k) => {
+  if (k < 0 || k > n) return 0n;
+  let r = 1n;
+  for (let i = 1; i <= k; i++) r = (r * BigInt(n - k + i)) / BigInt(i);
+  return r;
+};
 const norm = (b) => (b <= BigInt(Number.MAX_SAFE_INTEGER) && b >= -BigInt(Number.MAX_SAFE_INTEGER) ? Number(b) : b);
 const range = (n) => Array.from({ length: n }, (_, i) => i);
-const apery = range(60).map((n) => { let s = 0n; for (let k = 0; k <= n; k++) s += (binom(n, k) * binom(n + k, k)) ** 2n; return norm(s); });
+const apery = range(60).map((n) => {
+  let s = 0n;
+  for (let k = 0; k <= n; k++) s += (binom(n, k) * binom(n + k, k)) ** 2n;
+  return norm(s);
+});
 let x = 12345n;
-const noise = range(60).map(() => { x = (x * 6364136223846793005n + 1442695040888963407n) % (1n << 64n); return norm((x >> 20n) % 10n ** 12n); });
+const noise = range(60).map(() => {
+  x = (x * 6364136223846793005n + 1442695040888963407n) % (1n << 64n);
+  return norm((x >> 20n) % 10n ** 12n);
+});
 
 const median = (xs) => [...xs].sort((a, b) => a - b)[xs.length >> 1];
 function time(f) {
   const ts = [];
   let out;
-  for (let i = 0; i < repeats; i++) { const t0 = performance.now(); out = f(); ts.push(performance.now() - t0); }
+  for (let i = 0; i < repeats; i++) {
+    const t0 = performance.now();
+    out = f();
+    ts.push(performance.now() - t0);
+  }
   return [median(ts), out];
 }
 
@@ -31,10 +47,17 @@ function bareissRank(terms, r, d) {
   for (let k = 0; k + r < terms.length; k++) {
     const n = BigInt(k);
     const row = [];
-    for (let i = 0; i <= r; i++) { let v = BigInt(terms[k + i]); for (let j = 0; j <= d; j++) { row.push(v); v *= n; } }
+    for (let i = 0; i <= r; i++) {
+      let v = BigInt(terms[k + i]);
+      for (let j = 0; j <= d; j++) {
+        row.push(v);
+        v *= n;
+      }
+    }
     M.push(row);
   }
-  let rank = 0, prev = 1n;
+  let rank = 0,
+    prev = 1n;
   for (let c = 0; c < cols && rank < M.length; c++) {
     let p = rank;
     while (p < M.length && M[p][c] === 0n) p++;
@@ -50,7 +73,10 @@ function bareissRank(terms, r, d) {
   return rank;
 }
 
-for (const [name, terms] of [['Apéry numbers (OEIS A005259)', apery], ['60 terms with no relation', noise]]) {
+for (const [name, terms] of [
+  ['Apéry numbers (OEIS A005259)', apery],
+  ['60 terms with no relation', noise],
+]) {
   const [t, rep] = time(() => guessSequence({ offset: 0, terms }));
   console.log(`${name}: whole search ${t.toFixed(0)} ms (median of ${repeats}); ${rep.guesses.length ? rep.guesses[0].title : 'no guess'}`);
 }
@@ -60,4 +86,6 @@ const cands = recurrenceCandidates(60).slice(0, 40);
 const [ours] = time(() => cands.map(([r, d]) => fitRecurrence({ offset: 0, terms: noise }, r, d)));
 const [base] = time(() => cands.map(([r, d]) => bareissRank(noise, r, d)));
 const maxU = Math.max(...cands.map(([r, d]) => (r + 1) * (d + 1)));
-console.log(`recurrence search, ${cands.length} candidate (r, d) up to ${maxU} columns on 60 terms: ours ${ours.toFixed(0)} ms, plain Bareiss ${base.toFixed(0)} ms, ratio baseline/ours ${(base / ours).toFixed(1)} (median of ${repeats}; machine possibly loaded)`);
+console.log(
+  `recurrence search, ${cands.length} candidate (r, d) up to ${maxU} columns on 60 terms: ours ${ours.toFixed(0)} ms, plain Bareiss ${base.toFixed(0)} ms, ratio baseline/ours ${(base / ours).toFixed(1)} (median of ${repeats}; machine possibly loaded)`,
+);

@@ -48,8 +48,10 @@ function gaussSeidel(c, tol) {
   const inStart = new Int32Array(n + 1);
   for (let k = 0; k < c.target.length; k++) inStart[c.target[k] + 1]++;
   for (let t = 0; t < n; t++) inStart[t + 1] += inStart[t];
-  const src = new Int32Array(c.target.length), prob = new Float64Array(c.target.length);
-  const fill = inStart.slice(0, n), self = new Float64Array(n);
+  const src = new Int32Array(c.target.length),
+    prob = new Float64Array(c.target.length);
+  const fill = inStart.slice(0, n),
+    self = new Float64Array(n);
   for (let s = 0; s < n; s++) {
     const total = Number(c.total[s].toString().split('/')[0]) / Number(c.total[s].toString().split('/')[1] ?? 1);
     for (let k = c.rowStart[s]; k < c.rowStart[s + 1]; k++) {
@@ -67,7 +69,8 @@ function gaussSeidel(c, tol) {
   let sweeps = 0;
   for (;;) {
     sweeps++;
-    let change = 0, sum = 0;
+    let change = 0,
+      sum = 0;
     for (let t = 0; t < n; t++) {
       let acc = 0;
       for (let e = inStart[t]; e < inStart[t + 1]; e++) acc += x[src[e]] * prob[e];
@@ -88,11 +91,15 @@ const ms = (t0) => (performance.now() - t0).toFixed(0);
 
 for (const n of sizes) {
   const states = allMatchings(n);
-  const moves = new Lambda(1, ([m]) => {
-    const out = [];
-    for (let i = 1; i <= 2 * n; i++) out.push([call('joinAt', m, i), 2], [call('crossAt', m, i), 1]);
-    return out;
-  }, 'm -> ...');
+  const moves = new Lambda(
+    1,
+    ([m]) => {
+      const out = [];
+      for (let i = 1; i <= 2 * n; i++) out.push([call('joinAt', m, i), 2], [call('crossAt', m, i), 1]);
+      return out;
+    },
+    'm -> ...',
+  );
   let t0 = performance.now();
   const ch = call('chain', states, moves);
   const build = ms(t0);
@@ -106,7 +113,8 @@ for (const n of sizes) {
   const min = exact.nums.reduce((a, b) => (b < a ? b : a));
   const ok = exact.nums[nested] / min === A029729[n - 1] && exact.nums[nested] % min === 0n;
 
-  let tPlain = null, plainStats = null;
+  let tPlain = null,
+    plainStats = null;
   if (n <= 5) {
     t0 = performance.now();
     stationaryFraction(c, { lump: false });
@@ -122,8 +130,11 @@ for (const n of sizes) {
   const rel = Math.abs(gs.x[nested] - exactNested) / exactNested;
 
   console.log(`loop chain n = ${n}: ${c.size} states, built through chain(...) in ${build} ms`);
-  console.log(`  exact (lumped to ${stats.systemSize} blocks, dense front ${stats.denseSize}, ${solvedBy(stats)}): ${tExact.toFixed(0)} ms; nested / smallest = ${exact.nums[nested] / min} (A029729(${n}) = ${A029729[n - 1]}: ${ok ? 'ok' : 'MISMATCH'})`);
-  if (tPlain !== null) console.log(`  exact without lumping (dense front ${plainStats.denseSize}, ${solvedBy(plainStats)}): ${tPlain.toFixed(0)} ms`);
+  console.log(
+    `  exact (lumped to ${stats.systemSize} blocks, dense front ${stats.denseSize}, ${solvedBy(stats)}): ${tExact.toFixed(0)} ms; nested / smallest = ${exact.nums[nested] / min} (A029729(${n}) = ${A029729[n - 1]}: ${ok ? 'ok' : 'MISMATCH'})`,
+  );
+  if (tPlain !== null)
+    console.log(`  exact without lumping (dense front ${plainStats.denseSize}, ${solvedBy(plainStats)}): ${tPlain.toFixed(0)} ms`);
   console.log(`  float Gauss–Seidel to 1e-12: ${tFloat.toFixed(0)} ms (${gs.sweeps} sweeps, relative error ${rel.toExponential(1)})`);
   console.log(`  ratio float / exact: ${(tFloat / tExact).toFixed(2)}`);
   // Both again, now that the code is compiled (the first calls above include the JIT's warm-up).
@@ -133,5 +144,7 @@ for (const n of sizes) {
   t0 = performance.now();
   gaussSeidel(c, 1e-12);
   const tFloat2 = performance.now() - t0;
-  console.log(`  second run: exact ${tExact2.toFixed(0)} ms, float ${tFloat2.toFixed(0)} ms, ratio float / exact: ${(tFloat2 / tExact2).toFixed(2)}`);
+  console.log(
+    `  second run: exact ${tExact2.toFixed(0)} ms, float ${tFloat2.toFixed(0)} ms, ratio float / exact: ${(tFloat2 / tExact2).toFixed(2)}`,
+  );
 }

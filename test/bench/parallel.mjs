@@ -33,11 +33,24 @@ if (process.argv[2] === '--child') {
   const { startCheckRun } = await import('../../dist/runner/threaded-run.js');
   const file = join(mkdtempSync(join(tmpdir(), 'hunch-mem-')), 'c.yaml');
   writeFileSync(file, conjecture(N));
-  const req = { paths: [file], ids: null, sizes: [], sampleRanges: [], exhaustive: true, count: null, seed: null, budgetMs: null, root: null, regression: {} };
+  const req = {
+    paths: [file],
+    ids: null,
+    sizes: [],
+    sampleRanges: [],
+    exhaustive: true,
+    count: null,
+    seed: null,
+    budgetMs: null,
+    root: null,
+    regression: {},
+  };
   const compiled = prepareRun(req);
   let cases = 0;
   const run = startCheckRun(compiled, req, 2, new Int32Array(new SharedArrayBuffer(4)), {
-    onPiece: () => {}, onProgress: () => {}, onResult: (r) => (cases = r.checked.reduce((s, p) => s + p.cases, 0)),
+    onPiece: () => {},
+    onProgress: () => {},
+    onResult: (r) => (cases = r.checked.reduce((s, p) => s + p.cases, 0)),
   });
   const crash = await run.finished;
   if (crash) throw new Error(crash);
@@ -64,15 +77,20 @@ for (let round = 0; round < 3; round++) {
   const two = checkMs(['--workers', '2']);
   if (one.cases !== two.cases) throw new Error('case counts differ between 1 and 2 workers');
   ratios.push(two.ms / one.ms);
-  console.log(`round ${round + 1}: 1 worker ${one.ms.toFixed(0)} ms, 2 workers ${two.ms.toFixed(0)} ms, ratio ${(two.ms / one.ms).toFixed(2)} (${one.cases} cases)`);
+  console.log(
+    `round ${round + 1}: 1 worker ${one.ms.toFixed(0)} ms, 2 workers ${two.ms.toFixed(0)} ms, ratio ${(two.ms / one.ms).toFixed(2)} (${one.cases} cases)`,
+  );
 }
-console.log(`parallel S_1..S_10 (${availableParallelism()} cores): median ratio 2 workers / 1 worker = ${median(ratios).toFixed(2)} (target <= 0.6)`);
+console.log(
+  `parallel S_1..S_10 (${availableParallelism()} cores): median ratio 2 workers / 1 worker = ${median(ratios).toFixed(2)} (target <= 0.6)`,
+);
 
 // 2. overhead of sharding
 const overheads = [];
 for (let round = 0; round < 3; round++) {
   const whole = checkMs(['--workers', '1']);
-  let sum = 0, cases = 0;
+  let sum = 0,
+    cases = 0;
   for (let i = 1; i <= 4; i++) {
     const s = checkMs(['--workers', '1', '--shard', `${i}/4`]);
     sum += s.ms;
@@ -80,7 +98,9 @@ for (let round = 0; round < 3; round++) {
   }
   if (cases !== whole.cases) throw new Error(`4 shards checked ${cases} cases, the whole run ${whole.cases}`);
   overheads.push(sum / whole.ms);
-  console.log(`round ${round + 1}: unsharded ${whole.ms.toFixed(0)} ms, 4 shards together ${sum.toFixed(0)} ms, ratio ${(sum / whole.ms).toFixed(2)}`);
+  console.log(
+    `round ${round + 1}: unsharded ${whole.ms.toFixed(0)} ms, 4 shards together ${sum.toFixed(0)} ms, ratio ${(sum / whole.ms).toFixed(2)}`,
+  );
 }
 console.log(`sharding S_1..S_10 in 4: median ratio sum of shards / unsharded = ${median(overheads).toFixed(2)} (target <= 1.10)`);
 
@@ -90,5 +110,8 @@ function peak(n) {
   if (r.status !== 0) throw new Error(`memory child for S_${n} failed: ${r.stderr}`);
   return JSON.parse(r.stdout.trim().split('\n').pop());
 }
-const m9 = peak(9), m11 = peak(11);
-console.log(`peak resident memory: S_1..S_9 ${(m9.maxRssKb / 1024).toFixed(0)} MB (${m9.cases} cases), S_1..S_11 ${(m11.maxRssKb / 1024).toFixed(0)} MB (${m11.cases} cases), ratio ${(m11.maxRssKb / m9.maxRssKb).toFixed(2)} (target <= 1.5)`);
+const m9 = peak(9),
+  m11 = peak(11);
+console.log(
+  `peak resident memory: S_1..S_9 ${(m9.maxRssKb / 1024).toFixed(0)} MB (${m9.cases} cases), S_1..S_11 ${(m11.maxRssKb / 1024).toFixed(0)} MB (${m11.cases} cases), ratio ${(m11.maxRssKb / m9.maxRssKb).toFixed(2)} (target <= 1.5)`,
+);

@@ -6,7 +6,9 @@ import { fileURLToPath } from 'node:url';
 
 const here = dirname(fileURLToPath(import.meta.url));
 let failed = 0;
-for (const f of readdirSync(here).filter((f) => f.endsWith('.mjs') && f !== 'run.mjs').sort()) {
+for (const f of readdirSync(here)
+  .filter((f) => f.endsWith('.mjs') && f !== 'run.mjs')
+  .sort()) {
   console.log(`\n== ${f}`);
   const r = spawnSync(process.execPath, [join(here, f)], { stdio: 'inherit' });
   if (r.status !== 0) failed++;

@@ -33,9 +33,12 @@ function plainDividedDifference(p, i, nv) {
   const out = new Map();
   for (const [key, c] of p) {
     const e = key.split(',').map(Number);
-    const a = e[i - 1], b = e[i];
+    const a = e[i - 1],
+      b = e[i];
     if (a === b) continue;
-    const hi = Math.max(a, b), lo = Math.min(a, b), sign = a > b ? c : -c;
+    const hi = Math.max(a, b),
+      lo = Math.min(a, b),
+      sign = a > b ? c : -c;
     for (let k = 0; k < hi - lo; k++) {
       e[i - 1] = hi - 1 - k;
       e[i] = lo + k;
@@ -80,7 +83,8 @@ function plainAll(n) {
 function hunchAll(n) {
   const schubert = getFunction('schubert').impl;
   const x = variable('x');
-  let ok = true, count = 0;
+  let ok = true,
+    count = 0;
   for (const a of allPermutations(n)) {
     const p = schubert(new Permutation(a), x);
     count++;
@@ -104,7 +108,9 @@ clearSchubertMemo();
 const h = time(() => hunchAll(n));
 const b = time(() => plainAll(n));
 clearSchubertMemo();
-console.log(`Schubert polynomials of S_${n}: hunch ${h.count} in ${h.ms.toFixed(0)} ms (claim ${h.ok ? 'holds' : 'FAILS'}); plain ${b.count} in ${b.ms.toFixed(0)} ms (claim ${b.ok ? 'holds' : 'FAILS'})`);
+console.log(
+  `Schubert polynomials of S_${n}: hunch ${h.count} in ${h.ms.toFixed(0)} ms (claim ${h.ok ? 'holds' : 'FAILS'}); plain ${b.count} in ${b.ms.toFixed(0)} ms (claim ${b.ok ? 'holds' : 'FAILS'})`,
+);
 console.log(`ratio plain / hunch = ${(b.ms / h.ms).toFixed(2)} (target >= 2)`);
 if (h.count !== b.count || h.ok !== b.ok) {
   console.error('the two computations disagree');

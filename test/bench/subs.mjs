@@ -59,9 +59,13 @@ function previousMethod() {
 const h = time(() => subs(p, x1, minusX1));
 const l = time(plainNegate);
 const twice = subs(h.out, x1, minusX1);
-console.log(`subs(p, x[1], -x[1]) on ${p.length} terms: hunch ${h.ms.toFixed(1)} ms, plain loop ${l.ms.toFixed(1)} ms, ratio ${(h.ms / l.ms).toFixed(2)} (median of 5; a loaded machine gives other absolute times)`);
+console.log(
+  `subs(p, x[1], -x[1]) on ${p.length} terms: hunch ${h.ms.toFixed(1)} ms, plain loop ${l.ms.toFixed(1)} ms, ratio ${(h.ms / l.ms).toFixed(2)} (median of 5; a loaded machine gives other absolute times)`,
+);
 console.log(`check: applying it twice gives p back: ${pequals(twice, p)}`);
 if (process.argv.includes('--previous')) {
   const o = time(previousMethod, 1);
-  console.log(`previous method (running sum): ${(o.ms / 1000).toFixed(1)} s, ${(o.ms / h.ms).toFixed(0)} times slower; same result: ${pequals(o.out, h.out)}`);
+  console.log(
+    `previous method (running sum): ${(o.ms / 1000).toFixed(1)} s, ${(o.ms / h.ms).toFixed(0)} times slower; same result: ${pequals(o.out, h.out)}`,
+  );
 }

@@ -40,7 +40,8 @@ function time(f) {
 }
 const median = (xs) => xs.slice().sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
-const hunchTimes = [], ratios = [];
+const hunchTimes = [],
+  ratios = [];
 for (let round = 0; round < 3; round++) {
   const [tl] = time(() => {
     clearSchubertMemo();
@@ -51,12 +52,18 @@ for (let round = 0; round < 3; round++) {
   if (r.outcome !== 'holds') throw new Error(`unexpected outcome ${r.outcome}`);
   hunchTimes.push(th);
   ratios.push(th / tl);
-  console.log(`round ${round + 1}: Schubert polynomials alone ${tl.toFixed(0)} ms, hunch check ${th.toFixed(0)} ms, ratio ${(th / tl).toFixed(1)}`);
+  console.log(
+    `round ${round + 1}: Schubert polynomials alone ${tl.toFixed(0)} ms, hunch check ${th.toFixed(0)} ms, ratio ${(th / tl).toFixed(1)}`,
+  );
 }
-console.log(`multidegree == Schubert for all 120 w in S_5: median ${(median(hunchTimes) / 1000).toFixed(2)} s (bar <= 30 s), median ratio to the Schubert polynomials alone ${median(ratios).toFixed(1)}`);
+console.log(
+  `multidegree == Schubert for all 120 w in S_5: median ${(median(hunchTimes) / 1000).toFixed(2)} s (bar <= 30 s), median ratio to the Schubert polynomials alone ${median(ratios).toFixed(1)}`,
+);
 
-const expr = (p) => `degree(ideal(entries(genericMatrix(a, 3, 3)*genericMatrix(b, 3, 3) - genericMatrix(b, 3, 3)*genericMatrix(a, 3, 3))${p}))`;
-const q = [], fp = [];
+const expr = (p) =>
+  `degree(ideal(entries(genericMatrix(a, 3, 3)*genericMatrix(b, 3, 3) - genericMatrix(b, 3, 3)*genericMatrix(a, 3, 3))${p}))`;
+const q = [],
+  fp = [];
 for (let round = 0; round < 3; round++) {
   const [tq, dq] = time(() => evaluate(expr(''), [], ['a', 'b']));
   const [tp, dp] = time(() => evaluate(expr(', 32003'), [], ['a', 'b']));
@@ -65,4 +72,6 @@ for (let round = 0; round < 3; round++) {
   fp.push(tp);
   console.log(`round ${round + 1}: commuting variety n = 3 over Q ${tq.toFixed(0)} ms, over F_32003 ${tp.toFixed(0)} ms`);
 }
-console.log(`commuting variety n = 3, degree 31: over Q median ${(median(q) / 1000).toFixed(2)} s (bar <= 10 s), ratio Q / F_32003 ${(median(q) / median(fp)).toFixed(1)}`);
+console.log(
+  `commuting variety n = 3, degree 31: over Q median ${(median(q) / 1000).toFixed(2)} s (bar <= 10 s), ratio Q / F_32003 ${(median(q) / median(fp)).toFixed(1)}`,
+);

@@ -35,12 +35,16 @@ describe('hunch guess', () => {
     const p = runCli(['guess', '--terms', '2,3,5,7,11,13,17,19,23,29,31,37', '--offset', '1', '--json']);
     const j = JSON.parse(p.stdout);
     expect(j.guesses).toEqual([]);
-    expect(j.tried.map((t: { guessClass: string }) => t.guessClass)).toEqual(expect.arrayContaining(['polynomials in n', 'P-recursive recurrences', 'algebraic generating functions']));
+    expect(j.tried.map((t: { guessClass: string }) => t.guessClass)).toEqual(
+      expect.arrayContaining(['polynomials in n', 'P-recursive recurrences', 'algebraic generating functions']),
+    );
   }, 60_000);
 
   test('hunch table shows the best guess under the table, and in its JSON (Fibonacci numbers, OEIS A000045)', () => {
     const r = runCli(['table', 'fibonacci(n)', '--over', 'n=0..12']);
-    expect(r.stdout).toContain('Best guess, with a(n) the value: a(n + 2) == a(n + 1) + a(n)  (C-finite recurrence, order 2; found from the terms n = 0..3, confirmed by n = 4..12 (9 terms))');
+    expect(r.stdout).toContain(
+      'Best guess, with a(n) the value: a(n + 2) == a(n + 1) + a(n)  (C-finite recurrence, order 2; found from the terms n = 0..3, confirmed by n = 4..12 (9 terms))',
+    );
     const j = JSON.parse(runCli(['table', 'fibonacci(k)', '--over', 'k=0..12', '--json']).stdout);
     expect(j.bestGuess).toMatchObject({ kind: 'c-finite', evidence: { foundFrom: [0, 3] } });
     const none = runCli(['table', 'perm([1])', '--over', 'n=1..3']);
@@ -50,7 +54,12 @@ describe('hunch guess', () => {
   test('--json gives the evidence as ranges', () => {
     const r = runCli(['guess', 'fibonacci(n)', '--over', 'n=0..12', '--json']);
     const j = JSON.parse(r.stdout);
-    expect(j.guesses[0]).toMatchObject({ rank: 1, kind: 'c-finite', formula: 'a(n + 2) == a(n + 1) + a(n)', evidence: { foundFrom: [0, 3], confirmedBy: [4, 12] } });
+    expect(j.guesses[0]).toMatchObject({
+      rank: 1,
+      kind: 'c-finite',
+      formula: 'a(n + 2) == a(n + 1) + a(n)',
+      evidence: { foundFrom: [0, 3], confirmedBy: [4, 12] },
+    });
   }, 60_000);
 
   test('bad input: exit 2 with a message, nothing written', () => {
@@ -69,7 +78,20 @@ describe('hunch guess', () => {
 
   test('--divide-by: the quotient by another column is guessed too, and its conjecture holds further (involutions, OEIS A000085)', () => {
     const file = join(dir, 'quotient.yaml');
-    const g = runCli(['guess', 'count(w in involutions(n))*factorial(2*n)', '--over', 'n=0..12', '--divide-by', 'factorial(2*n)', '--write', file, '--to', '14', '--pick', '1']);
+    const g = runCli([
+      'guess',
+      'count(w in involutions(n))*factorial(2*n)',
+      '--over',
+      'n=0..12',
+      '--divide-by',
+      'factorial(2*n)',
+      '--write',
+      file,
+      '--to',
+      '14',
+      '--pick',
+      '1',
+    ]);
     expect(g.code).toBe(0);
     expect(g.stdout).toContain('c(n) = factorial(2*n)');
     expect(g.stdout).toContain('b(n + 2) == b(n + 1) + (n + 1)*b(n)');
@@ -86,7 +108,13 @@ describe('hunch guess', () => {
     ['delannoy', 'sum(binomial(n, k)*binomial(n + k, k) for k in 0..n)', 'n=0..14', 20, 'OEIS A001850'],
     ['franel', 'sum(binomial(n, k)^3 for k in 0..n)', 'n=0..16', 22, 'OEIS A000172'],
     ['apery', 'sum((binomial(n, k)*binomial(n + k, k))^2 for k in 0..n)', 'n=0..18', 24, 'OEIS A005259'],
-    ['baxter', 'sum(binomial(n + 1, k - 1)*binomial(n + 1, k)*binomial(n + 1, k + 1) for k in 1..n)/(binomial(n + 1, 1)*binomial(n + 1, 2))', 'n=1..16', 22, 'OEIS A001181'],
+    [
+      'baxter',
+      'sum(binomial(n + 1, k - 1)*binomial(n + 1, k)*binomial(n + 1, k + 1) for k in 1..n)/(binomial(n + 1, 1)*binomial(n + 1, 2))',
+      'n=1..16',
+      22,
+      'OEIS A001181',
+    ],
     ['fibonacci', 'fibonacci(n)', 'n=0..12', 30, 'OEIS A000045'],
     ['pell', 'sum(binomial(n, 2*k + 1)*2^k for k in 0..quo(n - 1, 2))', 'n=0..12', 30, 'OEIS A000129'],
     ['asm', 'product(factorial(3*k + 1)/factorial(n + k) for k in 0..n - 1)', 'n=1..16', 22, 'OEIS A005130'],

@@ -26,7 +26,10 @@ test('the next step hunch init prints runs as printed', () => {
 test('--no-ledger --counterexamples writes the counterexample file and no ledger', () => {
   const d = tempDir('hunch-cx-');
   try {
-    writeFileSync(join(d, 'a.yaml'), 'conjecture: maj-bounded\nexpect: fails\nfor:\n  n: 1..4\n  w: permutations(n)\nclaim: maj(w) <= inv(w)\n');
+    writeFileSync(
+      join(d, 'a.yaml'),
+      'conjecture: maj-bounded\nexpect: fails\nfor:\n  n: 1..4\n  w: permutations(n)\nclaim: maj(w) <= inv(w)\n',
+    );
     const r = runCli(['check', 'a.yaml', '--no-ledger', '--counterexamples'], { cwd: d });
     expect(r.code, r.stderr).toBe(0);
     expect(existsSync(join(d, 'counterexamples', 'maj-bounded.yaml'))).toBe(true);

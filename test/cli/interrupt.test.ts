@@ -34,7 +34,10 @@ test('SIGINT in the middle of a size gives incomplete, exit 3 and only finished 
   expect(finished.length).toBeGreaterThan(0);
   expect(r.checked.some((p: { partial?: boolean }) => p.partial)).toBe(true);
   // The ledger has one record per finished size, none for the interrupted one.
-  const lines = readFileSync(join(dir, 'hunch-ledger.jsonl'), 'utf8').trim().split('\n').map((l) => JSON.parse(l));
+  const lines = readFileSync(join(dir, 'hunch-ledger.jsonl'), 'utf8')
+    .trim()
+    .split('\n')
+    .map((l) => JSON.parse(l));
   const sizes = lines.filter((l) => l.phase === 'exhaustive').map((l) => l.size.n);
   expect(sizes).toEqual(finished.map((p: { size: { n: number } }) => p.size.n));
 }, 30_000);

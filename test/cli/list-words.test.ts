@@ -11,6 +11,11 @@ test('hunch list blocks finds the set partition functions', () => {
   expect(names).toContain('len');
   const topics = JSON.parse(runCli(['list', '--json']).stdout).functions;
   const topicOf = (n: string) => topics.find((f: { name: string }) => f.name === n).topic;
-  expect([topicOf('dyck'), topicOf('asm'), topicOf('schur'), topicOf('setPartition')]).toEqual(['dyck paths', 'alternating sign matrices', 'symmetric functions', 'set partitions']);
+  expect([topicOf('dyck'), topicOf('asm'), topicOf('schur'), topicOf('setPartition')]).toEqual([
+    'dyck paths',
+    'alternating sign matrices',
+    'symmetric functions',
+    'set partitions',
+  ]);
   expect(runCli(['list', 'zzzzqq']).code).toBe(2);
 }, 60_000);

@@ -8,7 +8,9 @@ import { describe, expect, test } from 'vitest';
 import { ROOT, runCli, tempDir } from './run-cli.js';
 
 const DIR = join(ROOT, 'test', 'cli', 'malformed');
-const files = readdirSync(DIR).filter((f) => f.endsWith('.yaml')).sort();
+const files = readdirSync(DIR)
+  .filter((f) => f.endsWith('.yaml'))
+  .sort();
 
 describe('malformed conjecture files', () => {
   test('there are at least 30 of them', () => {
@@ -20,7 +22,10 @@ describe('malformed conjecture files', () => {
     const m = /^# expect: (.*)$/.exec(header);
     expect(m, 'first line states the expectation').not.toBeNull();
     const parts = m![1].split('|').map((s) => s.trim());
-    const at = parts.find((p) => p.startsWith('at:'))!.slice(3).trim();
+    const at = parts
+      .find((p) => p.startsWith('at:'))!
+      .slice(3)
+      .trim();
     const fragments = parts.filter((p) => !p.startsWith('at:') && p);
 
     const dir = tempDir();

@@ -17,7 +17,10 @@ function copyNotebook(): string {
 describe('the bundled notebook', { timeout: 120_000 }, () => {
   test('a sampled failure at n >= 20 is shrunk, drawn, written and replayed from the file alone', () => {
     const dir = copyNotebook();
-    const r = runCli(['check', 'conjectures/permutation-statistics.yaml', '--id', 'few-cycles', '--no-exhaustive', '--sample', 'n=20..24'], { cwd: dir });
+    const r = runCli(
+      ['check', 'conjectures/permutation-statistics.yaml', '--id', 'few-cycles', '--no-exhaustive', '--sample', 'n=20..24'],
+      { cwd: dir },
+    );
     expect(r.code, r.stderr).toBe(0);
     expect(r.stdout).toMatch(/found by random sampling at n = 2\d/);
     expect(r.stdout).toMatch(/shrunk in \d+ steps? to n = 6/);

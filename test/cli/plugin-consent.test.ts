@@ -31,7 +31,10 @@ function coauthorFolder(marker: string): string {
       `export const functions = [{ name: 'twiceOf', params: ['integer'], returns: 'integer', description: 'twice n', impl: (n) => 2 * n }];\n`,
   );
   mkdirSync(join(d, 'conjectures'));
-  writeFileSync(join(d, 'conjectures', 'uses.yaml'), 'conjecture: twice-is-sum\nexpect: holds\nfor:\n  n: 1..5\nclaim: twiceOf(n) == n + n\n');
+  writeFileSync(
+    join(d, 'conjectures', 'uses.yaml'),
+    'conjecture: twice-is-sum\nexpect: holds\nfor:\n  n: 1..5\nclaim: twiceOf(n) == n + n\n',
+  );
   writeFileSync(
     join(d, 'conjectures', 'plain.yaml'),
     'conjecture: maj-bounded\nexpect: fails\nfor:\n  n: 1..4\n  w: permutations(n)\nclaim: maj(w) <= inv(w)\n',
@@ -65,7 +68,12 @@ describe('plugin consent', { timeout: 120_000 }, () => {
     expect(chk.stderr).toMatch(/unknown function twiceOf.*were not loaded.*hunch trust/s);
     expect(chk.stderr).not.toMatch(/internal error|\n\s+at .*:\d+:\d+/);
 
-    for (const args of [['status', folder], ['list', 'functions'], ['eval', '1 + 1'], ['table', 'n', '--over', 'n=1..3']]) {
+    for (const args of [
+      ['status', folder],
+      ['list', 'functions'],
+      ['eval', '1 + 1'],
+      ['table', 'n', '--over', 'n=1..3'],
+    ]) {
       const r = runCli(args, { cwd: folder });
       expect(r.code, `${args.join(' ')}: ${r.stderr}`).toBe(0);
       expect(r.stderr).toContain('not loading the plugin');
@@ -129,7 +137,10 @@ describe('plugin consent', { timeout: 120_000 }, () => {
   test('replay loads the local plugins only with --allow-plugins', () => {
     const marker = join(dir('hunch-marker-'), 'ran');
     const folder = coauthorFolder(marker);
-    writeFileSync(join(folder, 'conjectures', 'uses.yaml'), 'conjecture: twice-small\nexpect: fails\nfor:\n  n: 1..5\nclaim: twiceOf(n) < 5\n');
+    writeFileSync(
+      join(folder, 'conjectures', 'uses.yaml'),
+      'conjecture: twice-small\nexpect: fails\nfor:\n  n: 1..5\nclaim: twiceOf(n) < 5\n',
+    );
     const made = runCli(['check', 'conjectures/uses.yaml', '--allow-plugins'], { cwd: folder });
     expect(made.code, made.stderr).toBe(0);
     rmSync(marker);

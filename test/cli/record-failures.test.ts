@@ -35,7 +35,12 @@ function project(): string {
 }
 
 function sh(script: string, cwd: string) {
-  return spawnSync('sh', ['-c', script], { cwd, encoding: 'utf8', env: { ...process.env, NO_COLOR: '1', HUNCH: `${process.execPath} ${BIN}` }, timeout: 120_000 });
+  return spawnSync('sh', ['-c', script], {
+    cwd,
+    encoding: 'utf8',
+    env: { ...process.env, NO_COLOR: '1', HUNCH: `${process.execPath} ${BIN}` },
+    timeout: 120_000,
+  });
 }
 
 describe('records under stress', { timeout: 120_000 }, () => {

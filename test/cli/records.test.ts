@@ -43,7 +43,9 @@ function project(files: Record<string, string>): string {
 }
 
 const ledgerLines = (d: string, name = 'hunch-ledger.jsonl') =>
-  readFileSync(join(d, name), 'utf8').split('\n').filter((l) => l.trim() !== '');
+  readFileSync(join(d, name), 'utf8')
+    .split('\n')
+    .filter((l) => l.trim() !== '');
 const status = (d: string, ...args: string[]) => {
   const r = runCli(['status', '--json', ...args], { cwd: d });
   expect(r.code, r.stderr).toBe(0);
@@ -56,7 +58,13 @@ describe('status after runs', { timeout: 120_000 }, () => {
     expect(runCli(['check'], { cwd: d }).code).toBe(0);
     const s = status(d);
     const inv = s.conjectures.find((c: any) => c.id === 'inverse-keeps-inversions');
-    expect(inv.exhaustive.map((e: any) => [e.size.n, e.cases])).toEqual([[1, 1], [2, 2], [3, 6], [4, 24], [5, 120]]);
+    expect(inv.exhaustive.map((e: any) => [e.size.n, e.cases])).toEqual([
+      [1, 1],
+      [2, 2],
+      [3, 6],
+      [4, 24],
+      [5, 120],
+    ]);
     expect(inv.latest.outcome).toBe('holds');
     const maj = s.conjectures.find((c: any) => c.id === 'maj-bounded-by-inv');
     expect(maj.latest.outcome).toBe('fails');
@@ -75,7 +83,10 @@ describe('status after runs', { timeout: 120_000 }, () => {
     expect(s.conjectures[0].stale.records).toBe(5);
     expect(s.conjectures[0].latest).toBeNull();
     // Layout and comments alone do not make it stale.
-    writeFileSync(join(d, 'conjectures/a.yaml'), '# a comment\n' + INVERSE().replace('claim: inv(w) == inv(inverse(w))', 'claim: "inv(w)==inv(inverse(w))"'));
+    writeFileSync(
+      join(d, 'conjectures/a.yaml'),
+      '# a comment\n' + INVERSE().replace('claim: inv(w) == inv(inverse(w))', 'claim: "inv(w)==inv(inverse(w))"'),
+    );
     s = status(d);
     expect(s.conjectures[0].exhaustive).toHaveLength(5);
     expect(s.conjectures[0].stale).toBeNull();
@@ -226,7 +237,8 @@ describe('merge', { timeout: 120_000 }, () => {
     const d = project({ 'conjectures/a.yaml': INVERSE('1..2') });
     runCli(['check'], { cwd: d });
     const base = JSON.parse(ledgerLines(d)[0]);
-    const slice = (i: number, hash = base.hash) => JSON.stringify({ ...base, size: { n: 7 }, shard: `${i}/3`, cases: 1680, hash, run: `r${i}` });
+    const slice = (i: number, hash = base.hash) =>
+      JSON.stringify({ ...base, size: { n: 7 }, shard: `${i}/3`, cases: 1680, hash, run: `r${i}` });
     writeFileSync(join(d, 's1.jsonl'), slice(1) + '\n');
     writeFileSync(join(d, 's2.jsonl'), slice(2) + '\n' + slice(3, 'f'.repeat(64)) + '\n');
     let r = runCli(['merge', 's1.jsonl', 's2.jsonl', '-o', 'm.jsonl'], { cwd: d });
@@ -289,8 +301,10 @@ describe('counterexample files and replay', { timeout: 120_000 }, () => {
   test('a file needing a plugin the local project lacks says which, and runs nothing', () => {
     const d = project({ 'conjectures/a.yaml': MAJ });
     runCli(['check'], { cwd: d });
-    const text = readFileSync(join(d, 'counterexamples', 'maj-bounded-by-inv.yaml'), 'utf8')
-      .replace('plugins: []', 'plugins:\n  - { file: plugins/stats.mjs, sha256: "' + 'a'.repeat(64) + '", functions: [secretStat] }');
+    const text = readFileSync(join(d, 'counterexamples', 'maj-bounded-by-inv.yaml'), 'utf8').replace(
+      'plugins: []',
+      'plugins:\n  - { file: plugins/stats.mjs, sha256: "' + 'a'.repeat(64) + '", functions: [secretStat] }',
+    );
     const elsewhere = tempDir('hunch-mail-');
     writeFileSync(join(elsewhere, 'cx.yaml'), text);
     const r = runCli(['replay', 'cx.yaml'], { cwd: elsewhere });

@@ -39,8 +39,24 @@ const PARAMS: Record<string, Entry> = {
   // one pattern of length 3 is sampled through a Dyck path bijection at every size (dyckBijections.ts),
   // 12...k and k...21 through Robinson–Schensted (increasingAvoiders.ts)
   avoiders: {
-    small: [[6, '1342'], [12, '4321'], [7, '321', '2143'], [30, '132'], [25, '321']],
-    uniform: [[5, '1342'], [6, '231'], [5, '123'], [5, '132'], [5, '213'], [5, '312'], [5, '321'], [6, '1234'], [5, '4321']],
+    small: [
+      [6, '1342'],
+      [12, '4321'],
+      [7, '321', '2143'],
+      [30, '132'],
+      [25, '321'],
+    ],
+    uniform: [
+      [5, '1342'],
+      [6, '231'],
+      [5, '123'],
+      [5, '132'],
+      [5, '213'],
+      [5, '312'],
+      [5, '321'],
+      [6, '1234'],
+      [5, '4321'],
+    ],
   },
   involutions: { small: [[0], [7], [30]], uniform: [[6]] },
   derangements: { small: [[2], [8], [40]], uniform: [[5], [6]] },
@@ -48,7 +64,17 @@ const PARAMS: Record<string, Entry> = {
   noncrossingMatchings: { small: [[0], [5], [15]], uniform: [[5]] },
   compositions: { small: [[0], [6], [25]], uniform: [[6]] },
   subsets: { small: [[0], [8], [8, 3], [30, 10]], uniform: [[5], [7, 3]] },
-  words: { small: [[0, 2], [5, 3], [20, 4]], uniform: [[3, 3], [4, 2]] },
+  words: {
+    small: [
+      [0, 2],
+      [5, 3],
+      [20, 4],
+    ],
+    uniform: [
+      [3, 3],
+      [4, 2],
+    ],
+  },
   partitions: { small: [[0], [8], [40]], uniform: [[8]] },
   setPartitions: { small: [[0], [6], [20]], uniform: [[5]] },
   signedPermutations: { small: [[0], [1], [4], [9]], uniform: [[3]] },
@@ -57,11 +83,33 @@ const PARAMS: Record<string, Entry> = {
   noncrossingPartitions: { small: [[0], [1], [6], [25]], uniform: [[5], [6]] },
   dyckPaths: { small: [[0], [5], [15]], uniform: [[5]] },
   standardTableaux: { small: [[[3, 2]], [[4, 3, 1]], [[6, 4, 4, 1]]], uniform: [[[3, 2, 1]]] },
-  semistandardTableaux: { small: [[[2, 1], 3], [[3, 2], 4]], uniform: [[[2, 1], 3], [[2, 2], 3]] },
+  semistandardTableaux: {
+    small: [
+      [[2, 1], 3],
+      [[3, 2], 4],
+    ],
+    uniform: [
+      [[2, 1], 3],
+      [[2, 2], 3],
+    ],
+  },
   asms: { small: [[1], [4], [8]], uniform: [[4]] },
   reducedWords: { small: [[Permutation.from([3, 2, 1])], [Permutation.from([4, 3, 2, 1])]], uniform: [[Permutation.from([4, 3, 2, 1])]] },
-  pipeDreams: { small: [[Permutation.from([1, 4, 3, 2])], [Permutation.from([4, 3, 2, 1])], [Permutation.from([2, 5, 1, 4, 3])]], uniform: [[Permutation.from([1, 4, 3, 2])], [Permutation.from([1, 5, 4, 3, 2])]] },
-  partialPermutations: { small: [[0, 0], [2, 3], [6, 5]], uniform: [[2, 3], [3, 3]] },
+  pipeDreams: {
+    small: [[Permutation.from([1, 4, 3, 2])], [Permutation.from([4, 3, 2, 1])], [Permutation.from([2, 5, 1, 4, 3])]],
+    uniform: [[Permutation.from([1, 4, 3, 2])], [Permutation.from([1, 5, 4, 3, 2])]],
+  },
+  partialPermutations: {
+    small: [
+      [0, 0],
+      [2, 3],
+      [6, 5],
+    ],
+    uniform: [
+      [2, 3],
+      [3, 3],
+    ],
+  },
 };
 
 const SEEDS = [1, 2, 3];
@@ -210,11 +258,15 @@ describe('generator contract', () => {
           expect(cells).toBeLessThanOrEqual(2000);
           const arb = f.arbitrary!(p) as fc.Arbitrary<Structured>;
           const rng = rngOf(20240601);
-          const x2 = chiSquare(() => {
-            const v = arb.generate(rng, undefined).value;
-            expect(f.isMember(p, v)).toBe(true);
-            return v.key();
-          }, cells, 100);
+          const x2 = chiSquare(
+            () => {
+              const v = arb.generate(rng, undefined).value;
+              expect(f.isMember(p, v)).toBe(true);
+              return v.key();
+            },
+            cells,
+            100,
+          );
           if (cells === 1) {
             expect(x2).toBe(0);
             continue;
@@ -243,7 +295,10 @@ describe('generator contract', () => {
 
   it('avoiders: the rejection sampler used past the tabulated sizes is uniform too', () => {
     const f = getFamily('avoiders')!;
-    for (const args of [[5, '1342'], [6, '4231']]) {
+    for (const args of [
+      [5, '1342'],
+      [6, '4231'],
+    ]) {
       const p = f.prepare(args as never) as AvoidersParam;
       const cells = Number(f.count(p));
       const rng = rngOf(5);
@@ -259,7 +314,17 @@ describe('generator contract', () => {
 
   it('covers at least the families of this group', () => {
     const names = withArbitrary.map((f) => f.name);
-    for (const n of ['permutations', 'avoiders', 'involutions', 'derangements', 'matchings', 'noncrossingMatchings', 'compositions', 'subsets', 'words'])
+    for (const n of [
+      'permutations',
+      'avoiders',
+      'involutions',
+      'derangements',
+      'matchings',
+      'noncrossingMatchings',
+      'compositions',
+      'subsets',
+      'words',
+    ])
       expect(names).toContain(n);
   });
 });

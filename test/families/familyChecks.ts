@@ -17,11 +17,7 @@ export function collect<P, T extends Structured>(f: Family<P, T>, p: P): T[] {
  * Enumeration yields exactly count() distinct members; with `order`, consecutive objects are
  * strictly increasing under it (the order the family states).
  */
-export function checkEnumeration<P, T extends Structured>(
-  f: Family<P, T>,
-  args: unknown[],
-  order?: (a: T, b: T) => number,
-): T[] {
+export function checkEnumeration<P, T extends Structured>(f: Family<P, T>, args: unknown[], order?: (a: T, b: T) => number): T[] {
   const p = f.prepare(args as never);
   const all = collect(f, p);
   expect(BigInt(all.length)).toBe(f.count(p));

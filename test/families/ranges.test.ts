@@ -21,7 +21,8 @@ interface Seen {
 }
 
 function viaEnumerate(f: Family<any, any>, p: unknown, limit = Infinity): Seen {
-  const keys: string[] = [], transient: boolean[] = [];
+  const keys: string[] = [],
+    transient: boolean[] = [];
   f.enumerate(p, (o: Structured) => {
     keys.push(o.key());
     transient.push(o.transient === true);
@@ -31,7 +32,8 @@ function viaEnumerate(f: Family<any, any>, p: unknown, limit = Infinity): Seen {
 }
 
 function viaRange(f: Family<any, any>, p: unknown, lo: bigint, hi: bigint): Seen & { stopped: boolean } {
-  const keys: string[] = [], transient: boolean[] = [];
+  const keys: string[] = [],
+    transient: boolean[] = [];
   const stopped = f.enumerateRange!(p, lo, hi, (o: Structured) => {
     keys.push(o.key());
     transient.push(o.transient === true);
@@ -45,7 +47,14 @@ const small: Record<string, unknown[][]> = {
   involutions: [[0], [1], [2], [4], [5], [7]],
   derangements: [[0], [1], [2], [3], [4], [5], [6]],
   subsets: [[0], [1], [4], [6], [0, 0], [3, 0], [5, 2], [6, 3], [6, 6], [3, 5]],
-  words: [[0, 0], [0, 3], [2, 0], [3, 2], [2, 4], [4, 3]],
+  words: [
+    [0, 0],
+    [0, 3],
+    [2, 0],
+    [3, 2],
+    [2, 4],
+    [4, 3],
+  ],
   compositions: [[0], [1], [4], [6], [8]],
   matchings: [[0], [1], [2], [3], [4]],
   noncrossingMatchings: [[0], [1], [3], [4], [6]],
@@ -56,7 +65,14 @@ const small: Record<string, unknown[][]> = {
   motzkinPaths: [[0], [1], [2], [5], [8]],
   parkingFunctions: [[0], [1], [2], [3], [4]],
   dyckPaths: [[0], [1], [3], [4], [6]],
-  partialPermutations: [[0, 0], [0, 3], [2, 0], [2, 3], [3, 3], [4, 2]],
+  partialPermutations: [
+    [0, 0],
+    [0, 3],
+    [2, 0],
+    [2, 3],
+    [3, 3],
+    [4, 2],
+  ],
   standardTableaux: [[[]], [[1]], [[3]], [[2, 2]], [[3, 2]], [[3, 2, 1]], [[4, 2, 1]], [[1, 1, 1, 1]]],
   pipeDreams: [[[1]], [[2, 1]], [[1, 4, 3, 2]], [[3, 1, 4, 2]], [[4, 3, 2, 1]], [[1, 5, 4, 3, 2]]],
   reducedWords: [[[1]], [[2, 1]], [[3, 1, 2]], [[3, 2, 1]], [[4, 3, 2, 1]], [[2, 4, 1, 5, 3]]],
@@ -131,10 +147,7 @@ describe('enumerateRange', () => {
         const all = viaEnumerate(f, p);
         const total = all.keys.length;
         expect(BigInt(total)).toBe(f.count(p));
-        const pairs = fc.sample(
-          fc.tuple(fc.integer({ min: 0, max: total }), fc.integer({ min: 0, max: 300 })),
-          { numRuns: 60, seed: 7 },
-        );
+        const pairs = fc.sample(fc.tuple(fc.integer({ min: 0, max: total }), fc.integer({ min: 0, max: 300 })), { numRuns: 60, seed: 7 });
         pairs.push([0, 5], [total - 1, 1], [total - 3, 10], [0, total]);
         for (const [lo, width] of pairs) {
           const hi = Math.min(lo + width, total);
@@ -250,7 +263,14 @@ const big: Record<string, Big[]> = {
   // lexicographically last partner list: i <-> 2n+1-i
   matchings: [{ args: [20], last: reverse(40) }],
   // U before D: the last Dyck word is (UD)^n, arcs (1 2)(3 4)...
-  noncrossingMatchings: [{ args: [40], last: range(1, 80).map((i) => (i % 2 ? i + 1 : i - 1)).join(',') }],
+  noncrossingMatchings: [
+    {
+      args: [40],
+      last: range(1, 80)
+        .map((i) => (i % 2 ? i + 1 : i - 1))
+        .join(','),
+    },
+  ],
   // reverse lexicographic: the last partition is 1^n
   partitions: [{ args: [420], last: new Array(420).fill(1).join(',') }],
   // the lexicographically last restricted growth string is 1, 2, ..., n
@@ -263,7 +283,14 @@ const big: Record<string, Big[]> = {
   standardTableaux: [{ args: [[8, 7, 6, 5, 4, 3, 2, 1]], last: columnFilling([8, 7, 6, 5, 4, 3, 2, 1]) }],
   // every entry of the monotone triangle as large as it can be: row k is n-k+1..n, the
   // permutation matrix of n, n-1, ..., 1
-  asms: [{ args: [13], last: antiDiagonal(13).map((r) => r.join(',')).join('/') }],
+  asms: [
+    {
+      args: [13],
+      last: antiDiagonal(13)
+        .map((r) => r.join(','))
+        .join('/'),
+    },
+  ],
 };
 
 describe('enumerateRange with counts beyond 2^53', () => {

@@ -15,23 +15,41 @@ import type { Structured } from '../../src/values/structured.js';
 /** Argument lists per family, as expressions; sizes kept small enough to enumerate instantly. */
 const PARAMS: Record<string, string[][]> = {
   permutations: [['0'], ['1'], ['4'], ['6']],
-  avoiders: [['5', '"132"'], ['6', '"1342"'], ['5', '"321"', '"2143"'], ['4', 'perm([2,1])']],
+  avoiders: [
+    ['5', '"132"'],
+    ['6', '"1342"'],
+    ['5', '"321"', '"2143"'],
+    ['4', 'perm([2,1])'],
+  ],
   involutions: [['0'], ['5'], ['7']],
   derangements: [['0'], ['1'], ['5'], ['6']],
   partitions: [['0'], ['1'], ['7'], ['12']],
   compositions: [['0'], ['1'], ['6']],
   subsets: [['0'], ['5'], ['6', '0'], ['6', '3'], ['3', '5']],
-  words: [['0', '2'], ['3', '3'], ['4', '2'], ['2', '0']],
+  words: [
+    ['0', '2'],
+    ['3', '3'],
+    ['4', '2'],
+    ['2', '0'],
+  ],
   matchings: [['0'], ['1'], ['4']],
   noncrossingMatchings: [['0'], ['1'], ['5']],
   setPartitions: [['0'], ['1'], ['5']],
   dyckPaths: [['0'], ['1'], ['5']],
   standardTableaux: [['partition([1])'], ['partition([3,2])'], ['partition([3,2,1])']],
-  semistandardTableaux: [['partition([2,1])', '3'], ['partition([2,2])', '3'], ['partition([3])', '1']],
+  semistandardTableaux: [
+    ['partition([2,1])', '3'],
+    ['partition([2,2])', '3'],
+    ['partition([3])', '1'],
+  ],
   asms: [['1'], ['3'], ['4']],
   reducedWords: [['perm([1,2,3])'], ['perm([3,2,1])'], ['perm([2,4,1,3])'], ['perm([4,3,2,1])']],
   pipeDreams: [['perm([1,2,3])'], ['perm([1,4,3,2])'], ['perm([2,1,4,3])'], ['perm([4,3,2,1])']],
-  partialPermutations: [['0', '0'], ['2', '3'], ['3', '3']],
+  partialPermutations: [
+    ['0', '0'],
+    ['2', '3'],
+    ['3', '3'],
+  ],
 };
 
 function collect(f: Family<any, Structured>, p: unknown): Structured[] {
@@ -75,17 +93,20 @@ describe('every registered family', () => {
         for (const a of s) {
           expect(fam.compare(a, a), `${call}: compare(${a.toText()}, itself)`).toBe(0);
           for (const b of s) {
-            const ab = fam.compare(a, b), ba = fam.compare(b, a);
+            const ab = fam.compare(a, b),
+              ba = fam.compare(b, a);
             expect(sign(ab), `${call}: compare(${a.toText()}, ${b.toText()}) vs the reverse`).toBe(neg(sign(ba)));
             expect(ab === 0, `${call}: compare is 0 exactly on equal objects (${a.toText()}, ${b.toText()})`).toBe(a.equals(b));
           }
         }
         // Transitivity on triples of a smaller sample.
         const t = spread(all, 24);
-        for (const a of t) for (const b of t) for (const c of t) {
-          if (fam.compare(a, b) < 0 && fam.compare(b, c) < 0)
-            expect(fam.compare(a, c), `${call}: ${a.toText()} < ${b.toText()} < ${c.toText()}`).toBeLessThan(0);
-        }
+        for (const a of t)
+          for (const b of t)
+            for (const c of t) {
+              if (fam.compare(a, b) < 0 && fam.compare(b, c) < 0)
+                expect(fam.compare(a, c), `${call}: ${a.toText()} < ${b.toText()} < ${c.toText()}`).toBeLessThan(0);
+            }
         // Sorting by compare gives a strictly increasing sequence (a total order on all objects).
         const sorted = all.slice().sort((a, b) => fam.compare(a, b));
         for (let i = 1; i < sorted.length; i++) expect(fam.compare(sorted[i - 1], sorted[i])).toBeLessThan(0);

@@ -28,7 +28,9 @@ describe('hunch eval and hunch table on random expressions', () => {
       fc.property(fc.gen(), (g) => {
         const text = expressionText(fcRand(g));
         // "--" so that a text starting with "-" is the expression, not an option.
-        const r = runCli(['eval', '--indeterminates', 'q,x', '--let', 'n=3', '--let', 'k=2', '--let', 'w=perm([2,3,1])', '--', text], { timeout: 20_000 });
+        const r = runCli(['eval', '--indeterminates', 'q,x', '--let', 'n=3', '--let', 'k=2', '--let', 'w=perm([2,3,1])', '--', text], {
+          timeout: 20_000,
+        });
         expectClean(r, text, [0, 2]);
       }),
       { seed: 5, numRuns: 8 },
@@ -73,7 +75,20 @@ describe('records, damaged', () => {
     ledger = readFileSync(join(project, 'hunch-ledger.jsonl'), 'utf8');
   }, 60_000);
 
-  const WRONG = ['', '[]', '{}', 'null', '-1', '"x"', '{permutation: [1, 1, 2]}', '{partition: [1, 2]}', '{foo: 1}', '[1, 2]', '123456789012345678901234567890', '*a'];
+  const WRONG = [
+    '',
+    '[]',
+    '{}',
+    'null',
+    '-1',
+    '"x"',
+    '{permutation: [1, 1, 2]}',
+    '{partition: [1, 2]}',
+    '{foo: 1}',
+    '[1, 2]',
+    '123456789012345678901234567890',
+    '*a',
+  ];
 
   /** Damage a text line by line: drop, blank out a value, cut, indent, insert. */
   function damageLines(g: fc.GeneratorValue, text: string, extra: string[]): string {
@@ -127,7 +142,12 @@ describe('records, damaged', () => {
     const garbage = join(project, 'garbage.bin');
     writeFileSync(garbage, Buffer.from(Array.from({ length: 600 }, (_, i) => (i * 7919) % 256)));
     writeFileSync(join(project, 'deep.jsonl'), '['.repeat(100_000) + ']'.repeat(100_000) + '\n');
-    for (const args of [['merge', garbage], ['merge', 'deep.jsonl'], ['merge', project], ['merge', good, '-o', garbage]]) {
+    for (const args of [
+      ['merge', garbage],
+      ['merge', 'deep.jsonl'],
+      ['merge', project],
+      ['merge', good, '-o', garbage],
+    ]) {
       expectClean(runCli(args, { cwd: project }), args.join(' '), [2]);
     }
     copyFileSync(garbage, join(project, 'hunch-ledger.jsonl'));

@@ -9,12 +9,63 @@ import { chance, pick, type Rand } from './random-source.js';
 
 /** Values of the wrong shape for any key: YAML flow collections, numbers, nothing at all. */
 const WRONG = [
-  '', '[]', '{}', '[1, 2]', '{a: 1}', '[n: 1..3]', '- 1\n  - 2', '3', '-1', '1.5', 'null', '~', 'true', '"quoted"', "'single'",
-  '123456789012345678901234567890', '&a 1', '*a', '!!binary aGk=', '|\n    block text', '>-\n    folded\n    text', '[[[]]]', '"\\u0000"',
+  '',
+  '[]',
+  '{}',
+  '[1, 2]',
+  '{a: 1}',
+  '[n: 1..3]',
+  '- 1\n  - 2',
+  '3',
+  '-1',
+  '1.5',
+  'null',
+  '~',
+  'true',
+  '"quoted"',
+  "'single'",
+  '123456789012345678901234567890',
+  '&a 1',
+  '*a',
+  '!!binary aGk=',
+  '|\n    block text',
+  '>-\n    folded\n    text',
+  '[[[]]]',
+  '"\\u0000"',
 ];
 
-const FAMILIES = ['permutations(n)', 'involutions(n)', 'partitions(n)', 'dyckPaths(n)', 'matchings(n)', 'subsets(n)', 'compositions(n)', 'setPartitions(n)', 'standardTableaux(partition([2, 1]))', 'avoiders(n, "132")', 'words(n, 2)'];
-const RANGES = ['1..4', '0..3', '2..5', '1..n', '4..1', '-3..2', '1..10^9', '1..123456789012345678901234567890', '1..2^70', '"1..3"', '1..3/2', '1..', '..4', '3', 'n..4', '1..q', '1..1000000'];
+const FAMILIES = [
+  'permutations(n)',
+  'involutions(n)',
+  'partitions(n)',
+  'dyckPaths(n)',
+  'matchings(n)',
+  'subsets(n)',
+  'compositions(n)',
+  'setPartitions(n)',
+  'standardTableaux(partition([2, 1]))',
+  'avoiders(n, "132")',
+  'words(n, 2)',
+];
+const RANGES = [
+  '1..4',
+  '0..3',
+  '2..5',
+  '1..n',
+  '4..1',
+  '-3..2',
+  '1..10^9',
+  '1..123456789012345678901234567890',
+  '1..2^70',
+  '"1..3"',
+  '1..3/2',
+  '1..',
+  '..4',
+  '3',
+  'n..4',
+  '1..q',
+  '1..1000000',
+];
 
 type Entry = [key: string, value: string];
 
@@ -47,7 +98,9 @@ export function conjectureDocument(r: Rand, index = 0): string {
   if (chance(r, 15)) bindings.push(['k', pick(r, ['1..n', '1..2', '[1, 2]', 'partitions(n)'])]);
   const lets: Entry[] = chance(r, 40) ? [['a', scalar(r, gen(r, 'integer', 2, env))]] : [];
   if (lets.length) env.push(['a', 'integer']);
-  const claim = chance(r, 60) ? pick(r, ['inv(w) >= 0', 'n >= 1', 'len(w) == n', 'a == a', 'maj(w) <= inv(w)', 'true']) : gen(r, 'boolean', 3, env);
+  const claim = chance(r, 60)
+    ? pick(r, ['inv(w) >= 0', 'n >= 1', 'len(w) == n', 'a == a', 'maj(w) <= inv(w)', 'true'])
+    : gen(r, 'boolean', 3, env);
   const entries: Entry[] = [
     ['conjecture', `fuzz-${index}`],
     ['statement', 'A statement.'],
@@ -58,9 +111,25 @@ export function conjectureDocument(r: Rand, index = 0): string {
   if (chance(r, 30)) entries.push(['indeterminates', pick(r, ['[q, x]', 'q', '[q]'])]);
   if (chance(r, 30)) entries.push(['where', scalar(r, pick(r, ['n >= 2', 'n > 0', gen(r, 'boolean', 2, env)]))]);
   if (lets.length) entries.push(['let', mapping(lets)]);
-  if (chance(r, 40)) entries.push(['sample', mapping([['n', pick(r, ['5..7', '5..6', '1..10^30'])], ['count', pick(r, ['3', '0', '5'])]])]);
+  if (chance(r, 40))
+    entries.push([
+      'sample',
+      mapping([
+        ['n', pick(r, ['5..7', '5..6', '1..10^30'])],
+        ['count', pick(r, ['3', '0', '5'])],
+      ]),
+    ]);
   if (chance(r, 20)) entries.push(['references', pick(r, ['["A000142"]', '\n  - folklore', '"one"'])]);
-  if (chance(r, 20)) entries.push(['define', mapping([[pick(r, ['peaks(w)', 'f(a, b)', 'c']), scalar(r, pick(r, ['count(i in 2..len(w)-1 where w[i-1] < w[i] and w[i] > w[i+1])', 'a + b', '3']))]])]);
+  if (chance(r, 20))
+    entries.push([
+      'define',
+      mapping([
+        [
+          pick(r, ['peaks(w)', 'f(a, b)', 'c']),
+          scalar(r, pick(r, ['count(i in 2..len(w)-1 where w[i-1] < w[i] and w[i] > w[i+1])', 'a + b', '3'])),
+        ],
+      ]),
+    ]);
 
   // Mutations: each applied with some probability, several may combine.
   const set = (key: string, value: string, add = false) => {
@@ -75,19 +144,61 @@ export function conjectureDocument(r: Rand, index = 0): string {
         entries[i][1] = pick(r, WRONG);
         break;
       case 1: // a misspelt or unknown key
-        entries[i][0] = pick(r, [entries[i][0] + 's', entries[i][0].slice(1), entries[i][0].toUpperCase(), 'lets', 'four', 'sampel', '? complex', '"quoted key"', '1']);
+        entries[i][0] = pick(r, [
+          entries[i][0] + 's',
+          entries[i][0].slice(1),
+          entries[i][0].toUpperCase(),
+          'lets',
+          'four',
+          'sampel',
+          '? complex',
+          '"quoted key"',
+          '1',
+        ]);
         break;
       case 2: // an odd range for a binding
         set('for', mapping([['n', pick(r, RANGES)], ...bindings.slice(1)]));
         break;
       case 3: // a binding with a bad name, no value, or given twice
-        set('for', mapping([...bindings, pick(r, [['1n', '1..3'], ['n', '1..2'], ['m', ''], ['w w', '1..2'], ['m', '[1, 2]'], ['m', '{a: 1}']] as Entry[])]));
+        set(
+          'for',
+          mapping([
+            ...bindings,
+            pick(r, [
+              ['1n', '1..3'],
+              ['n', '1..2'],
+              ['m', ''],
+              ['w w', '1..2'],
+              ['m', '[1, 2]'],
+              ['m', '{a: 1}'],
+            ] as Entry[]),
+          ]),
+        );
         break;
       case 4: // a sample with odd values
-        set('sample', mapping([[pick(r, ['n', 'w', 'm', 'count']), pick(r, ['5..4', '-1', '1.5', '10^30', '"x"', '[1, 2]', '', '2^70..2^71', '99999999999999999999'])], ['count', pick(r, ['3', '-3', '1e3', '0x10', '', '[3]'])]]), true);
+        set(
+          'sample',
+          mapping([
+            [
+              pick(r, ['n', 'w', 'm', 'count']),
+              pick(r, ['5..4', '-1', '1.5', '10^30', '"x"', '[1, 2]', '', '2^70..2^71', '99999999999999999999']),
+            ],
+            ['count', pick(r, ['3', '-3', '1e3', '0x10', '', '[3]'])],
+          ]),
+          true,
+        );
         break;
       case 5: // a damaged define
-        set('define', mapping([[pick(r, ['f(a', 'f(a, a)', '(a)', 'f()', 'g(x)', '"f(a)"', 'inv(w)', 'f(1)']), pick(r, ['a', '', 'g(x)', 'f(a)', '[1]', '{a: 1}'])]]), true);
+        set(
+          'define',
+          mapping([
+            [
+              pick(r, ['f(a', 'f(a, a)', '(a)', 'f()', 'g(x)', '"f(a)"', 'inv(w)', 'f(1)']),
+              pick(r, ['a', '', 'g(x)', 'f(a)', '[1]', '{a: 1}']),
+            ],
+          ]),
+          true,
+        );
         break;
       case 6: // the claim replaced by a random (possibly ill-typed) expression
         set('claim', scalar(r, gen(r, pick(r, ['boolean', 'integer', 'any']), 3, env)));
@@ -112,6 +223,17 @@ export function conjectureFile(r: Rand): string {
   for (let d = chance(r, 20) ? 2 : 1; d > 0; d--) docs.push(conjectureDocument(r, d));
   let text = docs.join('---\n');
   if (chance(r, 8)) text = text.slice(0, r.int(0, text.length)); // cut off mid-file
-  if (chance(r, 4)) text = pick(r, ['', '---\n---\n', '- a\n- b\n', 'just words', '{', 'conjecture: [', '\t\tconjecture: x\n', '%YAML 9.9\n---\na: 1\n', 'a: &x [1]\nb: *x\n']);
+  if (chance(r, 4))
+    text = pick(r, [
+      '',
+      '---\n---\n',
+      '- a\n- b\n',
+      'just words',
+      '{',
+      'conjecture: [',
+      '\t\tconjecture: x\n',
+      '%YAML 9.9\n---\na: 1\n',
+      'a: &x [1]\nb: *x\n',
+    ]);
   return text;
 }

@@ -83,7 +83,11 @@ describe('found by fuzzing', () => {
       expect((err as InputError).pos).toMatchObject({ file: 'big.yaml', line: 3, column: 6 });
     }
     // The limit itself is allowed, and so is a range whose bounds depend on another binding.
-    expect(() => compileConjecture(loadConjectureFile('ok.yaml', `conjecture: ok\nfor:\n  n: 1..${MAX_EXHAUSTIVE_SIZES}\nclaim: n >= 0\n`).conjectures[0])).not.toThrow();
+    expect(() =>
+      compileConjecture(
+        loadConjectureFile('ok.yaml', `conjecture: ok\nfor:\n  n: 1..${MAX_EXHAUSTIVE_SIZES}\nclaim: n >= 0\n`).conjectures[0],
+      ),
+    ).not.toThrow();
   });
 });
 

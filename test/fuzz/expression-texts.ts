@@ -51,10 +51,66 @@ export const LEAVES: Record<string, string[]> = {
 };
 
 const TOKENS = [
-  '(', ')', '[', ']', ',', ':', '..', '->', '+', '-', '*', '/', '^', '==', '!=', '<', '<=', '>', '>=',
-  'if', 'then', 'else', 'and', 'or', 'not', 'implies', 'in', 'for', 'where', 'true', 'false',
-  'n', 'k', 'w', 'q', 'x', 'i', 'v', '0', '1', '3', '"ab"', '"', "'", '.', '=', '%', '{', '}', '&&', '**', '!', '#', '@', '\t', '\n',
-  '3.5', '2x', 'é', '\u0000',
+  '(',
+  ')',
+  '[',
+  ']',
+  ',',
+  ':',
+  '..',
+  '->',
+  '+',
+  '-',
+  '*',
+  '/',
+  '^',
+  '==',
+  '!=',
+  '<',
+  '<=',
+  '>',
+  '>=',
+  'if',
+  'then',
+  'else',
+  'and',
+  'or',
+  'not',
+  'implies',
+  'in',
+  'for',
+  'where',
+  'true',
+  'false',
+  'n',
+  'k',
+  'w',
+  'q',
+  'x',
+  'i',
+  'v',
+  '0',
+  '1',
+  '3',
+  '"ab"',
+  '"',
+  "'",
+  '.',
+  '=',
+  '%',
+  '{',
+  '}',
+  '&&',
+  '**',
+  '!',
+  '#',
+  '@',
+  '\t',
+  '\n',
+  '3.5',
+  '2x',
+  'é',
+  '\u0000',
 ];
 
 function familyCall(r: Rand, env: Env, depth: number, huge = 5): string {
@@ -91,7 +147,12 @@ function source(r: Rand, env: Env, depth: number): [string, string] {
 }
 
 function comprehension(r: Rand, type: string, depth: number, env: Env): string {
-  const reducer = type === 'boolean' ? pick(r, ['all', 'any']) : type === 'integer' ? pick(r, ['sum', 'count', 'min', 'max', 'product']) : pick(r, REDUCERS);
+  const reducer =
+    type === 'boolean'
+      ? pick(r, ['all', 'any'])
+      : type === 'integer'
+        ? pick(r, ['sum', 'count', 'min', 'max', 'product'])
+        : pick(r, REDUCERS);
   const gens: string[] = [];
   const inner: Env = [...env];
   const count = chance(r, 20) ? 2 : 1;
@@ -102,7 +163,12 @@ function comprehension(r: Rand, type: string, depth: number, env: Env): string {
     const where = chance(r, 30) ? ` where ${gen(r, 'boolean', depth - 1, inner)}` : '';
     gens.push(`${v} in ${src}${where}`);
   }
-  const bodyType = reducer === 'all' || reducer === 'any' || reducer === 'count' ? 'boolean' : reducer === 'concat' ? 'list' : pick(r, ['integer', 'integer', 'polynomial', 'any']);
+  const bodyType =
+    reducer === 'all' || reducer === 'any' || reducer === 'count'
+      ? 'boolean'
+      : reducer === 'concat'
+        ? 'list'
+        : pick(r, ['integer', 'integer', 'polynomial', 'any']);
   if (reducer === 'count' && chance(r, 40)) return `${reducer}(${gens.join(', ')})`;
   const body = gen(r, bodyType, depth - 1, inner);
   // Both spellings: body first (canonical) and binder first.
@@ -146,11 +212,13 @@ export function gen(r: Rand, type: string, depth: number, env: Env = []): string
     case 3:
       return comprehension(r, type, depth, env);
     case 4:
-      if (type === 'boolean') return `${gen(r, 'integer', d, env)} ${pick(r, ['<', '<=', '>', '>=', '==', '!='])} ${gen(r, 'integer', d, env)}`;
+      if (type === 'boolean')
+        return `${gen(r, 'integer', d, env)} ${pick(r, ['<', '<=', '>', '>=', '==', '!='])} ${gen(r, 'integer', d, env)}`;
       if (type === 'list') return `${gen(r, 'integer', d, env)}..${gen(r, 'integer', d, env)}`;
       return `${gen(r, type, d, env)} ${pick(r, ['+', '-', '*', '/', '^'])} ${gen(r, pick(r, [type, 'integer']), d, env)}`;
     case 5:
-      if (type === 'boolean') return `${pick(r, ['not ', ''])}${gen(r, 'boolean', d, env)} ${pick(r, ['and', 'or', 'implies'])} ${gen(r, 'boolean', d, env)}`;
+      if (type === 'boolean')
+        return `${pick(r, ['not ', ''])}${gen(r, 'boolean', d, env)} ${pick(r, ['and', 'or', 'implies'])} ${gen(r, 'boolean', d, env)}`;
       return `if ${gen(r, 'boolean', d, env)} then ${gen(r, type, d, env)} else ${gen(r, type, d, env)}`;
     case 6:
       if (type === 'function') return `${pick(r, ['v', 'm'])} -> ${gen(r, 'any', d, [...env, ['v', 'any'], ['m', 'any']])}`;
@@ -182,7 +250,8 @@ export function damage(r: Rand, text: string): string {
       return toks.join('');
     }
     case 2: {
-      const i = r.int(0, Math.max(0, toks.length - 1)), j = r.int(0, Math.max(0, toks.length - 1));
+      const i = r.int(0, Math.max(0, toks.length - 1)),
+        j = r.int(0, Math.max(0, toks.length - 1));
       [toks[i], toks[j]] = [toks[j], toks[i]];
       return toks.join('');
     }
@@ -202,7 +271,12 @@ export function damage(r: Rand, text: string): string {
       if (!names.length) return text + ')';
       const [t, i] = pick(r, names);
       const at = r.int(0, t.length - 1);
-      toks[i] = pick(r, [t.slice(0, at) + t.slice(at + 1), t.slice(0, at) + t[at] + t.slice(at), t.slice(0, at) + 'z' + t.slice(at + 1), t.toUpperCase()]);
+      toks[i] = pick(r, [
+        t.slice(0, at) + t.slice(at + 1),
+        t.slice(0, at) + t[at] + t.slice(at),
+        t.slice(0, at) + 'z' + t.slice(at + 1),
+        t.toUpperCase(),
+      ]);
       return toks.join('');
     }
     case 6: {
@@ -223,7 +297,8 @@ export function damage(r: Rand, text: string): string {
     }
     case 10: {
       for (let k = r.int(1, 4); k > 0; k--) {
-        const i = r.int(0, Math.max(0, toks.length - 1)), j = r.int(0, Math.max(0, toks.length - 1));
+        const i = r.int(0, Math.max(0, toks.length - 1)),
+          j = r.int(0, Math.max(0, toks.length - 1));
         [toks[i], toks[j]] = [toks[j], toks[i]];
       }
       return toks.join('');

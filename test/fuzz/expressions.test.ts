@@ -45,9 +45,13 @@ describe('random expressions', () => {
 
   test('well-formed expressions of every kind, with wrong argument types now and then', () => {
     fc.assert(
-      fc.property(fc.gen(), fc.constantFrom('integer', 'boolean', 'list', 'polynomial', 'permutation', 'partition', 'tableau', 'matrix', 'function', 'any'), (g, type) => {
-        outcome(gen(fcRand(g), type, 3));
-      }),
+      fc.property(
+        fc.gen(),
+        fc.constantFrom('integer', 'boolean', 'list', 'polynomial', 'permutation', 'partition', 'tableau', 'matrix', 'function', 'any'),
+        (g, type) => {
+          outcome(gen(fcRand(g), type, 3));
+        },
+      ),
       { seed: 7, numRuns: 300 },
     );
   });
@@ -114,7 +118,8 @@ describe('found by fuzzing', () => {
     const pascal = (n: number, k: number): number[] => {
       if (k < 0 || k > n) return [];
       if (k === 0 || k === n) return [1];
-      const a = pascal(n - 1, k - 1), b = pascal(n - 1, k);
+      const a = pascal(n - 1, k - 1),
+        b = pascal(n - 1, k);
       const out = new Array(Math.max(a.length, b.length + k)).fill(0);
       a.forEach((c, i) => (out[i] += c));
       b.forEach((c, i) => (out[i + k] += c));

@@ -32,9 +32,13 @@ const sized = (name: string, lo: number, hi: number, more: (n: number) => Value[
 /** Values built from the text of a constructor (kinds whose values are easiest to make that way). */
 const fromTexts = (texts: string[]) => fc.constantFrom(...texts).map(ev);
 
-const integer = fc.oneof(fc.integer({ min: -1000, max: 1000 }), fc.bigInt({ min: -(10n ** 30n), max: 10n ** 30n }).map((b) => ev(b.toString())));
+const integer = fc.oneof(
+  fc.integer({ min: -1000, max: 1000 }),
+  fc.bigInt({ min: -(10n ** 30n), max: 10n ** 30n }).map((b) => ev(b.toString())),
+);
 const rational = fc.tuple(fc.integer({ min: -50, max: 50 }), fc.integer({ min: 1, max: 50 })).map(([a, b]) => ev(`${a}/${b}`));
-const monomial = fc.tuple(fc.integer({ min: -5, max: 5 }), fc.constantFrom('q', 't', 'x[1]', 'x[2]', 'y', 'z[1, 2]'), fc.integer({ min: 1, max: 3 }))
+const monomial = fc
+  .tuple(fc.integer({ min: -5, max: 5 }), fc.constantFrom('q', 't', 'x[1]', 'x[2]', 'y', 'z[1, 2]'), fc.integer({ min: 1, max: 3 }))
   .map(([c, v, e]) => `${c}*${v}^${e}`);
 const polynomial = fc.array(monomial, { minLength: 1, maxLength: 4 }).map((ms) => ev(`${ms.join(' + ')} + q`));
 const scalarish: fc.Arbitrary<Value> = fc.oneof(integer, rational, fc.boolean(), fc.string({ maxLength: 6 }));
@@ -47,17 +51,27 @@ const KINDS: Array<[string, fc.Arbitrary<Value>]> = [
   ['string', fc.string({ maxLength: 8 })],
   ['polynomial', polynomial.filter((v) => typeOf(v) === 'polynomial')],
   ['list', fc.array(fc.oneof(scalarish, fc.array(integer, { maxLength: 3 })), { maxLength: 5 })],
-  ['distribution', fc.array(fc.tuple(fc.oneof(integer, fc.array(fc.integer({ min: 0, max: 3 }), { maxLength: 2 })), fc.integer({ min: 1, max: 5 })), { maxLength: 5 })
-    .map((pairs) => {
-      const d = new Distribution();
-      for (const [v, c] of pairs) d.add(v, c);
-      return d;
-    })],
-  ['measure', fc.array(fc.integer({ min: 1, max: 9 }), { minLength: 1, maxLength: 4 }).chain((ws) =>
-    fc.shuffledSubarray([1, 2, 3, 4, 5, 6], { minLength: ws.length, maxLength: ws.length }).map((pts) => {
-      const total = ws.reduce((a, b) => a + b, 0);
-      return Measure.from(pts.map((p, i) => [p, ev(`${ws[i]}/${total}`)] as const));
-    }))],
+  [
+    'distribution',
+    fc
+      .array(fc.tuple(fc.oneof(integer, fc.array(fc.integer({ min: 0, max: 3 }), { maxLength: 2 })), fc.integer({ min: 1, max: 5 })), {
+        maxLength: 5,
+      })
+      .map((pairs) => {
+        const d = new Distribution();
+        for (const [v, c] of pairs) d.add(v, c);
+        return d;
+      }),
+  ],
+  [
+    'measure',
+    fc.array(fc.integer({ min: 1, max: 9 }), { minLength: 1, maxLength: 4 }).chain((ws) =>
+      fc.shuffledSubarray([1, 2, 3, 4, 5, 6], { minLength: ws.length, maxLength: ws.length }).map((pts) => {
+        const total = ws.reduce((a, b) => a + b, 0);
+        return Measure.from(pts.map((p, i) => [p, ev(`${ws[i]}/${total}`)] as const));
+      }),
+    ),
+  ],
   ['permutation', sized('permutations', 0, 8)],
   ['matching', sized('matchings', 0, 5)],
   ['partition', sized('partitions', 0, 12)],
@@ -69,8 +83,12 @@ const KINDS: Array<[string, fc.Arbitrary<Value>]> = [
   ['subset', sized('subsets', 0, 8, (n) => [Math.floor(n / 2)])],
   ['asm', sized('asms', 1, 5)],
   ['pipeDream', sized('permutations', 1, 5).chain((w) => family('pipeDreams', [w]))],
-  ['matrix', fc.array(fc.array(fc.integer({ min: -9, max: 9 }), { minLength: 2, maxLength: 2 }), { minLength: 1, maxLength: 3 })
-    .map((rows) => ev(`matrix(${JSON.stringify(rows)})`))],
+  [
+    'matrix',
+    fc
+      .array(fc.array(fc.integer({ min: -9, max: 9 }), { minLength: 2, maxLength: 2 }), { minLength: 1, maxLength: 3 })
+      .map((rows) => ev(`matrix(${JSON.stringify(rows)})`)),
+  ],
   ['signedPermutation', sized('signedPermutations', 0, 5)],
   ['motzkin', sized('motzkinPaths', 0, 7)],
   ['parkingFunction', sized('parkingFunctions', 0, 5)],

@@ -27,7 +27,9 @@ const value: fc.Arbitrary<Value> = fc.letrec<{ v: Value }>((tie) => ({
     fc.boolean(),
     fc.string({ maxLength: 3 }),
     fc.array(tie('v'), { maxLength: 3 }),
-    fc.array(fc.integer({ min: 1, max: 4 }), { maxLength: 4 }).map((a) => new Permutation([...new Set(a)].length === a.length && a.every((x) => x <= a.length) ? a : a.map((_, i) => i + 1))),
+    fc
+      .array(fc.integer({ min: 1, max: 4 }), { maxLength: 4 })
+      .map((a) => new Permutation([...new Set(a)].length === a.length && a.every((x) => x <= a.length) ? a : a.map((_, i) => i + 1))),
   ),
 })).v;
 
@@ -50,7 +52,7 @@ describe('compareValues is a total order', () => {
     );
   });
   test('numbers by value, lists and objects lexicographically', () => {
-    expect(sortValues([3, makeRat(1n, 2n), -1, 2n ** 60n as never, 0])).toEqual([-1, 0, makeRat(1n, 2n), 3, 2n ** 60n]);
+    expect(sortValues([3, makeRat(1n, 2n), -1, (2n ** 60n) as never, 0])).toEqual([-1, 0, makeRat(1n, 2n), 3, 2n ** 60n]);
     expect(compareValues([1, 2], [1, 2, 0])).toBeLessThan(0);
     expect(compareValues(new Permutation([2, 1, 3]), new Permutation([1, 3, 2]))).toBeGreaterThan(0);
   });
@@ -80,7 +82,10 @@ describe('Distribution', () => {
 
 describe('operators', () => {
   test('matrices: product, sum, scaling, powers', () => {
-    const A = Matrix.from([[1, 1], [1, 0]]);
+    const A = Matrix.from([
+      [1, 1],
+      [1, 0],
+    ]);
     // Fibonacci matrix: A^10 = [[F11, F10], [F10, F9]] = [[89, 55], [55, 34]] (OEIS A000045).
     expect((ops.pow(A, 10) as Matrix).toText()).toBe('matrix([[89, 55], [55, 34]])');
     expect((ops.mul(2, A) as Matrix).toText()).toBe('matrix([[2, 2], [2, 0]])');
@@ -89,7 +94,7 @@ describe('operators', () => {
   });
   test('comparisons are for numbers only', () => {
     expect(ops.lt(makeRat(1n, 3n), makeRat(1n, 2n))).toBe(true);
-    expect(ops.ge(2n ** 70n as never, 5)).toBe(true);
+    expect(ops.ge((2n ** 70n) as never, 5)).toBe(true);
     expect(() => ops.lt(new Permutation([1]), 1)).toThrow(/compares integers and rationals only/);
     expect(() => ops.mul(new Permutation([1]), new Permutation([2, 1]))).toThrow(/different sizes/);
     expect(() => ops.pow(2, makeRat(1n, 2n))).toThrow(/exponent must be an integer/);

@@ -87,7 +87,7 @@ describe('character(lambda, mu)', () => {
         }
     }
   });
-  it('degree = f^lambda, and chi^{lambda\'} = sign(mu) chi^lambda', () => {
+  it("degree = f^lambda, and chi^{lambda'} = sign(mu) chi^lambda", () => {
     for (let n = 1; n <= 8; n++)
       for (const l of parts(n)) {
         expect(BigInt(chi(l, new Array<number>(n).fill(1)))).toBe(hookLengthCount(l));

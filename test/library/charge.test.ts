@@ -82,7 +82,8 @@ function lusztig(lambda: number[], mu: number[]): number[] {
   const l = mu.length;
   if (lambda.length > l) return [];
   const lam = [...lambda, ...new Array(l - lambda.length).fill(0)];
-  const lr = lam.map((x, i) => x + l - 1 - i), mr = mu.map((x, i) => x + l - 1 - i);
+  const lr = lam.map((x, i) => x + l - 1 - i),
+    mr = mu.map((x, i) => x + l - 1 - i);
   let total: number[] = [];
   for (const w of permutationsOf(l)) {
     const g = w.map((wi, i) => lr[wi] - mr[i]);
@@ -111,9 +112,10 @@ describe('Kostka–Foulkes polynomials', () => {
     expect(K([4], [3, 1])).toEqual([0, 1]);
   });
 
-  it('equal the t-analogue of Kostant\'s formula (Lusztig) for all lambda, mu of n <= 6', () => {
+  it("equal the t-analogue of Kostant's formula (Lusztig) for all lambda, mu of n <= 6", () => {
     for (let n = 1; n <= 6; n++)
-      for (const l of parts(n)) for (const m of parts(n)) expect(trim(kostkaFoulkesCoefficients(l, m)), `K_${l},${m}`).toEqual(lusztig(l, m));
+      for (const l of parts(n))
+        for (const m of parts(n)) expect(trim(kostkaFoulkesCoefficients(l, m)), `K_${l},${m}`).toEqual(lusztig(l, m));
   });
 
   it('at t = 1 are the Kostka numbers; K_{lambda lambda} = 1; degree n(mu) - n(lambda) when lambda >= mu (Macdonald III.6 (6.5))', () => {

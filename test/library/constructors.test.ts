@@ -9,7 +9,14 @@ const call = (name: string, ...args: Value[]) => getFunction(name)!.impl(...args
 describe('object constructors', () => {
   it('build and print the objects of FORMAT.md §2', () => {
     expect(valueToText(call('perm', [2, 4, 1, 3]))).toBe('perm([2, 4, 1, 3])');
-    expect(valueToText(call('matching', [[2, 4], [3, 1]]))).toBe('matching([[1, 3], [2, 4]])');
+    expect(
+      valueToText(
+        call('matching', [
+          [2, 4],
+          [3, 1],
+        ]),
+      ),
+    ).toBe('matching([[1, 3], [2, 4]])');
     expect(valueToText(call('composition', [1, 3, 1]))).toBe('composition([1, 3, 1])');
     expect(valueToText(call('word', [1, 1, 2]))).toBe('word([1, 1, 2])');
     expect(valueToText(call('word', '1123'))).toBe('word([1, 1, 2, 3])');
@@ -18,7 +25,12 @@ describe('object constructors', () => {
   });
   it('reject malformed arguments with the offending value', () => {
     expect(() => call('perm', [1, 1])).toThrow(/\[1, 1\] is not a permutation of 1..2/);
-    expect(() => call('matching', [[1, 2], [2, 3]])).toThrow(/two arcs/);
+    expect(() =>
+      call('matching', [
+        [1, 2],
+        [2, 3],
+      ]),
+    ).toThrow(/two arcs/);
     expect(() => call('matching', [[1, 2, 3]])).toThrow(/pair/);
     expect(() => call('composition', [2, 0])).toThrow(/not a positive integer/);
     expect(() => call('word', 'ab')).toThrow(/digits/);

@@ -24,7 +24,8 @@ function allPaths(n: number): number[][] {
 function jointTable(n: number, f: (s: number[]) => number, g: (s: number[]) => number): number[][] {
   const t: number[][] = [];
   for (const s of allPaths(n)) {
-    const i = f(s), j = g(s);
+    const i = f(s),
+      j = g(s);
     while (t.length <= i) t.push([]);
     while (t[i].length <= j) t[i].push(0);
     t[i][j]++;
@@ -35,7 +36,11 @@ function jointTable(n: number, f: (s: number[]) => number, g: (s: number[]) => n
 /** The table as a map "i,j" -> coefficient without zeros, to compare tables of any padding. */
 function entries(t: readonly (readonly (number | bigint)[])[]): Map<string, number> {
   const m = new Map<string, number>();
-  t.forEach((row, i) => row.forEach((c, j) => { if (Number(c) !== 0) m.set(`${i},${j}`, Number(c)); }));
+  t.forEach((row, i) =>
+    row.forEach((c, j) => {
+      if (Number(c) !== 0) m.set(`${i},${j}`, Number(c));
+    }),
+  );
   return m;
 }
 
@@ -79,20 +84,25 @@ describe('q,t-Catalan numbers', () => {
     for (let n = 0; n <= 8; n++) {
       const shift = (n * (n - 1)) / 2;
       const spec: number[] = [];
-      qtCatalanTable(n).forEach((row, i) => row.forEach((c, j) => {
-        const d = i - j + shift;
-        while (spec.length <= d) spec.push(0);
-        spec[d] += Number(c);
-      }));
+      qtCatalanTable(n).forEach((row, i) =>
+        row.forEach((c, j) => {
+          const d = i - j + shift;
+          while (spec.length <= d) spec.push(0);
+          spec[d] += Number(c);
+        }),
+      );
       // spec * [n+1]_q == [2n choose n]_q
       const prod = new Array(spec.length + n).fill(0);
-      spec.forEach((c, d) => { for (let e = 0; e <= n; e++) prod[d + e] += c; });
+      spec.forEach((c, d) => {
+        for (let e = 0; e <= n; e++) prod[d + e] += c;
+      });
       expect(prod).toEqual(qbinomialCoefficients(2 * n, n).map(Number));
     }
   });
 
   it('the library function evaluates the table at q and t, and at numbers', () => {
-    const q = variable('q'), t = variable('t');
+    const q = variable('q'),
+      t = variable('t');
     expect(polyText(call('qtCatalan', 2, q, t) as never)).toBe('q + t');
     expect(call('qtCatalan', 6, 1, 1)).toBe(132); // OEIS A000108
     expect(call('qtCatalan', 0, q, t)).toBe(1);

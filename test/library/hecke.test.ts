@@ -55,7 +55,8 @@ describe('Hecke insertion', () => {
     for (const n of [4, 5])
       for (const w of allPerms(n))
         reducedWords.enumerate(reducedWords.prepare([Permutation.from(w)] as never), (r: Word) => {
-          const h = heckeInsert(r.letters), e = edelmanGreeneInsert(r.letters);
+          const h = heckeInsert(r.letters),
+            e = edelmanGreeneInsert(r.letters);
           expect(h.P).toEqual(e.P);
           expect(h.Q.map((row) => row.map((cell) => cell[0]))).toEqual(e.Q);
           expect(h.Q.every((row) => row.every((cell) => cell.length === 1))).toBe(true);

@@ -24,16 +24,22 @@ function permutationsOf(n: number): number[][] {
 
 describe('the contract claims, as written', () => {
   it('multidegree(matrixSchubertIdeal(w, z), x) == schubert(w, x) over S_4 (Ann. of Math. 161 (2005), Thm A)', () => {
-    for (const w of permutationsOf(4)) expect(ev(`multidegree(matrixSchubertIdeal(perm([${w}]), z), x) == schubert(perm([${w}]), x)`)).toBe(true);
+    for (const w of permutationsOf(4))
+      expect(ev(`multidegree(matrixSchubertIdeal(perm([${w}]), z), x) == schubert(perm([${w}]), x)`)).toBe(true);
   }, 60_000);
   it('degree(ideal(entries(X*Y - Y*X))) == [1, 3, 31][n] (OEIS A029729)', () => {
     for (const n of [1, 2, 3]) {
-      const lets: [string, string][] = [['n', String(n)], ['X', 'genericMatrix(a, n, n)'], ['Y', 'genericMatrix(b, n, n)']];
+      const lets: [string, string][] = [
+        ['n', String(n)],
+        ['X', 'genericMatrix(a, n, n)'],
+        ['Y', 'genericMatrix(b, n, n)'],
+      ];
       expect(ev('degree(ideal(entries(X*Y - Y*X))) == [1, 3, 31][n]', lets)).toBe(true);
     }
   }, 60_000);
   it('kPolynomial(matrixSchubertIdeal(w, z), x) == grothendieck(w, x) over S_4 (β = -1, K written in 1 - x)', () => {
-    for (const w of permutationsOf(4)) expect(ev(`kPolynomial(matrixSchubertIdeal(perm([${w}]), z), x) == grothendieck(perm([${w}]), x)`)).toBe(true);
+    for (const w of permutationsOf(4))
+      expect(ev(`kPolynomial(matrixSchubertIdeal(perm([${w}]), z), x) == grothendieck(perm([${w}]), x)`)).toBe(true);
   }, 60_000);
   it('with a second family: multidegree == doubleSchubert (deg z[i,j] = x[i] - y[j]) over S_4', () => {
     for (const w of permutationsOf(4))

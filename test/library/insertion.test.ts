@@ -39,7 +39,10 @@ const contentOf = (rows: number[][], m: number) => {
 
 describe('RSK on matrices', () => {
   it('is a bijection onto pairs of semistandard tableaux of one shape with the column and row sums as contents (Cauchy identity; Stanley, EC2, Thm 7.11.5), 2x3 and 3x2 with entries <= 2', () => {
-    for (const [r, c] of [[2, 3], [3, 2]]) {
+    for (const [r, c] of [
+      [2, 3],
+      [3, 2],
+    ]) {
       const seen = new Set<string>();
       for (const M of matrices(r, c, 2)) {
         const { P, Q } = insertTwoLine(twoLineArrayOf(M), false);
@@ -74,7 +77,8 @@ describe('RSK on matrices', () => {
   it('transposing the matrix exchanges P and Q (Knuth; Stanley, EC2, Thm 7.13.1)', () => {
     for (const M of matrices(2, 3, 2)) {
       const MT = M[0].map((_, j) => M.map((r) => r[j]));
-      const a = insertTwoLine(twoLineArrayOf(M), false), b = insertTwoLine(twoLineArrayOf(MT), false);
+      const a = insertTwoLine(twoLineArrayOf(M), false),
+        b = insertTwoLine(twoLineArrayOf(MT), false);
       expect(key(b.P)).toBe(key(a.Q));
       expect(key(b.Q)).toBe(key(a.P));
     }
@@ -93,7 +97,7 @@ describe('RSK on matrices', () => {
 });
 
 describe('dual RSK', () => {
-  it('is injective on 0/1 matrices and counts sum over lambda of K(lambda, alpha) K(lambda\', beta) (dual Cauchy; Stanley, EC2, §7.14), 3x3', () => {
+  it("is injective on 0/1 matrices and counts sum over lambda of K(lambda, alpha) K(lambda', beta) (dual Cauchy; Stanley, EC2, §7.14), 3x3", () => {
     const seen = new Set<string>();
     const by = new Map<string, number>();
     for (const M of matrices(3, 3, 1)) {
@@ -125,7 +129,14 @@ describe('dual RSK', () => {
 
 describe('rectification', () => {
   it('equals the insertion tableau of the reading word (Fulton, Young Tableaux, ch. 2-3), for all fillings of (3,2,1)/(1) and (3,3)/(2,1) with entries <= 3', () => {
-    for (const [lambda, mu] of [[[3, 2, 1], [1]], [[3, 3], [2, 1]], [[2, 2], [1]]] as [number[], number[]][]) {
+    for (const [lambda, mu] of [
+      [[3, 2, 1], [1]],
+      [
+        [3, 3],
+        [2, 1],
+      ],
+      [[2, 2], [1]],
+    ] as [number[], number[]][]) {
       const sizes = lambda.map((l, i) => l - (mu[i] ?? 0));
       const cells = sizes.reduce((a, b) => a + b, 0);
       let fillings: number[][] = [[]];
@@ -155,7 +166,6 @@ describe('rectification', () => {
     expect(rectifyRows([[2, 3], [1]], [1])).toEqual([[1, 2, 3]]);
     expect(() => call('rectify', [[2, 1]], new Partition([1]))).toThrow(/not a skew semistandard/);
     expect(() => call('rectify', [[2], [1, 1]], new Partition([1]))).toThrow(/not a skew semistandard/); // column 2: 2 above 1
-
   });
 });
 

@@ -21,7 +21,7 @@ describe('Kronecker coefficients', () => {
     expect(parts(4).map((v) => g([3, 1], [3, 1], v))).toEqual([1, 1, 1, 1, 0]);
     expect(g([3, 2, 1], [3, 2, 1], [3, 2, 1])).toBe(5);
   });
-  it('g(lambda, mu, (n)) = [lambda = mu], g(lambda, mu, (1^n)) = [mu = lambda\']; symmetric; sum over nu of g f^nu = f^lambda f^mu (n <= 6)', () => {
+  it("g(lambda, mu, (n)) = [lambda = mu], g(lambda, mu, (1^n)) = [mu = lambda']; symmetric; sum over nu of g f^nu = f^lambda f^mu (n <= 6)", () => {
     for (let n = 1; n <= 6; n++) {
       const ps = parts(n);
       for (const l of ps)

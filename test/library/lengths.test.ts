@@ -36,7 +36,9 @@ describe('indexing and len agree on every kind', () => {
     expect(ev('all(s[i] == blocks(s)[i] for s in setPartitions(4), i in 1..len(s))')).toBe('true');
     // the number of blocks is distributed by the Stirling numbers of the second kind: S(4, k) = 1, 7, 6, 1 (OEIS A008277)
     expect(ev('list(count(s in setPartitions(4) where len(s) == k) for k in 1..4)')).toBe('[1, 7, 6, 1]');
-    expect(errorOf(() => ev('setPartition([[1, 2]])[2]')).message).toBe('index 2 is out of range: setPartition([[1, 2]]) has 1 block: indices 1..1');
+    expect(errorOf(() => ev('setPartition([[1, 2]])[2]')).message).toBe(
+      'index 2 is out of range: setPartition([[1, 2]]) has 1 block: indices 1..1',
+    );
   });
 
   test('a matching has no single length', () => {

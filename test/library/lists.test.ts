@@ -74,7 +74,17 @@ describe('reverse, sort, map', () => {
     expect(call('sort', [normBig(10n ** 20n), -3, makeRat(1n, 2n), 0])).toEqual([-3, 0, makeRat(1n, 2n), 10n ** 20n]);
   });
   it('sort orders lists and permutations lexicographically', () => {
-    expect(call('sort', [[2, 1], [1, 3], [1, 2, 0]])).toEqual([[1, 2, 0], [1, 3], [2, 1]]);
+    expect(
+      call('sort', [
+        [2, 1],
+        [1, 3],
+        [1, 2, 0],
+      ]),
+    ).toEqual([
+      [1, 2, 0],
+      [1, 3],
+      [2, 1],
+    ]);
     const sorted = call('sort', allPerms(3).reverse().map(perm)) as Permutation[];
     expect(sorted.map((w) => w.a.join(''))).toEqual(['123', '132', '213', '231', '312', '321']);
   });
@@ -91,7 +101,8 @@ describe('first, last, take, drop', () => {
   it('take(L, k) followed by drop(L, k) is L, and they clamp at the length (fast-check)', () => {
     fc.assert(
       fc.property(fc.array(fc.integer()), fc.nat(20), (L, k) => {
-        const t = call('take', L, k) as number[], d = call('drop', L, k) as number[];
+        const t = call('take', L, k) as number[],
+          d = call('drop', L, k) as number[];
         expect([...t, ...d]).toEqual(L);
         expect(t.length).toBe(Math.min(k, L.length));
         if (L.length) {
@@ -135,7 +146,7 @@ describe('isUnimodal, isLogConcave, isPalindromic', () => {
     expect(call('isLogConcave', [makeRat(1n, 3n), makeRat(1n, 2n), makeRat(3n, 4n)])).toBe(true); // 1/4 >= 1/4
     expect(call('isLogConcave', [makeRat(1n, 3n), makeRat(1n, 2n), makeRat(4n, 5n)])).toBe(false); // 1/4 < 4/15
   });
-  it('rows of Pascal\'s triangle (OEIS A007318) and the Eulerian and Mahonian distributions are log-concave and unimodal', () => {
+  it("rows of Pascal's triangle (OEIS A007318) and the Eulerian and Mahonian distributions are log-concave and unimodal", () => {
     // Stanley, Log-concave and unimodal sequences (1989): binomial rows (Newton's inequalities), the
     // Eulerian rows (their polynomials are real-rooted, Frobenius), and the Mahonian rows (a product
     // of the polynomials [k]_q, whose coefficient sequences are log-concave without internal zeros).
@@ -156,7 +167,12 @@ describe('isUnimodal, isLogConcave, isPalindromic', () => {
     expect(() => call('isLogConcave', [[1]])).toThrow(/entry 1 is \[1\]/);
   });
   it('palindromic means equal to its reverse, for any entries and for strings', () => {
-    fc.assert(fc.property(fc.array(fc.integer({ min: 0, max: 2 }), { maxLength: 6 }), (L) => call('isPalindromic', L) === (L.join() === [...L].reverse().join())));
+    fc.assert(
+      fc.property(
+        fc.array(fc.integer({ min: 0, max: 2 }), { maxLength: 6 }),
+        (L) => call('isPalindromic', L) === (L.join() === [...L].reverse().join()),
+      ),
+    );
     expect(call('isPalindromic', [1, makeRat(2n, 3n), 1])).toBe(true);
     expect(call('isPalindromic', [1, 'a', 1])).toBe(true);
     expect(call('isPalindromic', [1, 'a', 'b'])).toBe(false);

@@ -39,7 +39,13 @@ describe('lr(lambda, mu, nu)', () => {
   it('c^{(3,2,1)}_{(2,1),(2,1)} = 2 (Fulton, Young Tableaux, §5.2) and small cases', () => {
     expect(lrCoefficient([3, 2, 1], [2, 1], [2, 1])).toBe(2n);
     // Pieri: s_(2,1) s_(1) = s_(3,1) + s_(2,2) + s_(2,1,1).
-    expect([[3, 1], [2, 2], [2, 1, 1]].map((l) => lrCoefficient(l, [2, 1], [1]))).toEqual([1n, 1n, 1n]);
+    expect(
+      [
+        [3, 1],
+        [2, 2],
+        [2, 1, 1],
+      ].map((l) => lrCoefficient(l, [2, 1], [1])),
+    ).toEqual([1n, 1n, 1n]);
     expect(lrCoefficient([3], [2, 1], [1])).toBe(0n);
     expect(lrCoefficient([3, 1], [2], [2])).toBe(1n); // s_2 s_2 = s_4 + s_31 + s_22
     expect(lrCoefficient([4, 2], [2], [2])).toBe(0n); // sizes differ
@@ -57,7 +63,7 @@ describe('lr(lambda, mu, nu)', () => {
             }
           }
   });
-  it('symmetries: c^lambda_{mu,nu} = c^lambda_{nu,mu} = c^{lambda\'}_{mu\',nu\'}, and sum_nu c f^nu = f^{lambda/mu}', () => {
+  it("symmetries: c^lambda_{mu,nu} = c^lambda_{nu,mu} = c^{lambda'}_{mu',nu'}, and sum_nu c f^nu = f^{lambda/mu}", () => {
     for (let n = 1; n <= 7; n++)
       for (const lam of parts(n))
         for (let k = 0; k <= n; k++)

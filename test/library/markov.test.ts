@@ -58,7 +58,15 @@ describe('the loop chain through the language functions (OEIS A029729)', () => {
 });
 
 describe('chain and its measure', () => {
-  const two = () => call('chain', [1, 2], fn('s -> [[1, 1], [2, s]]', (s) => [[1, 1], [2, s]])) as MarkovChain;
+  const two = () =>
+    call(
+      'chain',
+      [1, 2],
+      fn('s -> [[1, 1], [2, s]]', (s) => [
+        [1, 1],
+        [2, s],
+      ]),
+    ) as MarkovChain;
   it('a two-state chain: P = [[1/2, 1/2], [1/3, 2/3]] has pi = (2/5, 3/5) (balance: pi1/2 = pi2/3)', () => {
     const mu = call('stationary', two()) as Measure;
     expect(call('values', mu)).toEqual([makeRat(2n, 5n), makeRat(3n, 5n)]);
@@ -70,7 +78,22 @@ describe('chain and its measure', () => {
     expect(mu.elements()).toEqual([1, 2]);
   });
   it('repeated targets add up, and the support skips transient states (in the order of the states)', () => {
-    const c = call('chain', [3, 1, 2], fn('s -> ...', (s) => (s === 3 ? [[1, 1], [1, 1]] : [[3 - (s as number), 1], [s, 1], [s, 1]]))) as MarkovChain;
+    const c = call(
+      'chain',
+      [3, 1, 2],
+      fn('s -> ...', (s) =>
+        s === 3
+          ? [
+              [1, 1],
+              [1, 1],
+            ]
+          : [
+              [3 - (s as number), 1],
+              [s, 1],
+              [s, 1],
+            ],
+      ),
+    ) as MarkovChain;
     expect(c.movesOut(0)).toEqual([[1, 2]]);
     const mu = call('stationary', c) as Measure;
     expect(call('support', mu)).toEqual([1, 2]);
@@ -82,7 +105,17 @@ describe('chain and its measure', () => {
       const spec = getFunction(name)!;
       expect(spec.example.length).toBeGreaterThan(0);
     }
-    const mu = call('stationary', call('chain', [1, 2, 3], fn('s -> [[2, 1], [3, 1]]', () => [[2, 1], [3, 1]])));
+    const mu = call(
+      'stationary',
+      call(
+        'chain',
+        [1, 2, 3],
+        fn('s -> [[2, 1], [3, 1]]', () => [
+          [2, 1],
+          [3, 1],
+        ]),
+      ),
+    );
     expect(valueToText(call('support', mu))).toBe('[2, 3]');
   });
   it('measures and chains survive their record encoding', () => {
@@ -90,9 +123,18 @@ describe('chain and its measure', () => {
     const mu = call('stationary', c) as Measure;
     expect((decodeValue(encodeValue(mu)) as Measure).equals(mu)).toBe(true);
     expect((decodeValue(JSON.parse(JSON.stringify(encodeValue(c)))) as MarkovChain).equals(c)).toBe(true);
-    const perms = call('chain', [new Permutation([1, 2]), new Permutation([2, 1])], fn('w -> [[swapAt(w, 1), 1]]', (w) => [[call('swapAt', w, 1), 1]]));
+    const perms = call(
+      'chain',
+      [new Permutation([1, 2]), new Permutation([2, 1])],
+      fn('w -> [[swapAt(w, 1), 1]]', (w) => [[call('swapAt', w, 1), 1]]),
+    );
     const pm = call('stationary', perms) as Measure;
-    expect(encodeValue(pm)).toEqual({ measure: [[{ permutation: [1, 2] }, '1/2'], [{ permutation: [2, 1] }, '1/2']] });
+    expect(encodeValue(pm)).toEqual({
+      measure: [
+        [{ permutation: [1, 2] }, '1/2'],
+        [{ permutation: [2, 1] }, '1/2'],
+      ],
+    });
     expect((decodeValue(encodeValue(pm)) as Measure).equals(pm)).toBe(true);
   });
 });
@@ -103,28 +145,70 @@ describe('clear errors naming the state', () => {
     expect(f).toThrow(text);
   };
   it('a chain with two closed classes', () => {
-    const c = call('chain', matchings(2), fn('m -> [[m, 1]]', (m) => [[m, 1]]));
+    const c = call(
+      'chain',
+      matchings(2),
+      fn('m -> [[m, 1]]', (m) => [[m, 1]]),
+    );
     expectEval(() => call('stationary', c), /3 closed classes.*\{matching\(\[\[1, 2\], \[3, 4\]\]\) \(1 state\)\}/);
   });
   it('a negative weight, a non-numeric weight, a target outside the chain, a malformed move list', () => {
     const ms = matchings(2);
     expectEval(
-      () => call('chain', ms, fn('m -> [[crossAt(m, 1), -1]]', (m) => [[call('crossAt', m, 1), -1]])),
+      () =>
+        call(
+          'chain',
+          ms,
+          fn('m -> [[crossAt(m, 1), -1]]', (m) => [[call('crossAt', m, 1), -1]]),
+        ),
       'the move from matching([[1, 2], [3, 4]]) to matching([[1, 2], [3, 4]]) has the negative weight -1',
     );
     expectEval(
-      () => call('chain', ms, fn('m -> [[m, "a"]]', (m) => [[m, 'a']])),
+      () =>
+        call(
+          'chain',
+          ms,
+          fn('m -> [[m, "a"]]', (m) => [[m, 'a']]),
+        ),
       'the move from matching([[1, 2], [3, 4]]) to matching([[1, 2], [3, 4]]) has weight "a", which is not a number',
     );
     expectEval(
-      () => call('chain', ms.slice(0, 1), fn('m -> [[crossAt(m, 2), 1]]', (m) => [[call('crossAt', m, 2), 1]])),
+      () =>
+        call(
+          'chain',
+          ms.slice(0, 1),
+          fn('m -> [[crossAt(m, 2), 1]]', (m) => [[call('crossAt', m, 2), 1]]),
+        ),
       'which is not a state of the chain',
     );
-    expectEval(() => call('chain', [1], fn('s -> s', (s) => s)), 'must return a list of [state, weight] pairs, but for 1 it returned 1');
-    expectEval(() => call('chain', [1, 1], fn('s -> [[s, 1]]', (s) => [[s, 1]])), 'the state 1 is listed twice');
+    expectEval(
+      () =>
+        call(
+          'chain',
+          [1],
+          fn('s -> s', (s) => s),
+        ),
+      'must return a list of [state, weight] pairs, but for 1 it returned 1',
+    );
+    expectEval(
+      () =>
+        call(
+          'chain',
+          [1, 1],
+          fn('s -> [[s, 1]]', (s) => [[s, 1]]),
+        ),
+      'the state 1 is listed twice',
+    );
   });
   it('prob of a value of the wrong kind', () => {
-    const mu = call('stationary', call('chain', [1, 2], fn('s -> [[3 - s, 1]]', (s) => [[3 - (s as number), 1]])));
+    const mu = call(
+      'stationary',
+      call(
+        'chain',
+        [1, 2],
+        fn('s -> [[3 - s, 1]]', (s) => [[3 - (s as number), 1]]),
+      ),
+    );
     expectEval(() => call('prob', mu, new Permutation([1])), 'the measure lives on values of type integer');
   });
 });

@@ -28,7 +28,8 @@ function allMatchings(n: number): number[][] {
 /** Crossings and nestings over all pairs of arcs (a second algorithm). */
 function pairsOfArcs(p: number[]): [number, number] {
   const arcs = p.map((b, i) => [i + 1, b]).filter(([a, b]) => a < b);
-  let cr = 0, ne = 0;
+  let cr = 0,
+    ne = 0;
   for (const [a, b] of arcs)
     for (const [c, d] of arcs) {
       if (a < c && c < b && b < d) cr++;

@@ -40,7 +40,8 @@ describe('factorials', () => {
     expect(a000165.map((_, n) => call('doubleFactorial', 2 * n))).toEqual(a000165);
   });
   it('n!! * (n-1)!! = n! (second algorithm), also past the safe range', () => {
-    for (let n = 1; n <= 120; n++) expect(big(call('doubleFactorial', n)) * big(call('doubleFactorial', n - 1))).toBe(big(call('factorial', n)));
+    for (let n = 1; n <= 120; n++)
+      expect(big(call('doubleFactorial', n)) * big(call('doubleFactorial', n - 1))).toBe(big(call('factorial', n)));
   });
   it('rejects arguments out of range with a clear message', () => {
     expect(() => call('factorial', -1)).toThrow(/factorial\(n\) needs n >= 0, got n = -1/);
@@ -50,7 +51,7 @@ describe('factorials', () => {
 });
 
 describe('binomial', () => {
-  it('matches Pascal\'s triangle (OEIS A007318) built by addition, up to n = 120', () => {
+  it("matches Pascal's triangle (OEIS A007318) built by addition, up to n = 120", () => {
     let row: bigint[] = [1n];
     for (let n = 0; n <= 120; n++) {
       for (let k = -2; k <= n + 2; k++) {
@@ -89,7 +90,16 @@ describe('binomial', () => {
 
 describe('Stirling and Bell numbers', () => {
   it('stirling1 rows match OEIS A132393 (unsigned; A008275/A048994 up to sign)', () => {
-    const a132393 = [[1], [0, 1], [0, 1, 1], [0, 2, 3, 1], [0, 6, 11, 6, 1], [0, 24, 50, 35, 10, 1], [0, 120, 274, 225, 85, 15, 1], [0, 720, 1764, 1624, 735, 175, 21, 1]];
+    const a132393 = [
+      [1],
+      [0, 1],
+      [0, 1, 1],
+      [0, 2, 3, 1],
+      [0, 6, 11, 6, 1],
+      [0, 24, 50, 35, 10, 1],
+      [0, 120, 274, 225, 85, 15, 1],
+      [0, 720, 1764, 1624, 735, 175, 21, 1],
+    ];
     a132393.forEach((row, n) => expect(row.map((_, k) => call('stirling1', n, k))).toEqual(row));
     // A048994 is the signed triangle s(n,k) = (-1)^(n-k) c(n,k): row 4 is 0, -6, 11, -6, 1.
     const a048994row4 = [0, -6, 11, -6, 1];
@@ -118,7 +128,9 @@ describe('Stirling and Bell numbers', () => {
   });
   it('stirling2 equals the explicit formula (1/k!) sum (-1)^j C(k,j) (k-j)^n (second algorithm), past the cache', () => {
     const explicit = (n: number, k: number): bigint => {
-      let s = 0n, c = 1n, f = 1n;
+      let s = 0n,
+        c = 1n,
+        f = 1n;
       for (let j = 0; j <= k; j++) {
         s += (j % 2 === 0 ? 1n : -1n) * c * BigInt(k - j) ** BigInt(n);
         c = (c * BigInt(k - j)) / BigInt(j + 1);
@@ -126,11 +138,13 @@ describe('Stirling and Bell numbers', () => {
       for (let i = 2; i <= k; i++) f *= BigInt(i);
       return s / f;
     };
-    for (const n of [1, 2, 7, 15, 40, 199, 200, 201, 260]) for (const k of [1, 2, 3, Math.floor(n / 2), n - 1, n]) if (k >= 1) expect(big(call('stirling2', n, k))).toBe(explicit(n, k));
+    for (const n of [1, 2, 7, 15, 40, 199, 200, 201, 260])
+      for (const k of [1, 2, 3, Math.floor(n / 2), n - 1, n]) if (k >= 1) expect(big(call('stirling2', n, k))).toBe(explicit(n, k));
   });
   it('row sums: sum_k c(n,k) = n! and sum_k S(n,k) = B(n)', () => {
     for (const n of [0, 1, 5, 10, 50, 210]) {
-      let s1 = 0n, s2 = 0n;
+      let s1 = 0n,
+        s2 = 0n;
       for (let k = 0; k <= n; k++) {
         s1 += big(call('stirling1', n, k));
         s2 += big(call('stirling2', n, k));
@@ -158,7 +172,8 @@ describe('fibonacci', () => {
     expect(a000045.map((_, n) => call('fibonacci', n))).toEqual(a000045);
   });
   it('fast doubling agrees with the plain recurrence (second algorithm) up to n = 500', () => {
-    let a = 0n, b = 1n;
+    let a = 0n,
+      b = 1n;
     for (let n = 0; n <= 500; n++) {
       const f = call('fibonacci', n);
       expect(big(f)).toBe(a);
@@ -177,7 +192,8 @@ describe('integer helpers', () => {
   it('gcd * lcm = |a * b| (fast-check, with big integers)', () => {
     fc.assert(
       fc.property(intArb, intArb, (a, b) => {
-        const g = big(call('gcd', a, b)), l = big(call('lcm', a, b));
+        const g = big(call('gcd', a, b)),
+          l = big(call('lcm', a, b));
         const p = big(a) * big(b);
         expect(g * l).toBe(p < 0n ? -p : p);
         expect(g >= 0n && l >= 0n).toBe(true);
@@ -191,13 +207,20 @@ describe('integer helpers', () => {
   });
   it('quo and mod are floor division: a = b*quo + mod with mod between 0 and b (fast-check)', () => {
     fc.assert(
-      fc.property(intArb, intArb.filter((b) => b !== 0), (a, b) => {
-        const q = big(call('quo', a, b)), r = big(call('mod', a, b)), A = big(a), B = big(b);
-        expect(B * q + r).toBe(A);
-        if (B > 0n) expect(r >= 0n && r < B).toBe(true);
-        else expect(r <= 0n && r > B).toBe(true);
-        expect(normal(call('quo', a, b)) && normal(call('mod', a, b))).toBe(true);
-      }),
+      fc.property(
+        intArb,
+        intArb.filter((b) => b !== 0),
+        (a, b) => {
+          const q = big(call('quo', a, b)),
+            r = big(call('mod', a, b)),
+            A = big(a),
+            B = big(b);
+          expect(B * q + r).toBe(A);
+          if (B > 0n) expect(r >= 0n && r < B).toBe(true);
+          else expect(r <= 0n && r > B).toBe(true);
+          expect(normal(call('quo', a, b)) && normal(call('mod', a, b))).toBe(true);
+        },
+      ),
     );
     expect(call('quo', -7, 2)).toBe(-4);
     expect(call('mod', -7, 3)).toBe(2);
@@ -231,7 +254,8 @@ describe('integer helpers', () => {
     fc.assert(
       fc.property(fc.bigInt({ min: -(10n ** 20n), max: 10n ** 20n }), fc.bigInt({ min: 1n, max: 10n ** 6n }), (p, q) => {
         const x = makeRat(p, q);
-        const f = big(call('floor', x)), c = big(call('ceil', x));
+        const f = big(call('floor', x)),
+          c = big(call('ceil', x));
         expect(f * q <= p && p < (f + 1n) * q).toBe(true);
         expect(c).toBe(-big(call('floor', makeRat(-p, q))));
       }),
@@ -274,7 +298,10 @@ describe('isPrime', () => {
     for (const p of ps) for (const q of ps) expect(call('isPrime', normBig(BigInt(p) * BigInt(q)))).toBe(false);
     const small = primesNear(8_000, 20);
     for (const p of small) for (const q of small) expect(call('isPrime', p * q)).toBe(false);
-    fc.assert(fc.property(fc.integer({ min: 2 ** 26, max: 2 ** 36 }), (n) => call('isPrime', n) === isPrimeTrial(n)), { numRuns: 300 });
+    fc.assert(
+      fc.property(fc.integer({ min: 2 ** 26, max: 2 ** 36 }), (n) => call('isPrime', n) === isPrimeTrial(n)),
+      { numRuns: 300 },
+    );
   });
   it('the strong-probable-prime test is fooled exactly where OEIS A014233 says, and isPrime is not', () => {
     // A014233: the least odd composites that are strong pseudoprimes to all of the first k prime bases.

@@ -29,7 +29,7 @@ describe('partition functions', () => {
         expect((call('conjugate', c) as Partition).parts).toEqual(l.parts);
       }
   });
-  it('hooks and contents (Macdonald I.1 Examples 1 and 3: sum of hooks = n(lambda) + n(lambda\') + |lambda|)', () => {
+  it("hooks and contents (Macdonald I.1 Examples 1 and 3: sum of hooks = n(lambda) + n(lambda') + |lambda|)", () => {
     expect(call('hooks', P(4, 2, 1))).toEqual([6, 4, 2, 1, 3, 1, 1]);
     expect(call('contents', P(2, 2))).toEqual([0, 1, -1, 0]);
     const nOf = (parts: number[]) => parts.reduce((s, p, i) => s + i * p, 0);
@@ -50,8 +50,8 @@ describe('partition functions', () => {
         const f = call('syt', l) as number;
         if (n <= 7) expect(BigInt(f)).toBe(BigInt(listAll(standardTableaux, { parts: l.parts, n }).length));
         s += f;
-        if (n <= 5) for (let m = 0; m <= 3; m++)
-          expect(call('ssytCount', l, m)).toBe(listAll(semistandardTableaux, { parts: l.parts, m, n }).length);
+        if (n <= 5)
+          for (let m = 0; m <= 3; m++) expect(call('ssytCount', l, m)).toBe(listAll(semistandardTableaux, { parts: l.parts, m, n }).length);
       }
       expect(s).toBe(A000085[n]);
     }
@@ -70,7 +70,8 @@ describe('partition functions', () => {
     fc.assert(
       fc.property(fc.integer({ min: 1, max: 9 }), fc.nat(), fc.nat(), (n, i, j) => {
         const all = listAll(partitions, { n });
-        const a = all[i % all.length], b = all[j % all.length];
+        const a = all[i % all.length],
+          b = all[j % all.length];
         // Reverse lexicographic enumeration: if a dominates b then a comes first (or a = b).
         if (call('dominates', a, b) && !a.equals(b)) expect(all.indexOf(a)).toBeLessThan(all.indexOf(b));
         if (call('dominates', a, b) && call('dominates', b, a)) expect(a.equals(b)).toBe(true);

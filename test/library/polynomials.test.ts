@@ -12,8 +12,12 @@ import { polyArb, scalarArb, VARS } from '../algebra/arbitraries.js';
 
 const call = (name: string, ...args: Value[]): Value => getFunction(name)!.impl(...args);
 const text = (v: Value) => polyText(v as PolyLike);
-const q = variable('q'), x = variable('x'), y = variable('y');
-const x1 = variable('x[1]'), x2 = variable('x[2]'), x3 = variable('x[3]');
+const q = variable('q'),
+  x = variable('x'),
+  y = variable('y');
+const x1 = variable('x[1]'),
+  x2 = variable('x[2]'),
+  x3 = variable('x[3]');
 
 describe('coeff, coefficients, terms, degree', () => {
   const p = padd(pmul(2, pmul(q, q)), padd(pmul(-1, pmul(q, x1)), 5)); // 2q^2 - q x[1] + 5
@@ -41,7 +45,12 @@ describe('coeff, coefficients, terms, degree', () => {
     fc.assert(
       fc.property(polyArb, (a) => {
         const ts = call('terms', a) as PolyLike[];
-        expect(pequals(ts.reduce((s: PolyLike, t) => padd(s, t), 0), a)).toBe(true);
+        expect(
+          pequals(
+            ts.reduce((s: PolyLike, t) => padd(s, t), 0),
+            a,
+          ),
+        ).toBe(true);
         const cs = call('coefficients', a) as Scalar[];
         expect(cs.length).toBe(ts.length);
       }),
@@ -63,7 +72,10 @@ describe('subs', () => {
     expect(text(r)).toBe('2*x[1] + x[2]');
   });
   it('substitution is a ring homomorphism (fast-check)', () => {
-    const valueArb = fc.oneof(scalarArb.map((s) => s as PolyLike), polyArb);
+    const valueArb = fc.oneof(
+      scalarArb.map((s) => s as PolyLike),
+      polyArb,
+    );
     fc.assert(
       fc.property(polyArb, polyArb, fc.constantFrom(...VARS), valueArb, (a, b, v, val) => {
         const s = (z: PolyLike) => call('subs', z, variable(v), val) as PolyLike;

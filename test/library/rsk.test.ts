@@ -26,7 +26,8 @@ describe('rsk(w)', () => {
       const shapes = new Map<string, number>();
       for (const w of listAll(permutations, { n })) {
         const { P, Q } = rskRows(w.a);
-        const tp = Tableau.from(P), tq = Tableau.from(Q);
+        const tp = Tableau.from(P),
+          tq = Tableau.from(Q);
         expect(tp.isStandard() && tq.isStandard()).toBe(true);
         expect(tp.shapeParts()).toEqual(tq.shapeParts());
         seen.add(key(P) + '|' + key(Q));
@@ -50,14 +51,21 @@ describe('rsk(w)', () => {
   });
   it('words give a semistandard P and a standard Q (RSK for words, Stanley EC2 §7.11)', () => {
     const { P, Q } = rskRows([2, 1, 1, 3, 2]);
-    expect(P).toEqual([[1, 1, 2], [2, 3]]);
+    expect(P).toEqual([
+      [1, 1, 2],
+      [2, 3],
+    ]);
     expect(Tableau.from(Q).isStandard()).toBe(true);
   });
   it('the registered functions take permutations and return [P, Q] and the shape', () => {
     const [P, Q] = getFunction('rsk')!.impl(new Permutation([3, 1, 2])) as Tableau[];
     expect(P.toText()).toBe('tableau([[1, 2], [3]])');
     expect(Q.toText()).toBe('tableau([[1, 3], [2]])');
-    expect(getFunction('rskShape')!.impl(new Permutation([1, 2, 3])).toString()).toBeDefined();
+    expect(
+      getFunction('rskShape')!
+        .impl(new Permutation([1, 2, 3]))
+        .toString(),
+    ).toBeDefined();
     expect(() => getFunction('rsk')!.impl('abc')).toThrow(/permutation, a word or a list/);
   });
 });

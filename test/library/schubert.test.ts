@@ -12,7 +12,9 @@ import type { Value } from '../../src/values/value.js';
 
 const call = (name: string, ...args: Value[]): Value => getFunction(name)!.impl(...args);
 const text = (v: Value) => polyText(v as PolyLike);
-const x = variable('x'), y = variable('y'), q = variable('q');
+const x = variable('x'),
+  y = variable('y'),
+  q = variable('q');
 const xi = (i: number) => variable(`x[${i}]`);
 const perm = (a: number[]) => Permutation.from(a);
 

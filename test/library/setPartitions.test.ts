@@ -15,8 +15,15 @@ const sp = (blocks: number[][]) => SetPartition.fromBlocks(blocks);
 
 describe('set partition functions', () => {
   it('arcs, crossings and nestings of worked examples (Chen et al., Trans. AMS 359 (2007), §1)', () => {
-    const s = sp([[1, 3, 4], [2, 5]]);
-    expect(call('partitionArcs', s)).toEqual([[1, 3], [2, 5], [3, 4]]);
+    const s = sp([
+      [1, 3, 4],
+      [2, 5],
+    ]);
+    expect(call('partitionArcs', s)).toEqual([
+      [1, 3],
+      [2, 5],
+      [3, 4],
+    ]);
     expect(call('crossings', s)).toBe(1); // (1,3) and (2,5)
     expect(call('nestings', s)).toBe(1); // (3,4) inside (2,5)
     expect(call('isNoncrossing', s)).toBe(false);

@@ -18,7 +18,14 @@ describe('tableau functions', () => {
     expect(getFunction('readingWord')!.impl(T)).toEqual([4, 2, 3, 1, 1, 2, 4]);
   });
   it('promotion has order n on rectangular standard tableaux (Haiman, Discrete Math. 99 (1992); Rhoades, J. Combin. Theory A 117 (2010))', () => {
-    for (const parts of [[2, 2], [3, 3], [2, 2, 2], [4, 4], [3, 3, 3], [4, 4, 4]]) {
+    for (const parts of [
+      [2, 2],
+      [3, 3],
+      [2, 2, 2],
+      [4, 4],
+      [3, 3, 3],
+      [4, 4, 4],
+    ]) {
       const n = parts.reduce((a, b) => a + b, 0);
       for (const t of syt(parts)) {
         let r = t.rows;
@@ -63,7 +70,17 @@ describe('tableau functions', () => {
   });
   it('constructors: tableau, asm and pipeDream', () => {
     expect(() => getFunction('tableau')!.impl([[1, 2], [1]])).toThrow(/column 1/);
-    expect(() => getFunction('asm')!.impl([[1, 0], [1, 0]])).toThrow(/alternat/);
-    expect(() => getFunction('pipeDream')!.impl([[1, 1], [1, 1]])).toThrow(/twice/);
+    expect(() =>
+      getFunction('asm')!.impl([
+        [1, 0],
+        [1, 0],
+      ]),
+    ).toThrow(/alternat/);
+    expect(() =>
+      getFunction('pipeDream')!.impl([
+        [1, 1],
+        [1, 1],
+      ]),
+    ).toThrow(/twice/);
   });
 });

@@ -19,12 +19,18 @@ import type { Value } from '../../src/values/value.js';
 const call = (name: string, ...args: Value[]): Value => getFunction(name)!.impl(...args);
 const syts = (shape: number[]) => {
   const out: Tableau[] = [];
-  standardTableaux.enumerate(standardTableaux.prepare([new Partition(shape)] as never), (t: Tableau) => void out.push(new Tableau(t.rows.map((r) => r.slice()))));
+  standardTableaux.enumerate(
+    standardTableaux.prepare([new Partition(shape)] as never),
+    (t: Tableau) => void out.push(new Tableau(t.rows.map((r) => r.slice()))),
+  );
   return out;
 };
 const ssyts = (shape: number[], m: number) => {
   const out: Tableau[] = [];
-  semistandardTableaux.enumerate(semistandardTableaux.prepare([new Partition(shape), m] as never), (t: Tableau) => void out.push(new Tableau(t.rows.map((r) => r.slice()))));
+  semistandardTableaux.enumerate(
+    semistandardTableaux.prepare([new Partition(shape), m] as never),
+    (t: Tableau) => void out.push(new Tableau(t.rows.map((r) => r.slice()))),
+  );
   return out;
 };
 const shapes = (n: number) => {
@@ -48,7 +54,9 @@ describe('descents, maj and transpose of standard tableaux', () => {
         let prod = dist;
         for (const h of hookLengths(sh).flat()) {
           const out = new Array(prod.length + h - 1).fill(0);
-          prod.forEach((c, d) => { for (let e = 0; e < h; e++) out[d + e] += c; });
+          prod.forEach((c, d) => {
+            for (let e = 0; e < h; e++) out[d + e] += c;
+          });
           prod = out;
         }
         while (prod.length && prod[prod.length - 1] === 0) prod.pop();
@@ -63,7 +71,8 @@ describe('descents, maj and transpose of standard tableaux', () => {
           const tt = call('transpose', t) as Tableau;
           expect(tt.shapeParts()).toEqual(conjugateParts(sh));
           expect(tt.isStandard()).toBe(true);
-          const d = call('descents', t) as number[], dt = call('descents', tt) as number[];
+          const d = call('descents', t) as number[],
+            dt = call('descents', tt) as number[];
           expect([...d, ...dt].sort((a, b) => a - b)).toEqual(Array.from({ length: n - 1 }, (_, i) => i + 1));
           expect((call('des', t) as number) + (call('des', tt) as number)).toBe(n - 1);
         }
@@ -89,12 +98,19 @@ describe('promotion and evacuation by Bender–Knuth involutions', () => {
   });
 
   it('on semistandard tableaux: evacuation is an involution, evacuation o promotion = promotion^-1 o evacuation (Stanley, EJC 16(2) (2009), §2), each a bijection of SSYT(lambda, m)', () => {
-    for (const [sh, m] of [[[2, 1], 3], [[3, 1], 4], [[2, 2], 4], [[3, 2, 1], 4], [[2, 1, 1], 5]] as [number[], number][]) {
+    for (const [sh, m] of [
+      [[2, 1], 3],
+      [[3, 1], 4],
+      [[2, 2], 4],
+      [[3, 2, 1], 4],
+      [[2, 1, 1], 5],
+    ] as [number[], number][]) {
       const all = ssyts(sh, m);
       const keys = new Set(all.map((t) => key(t.rows)));
       const promoted = new Set<string>();
       for (const t of all) {
-        const p = promotionBK(t.rows, m), e = evacuationBK(t.rows, m);
+        const p = promotionBK(t.rows, m),
+          e = evacuationBK(t.rows, m);
         expect(keys.has(key(p))).toBe(true);
         promoted.add(key(p));
         expect(key(evacuationBK(e, m))).toBe(key(t.rows));
@@ -106,7 +122,12 @@ describe('promotion and evacuation by Bender–Knuth involutions', () => {
   });
 
   it('promotion^m = id on semistandard tableaux of rectangular shape with entries in 1..m (Rhoades, J. Combin. Theory A 117 (2010))', () => {
-    for (const [sh, m] of [[[2, 2], 3], [[2, 2], 4], [[3, 3], 4], [[2, 2, 2], 4]] as [number[], number][]) {
+    for (const [sh, m] of [
+      [[2, 2], 3],
+      [[2, 2], 4],
+      [[3, 3], 4],
+      [[2, 2, 2], 4],
+    ] as [number[], number][]) {
       for (const t of ssyts(sh, m)) {
         let rows = t.rows;
         for (let k = 0; k < m; k++) rows = promotionBK(rows, m);

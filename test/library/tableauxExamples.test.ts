@@ -40,8 +40,15 @@ describe('examples', () => {
     // p(5) = 7 (A000041), B(4) = 15 (A000110), C(4) = 14 (A000108), A(4) = 42 (A005130),
     // f^(3,2) = 5, s_(2,1)(1,1,1) = 8, R(321) = 2, S_1432(1,1,1,1) = 5, partial perms 2x2 = 7 (A002720).
     const expected: [{ example: string }, string][] = [
-      [partitions, '7'], [setPartitions, '15'], [dyckPaths, '14'], [asms, '42'], [standardTableaux, '5'],
-      [semistandardTableaux, '8'], [reducedWords, '2'], [pipeDreams, '5'], [partialPermutations, '7'],
+      [partitions, '7'],
+      [setPartitions, '15'],
+      [dyckPaths, '14'],
+      [asms, '42'],
+      [standardTableaux, '5'],
+      [semistandardTableaux, '8'],
+      [reducedWords, '2'],
+      [pipeDreams, '5'],
+      [partialPermutations, '7'],
     ];
     for (const [f, v] of expected) expect(ev(f.example)).toBe(v);
   });

@@ -19,7 +19,9 @@ export interface Quality {
 export const SEEDS = 50;
 
 export function measure(yaml: string, sizeName: string, minSize: number, expected: Record<string, unknown>): Quality {
-  let atSize = 0, exact = 0, worstMs = 0;
+  let atSize = 0,
+    exact = 0,
+    worstMs = 0;
   const misses: string[] = [];
   for (let s = 1; s <= SEEDS; s++) {
     const r = check(yaml, { seed: String(s), exhaustive: false });

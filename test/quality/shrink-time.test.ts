@@ -23,7 +23,8 @@ function randomPermutation(seed: number, n: number): number[] {
 describe('shrink time at size 25', () => {
   it('shrinkCase on failing permutations of 25 takes under a second and reaches 132', () => {
     const cc = compileOne(doc({ for: ['n: 1..2', 'w: permutations(n)'], claim: 'maj(w) <= inv(w)', sample: ['n: 25..25'] }));
-    let worst = 0, tried = 0;
+    let worst = 0,
+      tried = 0;
     for (let seed = 1; tried < 10; seed++) {
       const w = randomPermutation(seed, 25);
       if (B.maj(w) <= B.inv(w)) continue;

@@ -6,7 +6,13 @@ import '../../src/families/index.js';
 import { loadConjectureFile } from '../../src/language/conjecture/load-file.js';
 import type { ConjectureResult } from '../../src/runner/result.js';
 import {
-  conjectureText, counterexampleRecord, counterexampleText, parseCounterexampleFile, readRegressionCase, readRegressionEncoded, writeCounterexampleFile,
+  conjectureText,
+  counterexampleRecord,
+  counterexampleText,
+  parseCounterexampleFile,
+  readRegressionCase,
+  readRegressionEncoded,
+  writeCounterexampleFile,
 } from '../../src/records/counterexample-file.js';
 import { conjectureHash } from '../../src/language/conjecture/conjecture-hash.js';
 
@@ -37,11 +43,24 @@ const hash = conjectureHash(spec);
 
 function result(): ConjectureResult {
   return {
-    id: spec.id, file: spec.file, hash, expect: 'fails', outcome: 'fails', checked: [], error: null, ms: 1,
+    id: spec.id,
+    file: spec.file,
+    hash,
+    expect: 'fails',
+    outcome: 'fails',
+    checked: [],
+    error: null,
+    ms: 1,
     counterexample: {
-      phase: 'sample', size: { n: 4 }, bindings: { n: 4, w: { permutation: [1, 2, 3, 4] } },
-      values: { p: 0, big: '123456789012345678901234567890' }, sides: null, failuresAtSize: null,
-      shrinkSteps: 7, seed: 'abc', shrunkFrom: { n: 9 },
+      phase: 'sample',
+      size: { n: 4 },
+      bindings: { n: 4, w: { permutation: [1, 2, 3, 4] } },
+      values: { p: 0, big: '123456789012345678901234567890' },
+      sides: null,
+      failuresAtSize: null,
+      shrinkSteps: 7,
+      seed: 'abc',
+      shrunkFrom: { n: 9 },
     },
   };
 }

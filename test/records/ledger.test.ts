@@ -13,11 +13,20 @@ const tmp = () => tempDir('hunch-ledger-');
 describe('ledger records', () => {
   test('a piece becomes a record with its outcome', () => {
     const ctx = { tool: '0.1.0', host: 'h', run: 'r' };
-    const r = pieceRecord('c1', H1, { phase: 'exhaustive', size: { n: 3 }, cases: 6, failures: 1, skipped: 0, ms: 1.234 }, ctx, new Date(0));
+    const r = pieceRecord(
+      'c1',
+      H1,
+      { phase: 'exhaustive', size: { n: 3 }, cases: 6, failures: 1, skipped: 0, ms: 1.234 },
+      ctx,
+      new Date(0),
+    );
     expect(r).toMatchObject({ v: 1, id: 'c1', outcome: 'fails', ms: 1.2, at: '1970-01-01T00:00:00.000Z' });
-    expect(pieceRecord('c1', H1, { phase: 'sample', size: { n: 9 }, cases: 6, failures: 0, skipped: 0, ms: 1, seed: 's', shard: '2/4' }, ctx))
-      .toMatchObject({ outcome: 'holds', seed: 's', shard: '2/4' });
-    expect(pieceRecord('c1', H1, { phase: 'sample', size: { n: 9 }, cases: 6, failures: 0, skipped: 0, ms: 1, partial: true }, ctx).outcome).toBe('incomplete');
+    expect(
+      pieceRecord('c1', H1, { phase: 'sample', size: { n: 9 }, cases: 6, failures: 0, skipped: 0, ms: 1, seed: 's', shard: '2/4' }, ctx),
+    ).toMatchObject({ outcome: 'holds', seed: 's', shard: '2/4' });
+    expect(
+      pieceRecord('c1', H1, { phase: 'sample', size: { n: 9 }, cases: 6, failures: 0, skipped: 0, ms: 1, partial: true }, ctx).outcome,
+    ).toBe('incomplete');
   });
 
   test('shards parse', () => {
@@ -31,12 +40,24 @@ describe('ledger records', () => {
     fc.assert(
       fc.property(
         fc.record({
-          cases: fc.nat(), skipped: fc.nat(), n: fc.integer({ min: -5, max: 50 }), shard: fc.option(fc.integer({ min: 1, max: 9 })),
-          seed: fc.option(fc.string()), host: fc.string(), ms: fc.double({ min: 0, max: 1e9, noNaN: true }),
+          cases: fc.nat(),
+          skipped: fc.nat(),
+          n: fc.integer({ min: -5, max: 50 }),
+          shard: fc.option(fc.integer({ min: 1, max: 9 })),
+          seed: fc.option(fc.string()),
+          host: fc.string(),
+          ms: fc.double({ min: 0, max: 1e9, noNaN: true }),
         }),
         (x) => {
-          const r = rec({ cases: x.cases, skipped: x.skipped, size: { n: x.n }, host: x.host, ms: x.ms,
-            ...(x.shard ? { shard: `${x.shard}/9` } : {}), ...(x.seed !== null ? { seed: x.seed } : {}) });
+          const r = rec({
+            cases: x.cases,
+            skipped: x.skipped,
+            size: { n: x.n },
+            host: x.host,
+            ms: x.ms,
+            ...(x.shard ? { shard: `${x.shard}/9` } : {}),
+            ...(x.seed !== null ? { seed: x.seed } : {}),
+          });
           const back = parseLedger(recordLine(r) + '\n', 'l').records[0];
           expect(back).toEqual(r);
           expect(recordLine(back)).toBe(recordLine(r));
@@ -48,7 +69,8 @@ describe('ledger records', () => {
   test('appends and reads back; a missing ledger is empty', () => {
     const p = join(tmp(), 'l.jsonl');
     expect(readLedger(p)).toEqual({ records: [], lines: [], warnings: [] });
-    const a = rec(), b = rec({ size: { n: 2 } });
+    const a = rec(),
+      b = rec({ size: { n: 2 } });
     appendRecords(p, [a]);
     appendRecords(p, [b]);
     expect(readLedger(p).records).toEqual([a, b]);

@@ -12,8 +12,13 @@ const tmp = () => tempDir('hunch-merge-');
 
 describe('merge', () => {
   test('exact duplicates are removed; different records kept, in time order', () => {
-    const a = rec(), b = rec({ size: { n: 2 } }), c = rec({ size: { n: 3 } });
-    const m = mergeRecords([[b, a], [a, c]]);
+    const a = rec(),
+      b = rec({ size: { n: 2 } }),
+      c = rec({ size: { n: 3 } });
+    const m = mergeRecords([
+      [b, a],
+      [a, c],
+    ]);
     expect(m.records).toEqual([a, b, c]);
     expect(m.duplicates).toBe(1);
   });
@@ -21,7 +26,9 @@ describe('merge', () => {
   test('coverage per size: complete from slices or whole, missing slices named', () => {
     const rs = [
       rec({ size: { n: 4 } }),
-      rec({ size: { n: 5 }, shard: '1/3', cases: 10 }), rec({ size: { n: 5 }, shard: '2/3', cases: 10 }), rec({ size: { n: 5 }, shard: '3/3', cases: 10 }),
+      rec({ size: { n: 5 }, shard: '1/3', cases: 10 }),
+      rec({ size: { n: 5 }, shard: '2/3', cases: 10 }),
+      rec({ size: { n: 5 }, shard: '3/3', cases: 10 }),
       rec({ size: { n: 6 }, shard: '2/3', cases: 10 }),
     ];
     const cov = coverageOf(rs);
@@ -35,7 +42,9 @@ describe('merge', () => {
 
   test('merging files keeps what OUT already holds and writes it atomically', () => {
     const d = tmp();
-    const a = rec({ shard: '1/2' }), b = rec({ shard: '2/2' }), old = rec({ id: 'c2' });
+    const a = rec({ shard: '1/2' }),
+      b = rec({ shard: '2/2' }),
+      old = rec({ id: 'c2' });
     appendRecords(join(d, 'a.jsonl'), [a]);
     appendRecords(join(d, 'b.jsonl'), [b, a]);
     appendRecords(join(d, 'out.jsonl'), [old]);

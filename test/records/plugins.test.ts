@@ -51,7 +51,9 @@ describe('project config', () => {
     const c = parseConfig('/p', 'hunch.yaml', 'plugins: [a.mjs]\nledger: l.jsonl\n');
     expect(c.plugins).toEqual(['/p/a.mjs']);
     expect(c.ledger).toBe('/p/l.jsonl');
-    expect(() => parseConfig('/p', 'hunch.yaml', 'plugin: [a.mjs]\n')).toThrow(/unknown key "plugin" in hunch.yaml; did you mean "plugins"\?/);
+    expect(() => parseConfig('/p', 'hunch.yaml', 'plugin: [a.mjs]\n')).toThrow(
+      /unknown key "plugin" in hunch.yaml; did you mean "plugins"\?/,
+    );
   });
 });
 
@@ -80,12 +82,12 @@ describe('plugins', () => {
     const put = (name: string, text: string) => (writeFileSync(join(d, name), text), join(d, name));
     await expect(loadPlugin(join(d, 'nope.mjs'), d)).rejects.toThrow(/nope\.mjs listed in hunch\.yaml does not exist/);
     await expect(loadPlugin(put('none.mjs', 'export const x = 1;'), d)).rejects.toThrow(/exports no "functions"/);
-    await expect(loadPlugin(put('clash.mjs', 'export const functions = [{ name: "inv", params: ["permutation"], impl: () => 0 }];'), d)).rejects.toThrow(
-      /defines inv, which already exists/,
-    );
-    await expect(loadPlugin(put('untyped.mjs', 'export const functions = [{ name: "f1", params: [{ name: "x" }], impl: () => 0 }];'), d)).rejects.toThrow(
-      /without a type/,
-    );
+    await expect(
+      loadPlugin(put('clash.mjs', 'export const functions = [{ name: "inv", params: ["permutation"], impl: () => 0 }];'), d),
+    ).rejects.toThrow(/defines inv, which already exists/);
+    await expect(
+      loadPlugin(put('untyped.mjs', 'export const functions = [{ name: "f1", params: [{ name: "x" }], impl: () => 0 }];'), d),
+    ).rejects.toThrow(/without a type/);
     await expect(loadPlugin(put('p.cjs', ''), d)).rejects.toThrow(/must be a JavaScript module/);
     if (!(process as any).features?.typescript)
       await expect(loadPlugin(put('p.ts', ''), d)).rejects.toThrow(/TypeScript, which this Node .* cannot load directly; compile it/);

@@ -32,7 +32,11 @@ describe('status', () => {
   });
 
   test('slices of different K do not combine', () => {
-    const s = conjectureStatus(C, [rec({ size: { n: 5 }, shard: '1/2' }), rec({ size: { n: 5 }, shard: '2/3' }), rec({ size: { n: 5 }, shard: '3/3' })]);
+    const s = conjectureStatus(C, [
+      rec({ size: { n: 5 }, shard: '1/2' }),
+      rec({ size: { n: 5 }, shard: '2/3' }),
+      rec({ size: { n: 5 }, shard: '3/3' }),
+    ]);
     expect(s.exhaustive).toEqual([]);
   });
 
@@ -58,7 +62,9 @@ describe('status', () => {
     const s = conjectureStatus(fails, rs);
     expect(s.latest?.outcome).toBe('fails');
     expect(s.agrees).toBe(true);
-    expect(formatStatus(computeStatus([fails], rs), plain)).toContain('n = 1..2 exhaustive (2 cases); n = 3 exhaustive (6 cases, 1 failing)');
+    expect(formatStatus(computeStatus([fails], rs), plain)).toContain(
+      'n = 1..2 exhaustive (2 cases); n = 3 exhaustive (6 cases, 1 failing)',
+    );
     expect(conjectureStatus(C, rs).agrees).toBe(false);
   });
 
@@ -70,7 +76,10 @@ describe('status', () => {
       rec({ phase: 'sample', size: { n: 10 }, cases: 100, seed: 'a' }),
     ];
     const s = conjectureStatus(C, rs);
-    expect(s.sampled).toMatchObject([{ size: { n: 9 }, cases: 150, seeds: ['a', 'b'] }, { size: { n: 10 }, cases: 100 }]);
+    expect(s.sampled).toMatchObject([
+      { size: { n: 9 }, cases: 150, seeds: ['a', 'b'] },
+      { size: { n: 10 }, cases: 100 },
+    ]);
     expect(formatStatus(computeStatus([C], rs), plain)).toContain('n = 9..10 sampled (250 cases)');
   });
 

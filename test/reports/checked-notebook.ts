@@ -17,7 +17,9 @@ export function checkedNotebook(): CheckedNotebook {
   cpSync(join(ROOT, 'hunch.yaml'), join(dir, 'hunch.yaml'));
   const r = runCli(['check', '--allow-plugins'], { cwd: dir, timeout: 180_000 });
   if (r.code !== 0) throw new Error(`checking the notebook copy failed (exit ${r.code}):\n${r.stderr}\n${r.stdout.slice(-2000)}`);
-  const counterexamples = readdirSync(join(dir, 'counterexamples')).filter((f) => f.endsWith('.yaml')).sort();
+  const counterexamples = readdirSync(join(dir, 'counterexamples'))
+    .filter((f) => f.endsWith('.yaml'))
+    .sort();
   return { dir, counterexamples, dispose: () => rmSync(dir, { recursive: true, force: true }) };
 }
 

@@ -96,7 +96,8 @@ export function partitionsOf(n: number, max = n): number[][] {
 
 /** LIBRARY.md §1, partitions: size, length, then reverse lexicographic (lex larger is simpler). */
 export function comparePartitions(a: number[], b: number[]): number {
-  const sa = a.reduce((s, x) => s + x, 0), sb = b.reduce((s, x) => s + x, 0);
+  const sa = a.reduce((s, x) => s + x, 0),
+    sb = b.reduce((s, x) => s + x, 0);
   return sa - sb || a.length - b.length || lex(b, a);
 }
 

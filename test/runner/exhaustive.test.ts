@@ -55,7 +55,9 @@ describe('the simplest failing case, not the first one enumerated', () => {
     const failing = B.permutationsOf(4).filter(pred);
     const expected = B.minBy(failing, B.comparePerms);
     expect(failing[0]).not.toEqual(expected); // the test is meaningful: enumeration order differs
-    const r = check(doc({ for: ['n: 4..4', 'w: permutations(n)'], claim: 'not ((w[1] == 2 and inv(w) == 3) or (w[1] == 3 and inv(w) == 2))' }));
+    const r = check(
+      doc({ for: ['n: 4..4', 'w: permutations(n)'], claim: 'not ((w[1] == 2 and inv(w) == 3) or (w[1] == 3 and inv(w) == 2))' }),
+    );
     expect(r.counterexample!.bindings).toEqual({ n: 4, w: perm(expected) });
     expect(expected).toEqual([3, 1, 2, 4]);
     expect(r.counterexample!.failuresAtSize).toBe(failing.length);
@@ -81,11 +83,17 @@ describe('the simplest failing case, not the first one enumerated', () => {
     const failing = all.filter(pred);
     const expected = B.minBy(failing, B.compareMatchings);
     expect(failing[0]).not.toEqual(expected);
-    expect(expected).toEqual([[1, 2], [3, 6], [4, 5]]);
-    const r = check(doc({
-      for: ['n: 3..3', 'm: matchings(n)'],
-      claim: 'not ((partner(m, 1) == 2 and crossings(m) == 1) or (crossings(m) == 0 and nestings(m) == 1))',
-    }));
+    expect(expected).toEqual([
+      [1, 2],
+      [3, 6],
+      [4, 5],
+    ]);
+    const r = check(
+      doc({
+        for: ['n: 3..3', 'm: matchings(n)'],
+        claim: 'not ((partner(m, 1) == 2 and crossings(m) == 1) or (crossings(m) == 0 and nestings(m) == 1))',
+      }),
+    );
     expect(r.counterexample!.bindings).toEqual({ n: 3, m: { matching: expected } });
     expect(r.counterexample!.failuresAtSize).toBe(failing.length);
   });
@@ -97,10 +105,12 @@ describe('the simplest failing case, not the first one enumerated', () => {
     const expected = B.minBy(failing, B.comparePartitions);
     expect(failing[0]).toEqual([4, 1, 1]);
     expect(expected).toEqual([3, 3]);
-    const r = check(doc({
-      for: ['n: 6..6', 'lambda: partitions(n)'],
-      claim: 'not ((lambda[1] == 4 and length(lambda) == 3) or (lambda[1] <= 3 and length(lambda) == 2))',
-    }));
+    const r = check(
+      doc({
+        for: ['n: 6..6', 'lambda: partitions(n)'],
+        claim: 'not ((lambda[1] == 4 and length(lambda) == 3) or (lambda[1] <= 3 and length(lambda) == 2))',
+      }),
+    );
     expect(r.counterexample!.bindings).toEqual({ n: 6, lambda: { partition: expected } });
     expect(r.counterexample!.failuresAtSize).toBe(2);
   });
@@ -108,7 +118,10 @@ describe('the simplest failing case, not the first one enumerated', () => {
   it('partitions: among equal lengths, the reverse-lexicographically first (the larger first part)', () => {
     // Every partition of 6 with 3 parts fails: [4,1,1], [3,2,1], [2,2,2]; the simplest is [4,1,1].
     const r = check(doc({ for: ['n: 6..6', 'lambda: partitions(n)'], claim: 'length(lambda) != 3' }));
-    const expected = B.minBy(B.partitionsOf(6).filter((l) => l.length === 3), B.comparePartitions);
+    const expected = B.minBy(
+      B.partitionsOf(6).filter((l) => l.length === 3),
+      B.comparePartitions,
+    );
     expect(expected).toEqual([4, 1, 1]);
     expect(r.counterexample!.bindings).toEqual({ n: 6, lambda: { partition: expected } });
     expect(r.counterexample!.failuresAtSize).toBe(3);
@@ -127,10 +140,12 @@ describe('the simplest failing case, not the first one enumerated', () => {
   it('several bindings are compared in `for` order: the simplest first binding wins', () => {
     // (1432, {}) is enumerated first; (2134, {1,2,3,4}) is simpler because w comes first in `for`
     // and 2134 has 1 inversion against 3.
-    const r = check(doc({
-      for: ['n: 4..4', 'w: permutations(n)', 's: subsets(n)'],
-      claim: 'not ((w == perm([1,4,3,2]) and len(s) == 0) or (w == perm([2,1,3,4]) and len(s) == 4))',
-    }));
+    const r = check(
+      doc({
+        for: ['n: 4..4', 'w: permutations(n)', 's: subsets(n)'],
+        claim: 'not ((w == perm([1,4,3,2]) and len(s) == 0) or (w == perm([2,1,3,4]) and len(s) == 4))',
+      }),
+    );
     expect(r.counterexample!.bindings).toEqual({ n: 4, w: perm([2, 1, 3, 4]), s: { subset: [1, 2, 3, 4] } });
     expect(r.counterexample!.failuresAtSize).toBe(2);
   });
@@ -246,12 +261,19 @@ describe('options', () => {
 
   it('sizes replaces the exhaustive range of the size', () => {
     const r = check(doc({ for: ['n: 1..8', 'w: permutations(n)'], claim: 'inv(w) >= 0' }), { sizes: new Map([['n', [3, 4]]]) });
-    expect(r.checked.map((p) => [p.size.n, p.cases])).toEqual([[3, 6], [4, 24]]);
+    expect(r.checked.map((p) => [p.size.n, p.cases])).toEqual([
+      [3, 6],
+      [4, 24],
+    ]);
   });
 
   it('sizes replaces the range of another range binding', () => {
     const r = check(doc({ for: ['n: 1..3', 'k: 0..n'], claim: 'k >= 0' }), { sizes: new Map([['k', [1, 2]]]) });
-    expect(r.checked.map((p) => [p.size.n, p.cases])).toEqual([[1, 2], [2, 2], [3, 2]]);
+    expect(r.checked.map((p) => [p.size.n, p.cases])).toEqual([
+      [1, 2],
+      [2, 2],
+      [3, 2],
+    ]);
   });
 
   it('exhaustive: false skips the phase', () => {
@@ -299,15 +321,19 @@ describe('budgets', () => {
   function budgeted(maxN = 9) {
     const finished: number[] = [];
     let out = false;
-    const r = check(doc({ for: [`n: 1..${maxN}`, 'w: permutations(n)'], claim: 'inv(w) >= 0' }), {}, {
-      shouldStop: () => (out ? 'budget' : null),
-      onProgress: (done, _total, label) => {
-        if (label.endsWith('n = 8') && done > 0 && finished.includes(7)) out = true;
+    const r = check(
+      doc({ for: [`n: 1..${maxN}`, 'w: permutations(n)'], claim: 'inv(w) >= 0' }),
+      {},
+      {
+        shouldStop: () => (out ? 'budget' : null),
+        onProgress: (done, _total, label) => {
+          if (label.endsWith('n = 8') && done > 0 && finished.includes(7)) out = true;
+        },
+        onPiece: (p) => {
+          finished.push(p.size.n);
+        },
       },
-      onPiece: (p) => {
-        finished.push(p.size.n);
-      },
-    });
+    );
     return { r, finished };
   }
 
@@ -334,12 +360,16 @@ describe('budgets', () => {
     // once the three exhaustive sizes are finished).
     let polls = 0;
     let exhaustiveDone = 0;
-    const r = check(doc({ for: ['n: 1..3', 'w: permutations(n)'], claim: 'inv(w) >= 0', sample: ['n: 10..12', 'count: 1000'] }), {}, {
-      shouldStop: () => (exhaustiveDone >= 3 && ++polls >= 4 ? 'interrupt' : null),
-      onPiece: (p) => {
-        if (p.phase === 'exhaustive') exhaustiveDone++;
+    const r = check(
+      doc({ for: ['n: 1..3', 'w: permutations(n)'], claim: 'inv(w) >= 0', sample: ['n: 10..12', 'count: 1000'] }),
+      {},
+      {
+        shouldStop: () => (exhaustiveDone >= 3 && ++polls >= 4 ? 'interrupt' : null),
+        onPiece: (p) => {
+          if (p.phase === 'exhaustive') exhaustiveDone++;
+        },
       },
-    });
+    );
     expect(r.outcome).toBe('incomplete');
     expect(r.stoppedBy).toBe('interrupt');
     const last = r.checked[r.checked.length - 1];

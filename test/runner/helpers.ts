@@ -28,7 +28,15 @@ export function check(yaml: string, opts: CheckOptions = {}, hooks: RunHooks = {
 }
 
 /** A conjecture document from its parts (keeps the tests short). */
-export function doc(parts: { id?: string; for: string[]; claim: string; where?: string; let?: string[]; sample?: string[]; extra?: string[] }): string {
+export function doc(parts: {
+  id?: string;
+  for: string[];
+  claim: string;
+  where?: string;
+  let?: string[];
+  sample?: string[];
+  extra?: string[];
+}): string {
   const lines = [`conjecture: ${parts.id ?? 'c'}`, 'for:', ...parts.for.map((l) => `  ${l}`)];
   if (parts.where) lines.push(`where: ${JSON.stringify(parts.where)}`);
   if (parts.let) lines.push('let:', ...parts.let.map((l) => `  ${l}`));

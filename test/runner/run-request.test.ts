@@ -16,7 +16,19 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 function request(file: string, over: Partial<RunRequest> = {}): RunRequest {
   // `root` is null: no project (the test files live in a temporary folder). Cast, because the request
   // is gaining fields while the runner moves to worker threads.
-  return { paths: [file], ids: null, sizes: [], sampleRanges: [], exhaustive: true, count: null, seed: null, budgetMs: null, root: null, regression: {}, ...over } as RunRequest;
+  return {
+    paths: [file],
+    ids: null,
+    sizes: [],
+    sampleRanges: [],
+    exhaustive: true,
+    count: null,
+    seed: null,
+    budgetMs: null,
+    root: null,
+    regression: {},
+    ...over,
+  } as RunRequest;
 }
 
 function write(name: string, text: string): string {
@@ -54,7 +66,10 @@ describe('the planned-case refusal', () => {
   });
 
   it('counts products of families (S_10 x S_10 is 13,168,189,440,000 cases: refused)', () => {
-    const f = write('pair.yaml', 'conjecture: pair\nfor:\n  n: 10..10\n  u: permutations(n)\n  v: permutations(n)\nclaim: inv(u * v) >= 0\n');
+    const f = write(
+      'pair.yaml',
+      'conjecture: pair\nfor:\n  n: 10..10\n  u: permutations(n)\n  v: permutations(n)\nclaim: inv(u * v) >= 0\n',
+    );
     expect(() => prepareRun(request(f))).toThrow(/13,168,189,440,000/);
   });
 

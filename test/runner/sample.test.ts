@@ -13,7 +13,13 @@ import type { ConjectureResult } from '../../src/runner/result.js';
 
 /** A true claim whose `where` skips about half the draws: the skipped counts fingerprint the cases. */
 function whereDoc(id = 'fp', sample = 'n: 10..13') {
-  return doc({ id, for: ['n: 1..4', 'w: permutations(n)'], where: 'mod(inv(w), 2) == 0', claim: 'inv(w) >= 0', sample: [sample, 'count: 60'] });
+  return doc({
+    id,
+    for: ['n: 1..4', 'w: permutations(n)'],
+    where: 'mod(inv(w), 2) == 0',
+    claim: 'inv(w) >= 0',
+    sample: [sample, 'count: 60'],
+  });
 }
 const skips = (r: ConjectureResult) => Object.fromEntries(r.checked.filter((p) => p.phase === 'sample').map((p) => [p.size.n, p.skipped]));
 
@@ -89,7 +95,9 @@ describe('seeds derive from (seed, id, size)', () => {
 
 describe('the report of the sample phase', () => {
   it('pieces say phase sample, the size, the count of cases, the seed', () => {
-    const r = check(doc({ for: ['n: 1..3', 'w: permutations(n)'], claim: 'inv(w) >= 0', sample: ['n: 9..11', 'count: 25'] }), { seed: 's' });
+    const r = check(doc({ for: ['n: 1..3', 'w: permutations(n)'], claim: 'inv(w) >= 0', sample: ['n: 9..11', 'count: 25'] }), {
+      seed: 's',
+    });
     expect(r.outcome).toBe('holds');
     const s = r.checked.filter((p) => p.phase === 'sample');
     expect(s.map((p) => [p.size, p.cases, p.failures, p.skipped, p.seed])).toEqual([
@@ -125,7 +133,9 @@ describe('the report of the sample phase', () => {
     const r = check(doc({ for: ['n: 1..3', 'w: permutations(n)'], claim: 'maj(w) <= inv(w) or n > 3', sample: ['n: 9..11', 'count: 0'] }));
     expect(r.checked.every((p) => p.phase === 'exhaustive')).toBe(true);
     expect(r.outcome).toBe('fails');
-    const t = check(doc({ for: ['n: 1..2', 'w: permutations(n)'], claim: 'maj(w) <= inv(w)', sample: ['n: 9..11', 'count: 30'] }), { count: 0 });
+    const t = check(doc({ for: ['n: 1..2', 'w: permutations(n)'], claim: 'maj(w) <= inv(w)', sample: ['n: 9..11', 'count: 30'] }), {
+      count: 0,
+    });
     expect(t.checked.every((p) => p.phase === 'exhaustive')).toBe(true);
     expect(t.outcome).toBe('holds');
   });

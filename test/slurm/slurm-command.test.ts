@@ -13,7 +13,10 @@ describe('hunch slurm', () => {
     const dir = tempDir();
     writeFileSync(join(dir, 'hunch.yaml'), '');
     copyFileSync(join(ROOT, 'test/slurm/permutations.yaml'), join(dir, 'perms.yaml'));
-    const r = runCli(['slurm', 'perms.yaml', '--shards', '6', '--cpus', '4', '--partition', 'short', '--time', '1:00:00', '-o', 'jobs/x.sbatch'], { cwd: dir });
+    const r = runCli(
+      ['slurm', 'perms.yaml', '--shards', '6', '--cpus', '4', '--partition', 'short', '--time', '1:00:00', '-o', 'jobs/x.sbatch'],
+      { cwd: dir },
+    );
     expect(r.code, r.stderr).toBe(0);
     const array = readFileSync(join(dir, 'jobs/x.sbatch'), 'utf8');
     expect(array).toContain('#SBATCH --array=1-6');
@@ -24,7 +27,9 @@ describe('hunch slurm', () => {
     expect(array).toContain(`--ledger ${join(dir, 'ledgers')}/shard-$i.jsonl`);
     const submit = readFileSync(join(dir, 'jobs/x-submit.sh'), 'utf8');
     expect(submit).toContain('--dependency=afterany:"$array"');
-    expect(readFileSync(join(dir, 'jobs/x-merge.sbatch'), 'utf8')).toContain(`merge ${join(dir, 'ledgers')}/shard-*.jsonl -o ${join(dir, 'hunch-ledger.jsonl')}`);
+    expect(readFileSync(join(dir, 'jobs/x-merge.sbatch'), 'utf8')).toContain(
+      `merge ${join(dir, 'ledgers')}/shard-*.jsonl -o ${join(dir, 'hunch-ledger.jsonl')}`,
+    );
     expect(readFileSync(join(dir, 'jobs/x-ssh.sh'), 'utf8')).toContain('parallel --sshlogin "$HOSTS"');
     for (const f of ['x.sbatch', 'x-merge.sbatch', 'x-submit.sh', 'x-ssh.sh']) {
       expect(spawnSync('bash', ['-n', join(dir, 'jobs', f)]).status).toBe(0);

@@ -42,13 +42,21 @@ describe('hunch slurm quotes every path', { timeout: 180_000 }, () => {
         const ssh = spawnSync('sh', [join(dir, 'hunch-slurm-ssh.sh')], { cwd: parent, env, encoding: 'utf8' });
         expect(ssh.status, ssh.stderr).toBe(0);
         // One array task and the merge job, run by bash as sbatch would.
-        const task = spawnSync('bash', [join(dir, 'hunch-slurm.sbatch')], { cwd: dir, env: { ...env, SLURM_ARRAY_TASK_ID: '1' }, encoding: 'utf8' });
+        const task = spawnSync('bash', [join(dir, 'hunch-slurm.sbatch')], {
+          cwd: dir,
+          env: { ...env, SLURM_ARRAY_TASK_ID: '1' },
+          encoding: 'utf8',
+        });
         expect(task.status, task.stderr).toBe(0);
         const merge = spawnSync('bash', [join(dir, 'hunch-slurm-merge.sbatch')], { cwd: dir, env, encoding: 'utf8' });
         expect(merge.status, merge.stderr).toBe(0);
 
         for (const where of [parent, dir, join(dir, 'ledgers'), ROOT]) expect(existsSync(join(where, 'X')), `X in ${where}`).toBe(false);
-        expect(readdirSync(join(dir, 'ledgers')).filter((f) => f.endsWith('.jsonl')).sort()).toEqual(['shard-1.jsonl', 'shard-2.jsonl']);
+        expect(
+          readdirSync(join(dir, 'ledgers'))
+            .filter((f) => f.endsWith('.jsonl'))
+            .sort(),
+        ).toEqual(['shard-1.jsonl', 'shard-2.jsonl']);
         expect(existsSync(join(dir, 'hunch-ledger.jsonl'))).toBe(true);
       } finally {
         rmSync(parent, { recursive: true, force: true });

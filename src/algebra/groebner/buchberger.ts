@@ -86,7 +86,8 @@ class Basis<T> {
     // Criterion B on the old pairs.
     this.pairs = this.pairs.filter((p) => {
       if (!dividesRow(lh, 0, p.lcm, 0, nv)) return true;
-      const li = lcmRow(this.lms[p.i], lh, nv), lj = lcmRow(this.lms[p.j], lh, nv);
+      const li = lcmRow(this.lms[p.i], lh, nv),
+        lj = lcmRow(this.lms[p.j], lh, nv);
       return sameRow(li, p.lcm, nv) || sameRow(lj, p.lcm, nv);
     });
     // The product criterion on the survivors.
@@ -112,7 +113,8 @@ export function buchberger<T>(K: Field<T>, order: TermOrder, F: readonly Sparse<
     // The pair of least sugar, ties by least lcm.
     let best = 0;
     for (let a = 1; a < B.pairs.length; a++) {
-      const p = B.pairs[a], q = B.pairs[best];
+      const p = B.pairs[a],
+        q = B.pairs[best];
       if (p.sugar < q.sugar || (p.sugar === q.sugar && order.compareAt(p.lcm, 0, q.lcm, 0) < 0)) best = a;
     }
     const pair = B.pairs[best];
@@ -150,7 +152,10 @@ export function reduceBasis<T>(K: Field<T>, order: TermOrder, G: readonly Sparse
   minimal.sort((a, b) => order.compareAt(a.exps, 0, b.exps, 0));
   const out = minimal.map((g, a) => {
     const others = minimal.filter((_, b) => b !== a);
-    return makeMonic(K, remainder(K, order, g, others, () => limits.tick()));
+    return makeMonic(
+      K,
+      remainder(K, order, g, others, () => limits.tick()),
+    );
   });
   return out;
 }

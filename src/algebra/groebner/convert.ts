@@ -20,7 +20,9 @@ export function toSparse<T>(K: Field<T>, order: TermOrder, f: PolyLike): Sparse<
   const where = Array.from(f.vars, (id) => {
     const p = order.indexOf(id);
     if (p < 0)
-      fail(`the variable ${varName(id)} of ${f.toText()} is not among the term order's variables (${order.varIds.map(varName).join(', ')})`);
+      fail(
+        `the variable ${varName(id)} of ${f.toText()} is not among the term order's variables (${order.varIds.map(varName).join(', ')})`,
+      );
     return p;
   });
   const rows: Int32Array[] = [];

@@ -64,7 +64,11 @@ class F4 {
   stats: F4Stats = { steps: 0, pairs: 0, zeroRows: 0, maxColumns: 0 };
   lastShape = '';
 
-  constructor(readonly p: number, order: TermOrder, readonly limits: Limits) {
+  constructor(
+    readonly p: number,
+    order: TermOrder,
+    readonly limits: Limits,
+  ) {
     this.T = new MonomialTable(order);
     const q = p - 1;
     this.lazyK = Math.floor((TWO53 - p) / (q * q));
@@ -87,7 +91,8 @@ class F4 {
   }
 
   fromSparse(f: Sparse<number>): Poly {
-    const n = f.coefs.length, nv = this.T.nv;
+    const n = f.coefs.length,
+      nv = this.T.nv;
     const mons = new Int32Array(n);
     for (let t = 0; t < n; t++) mons[t] = this.T.id(f.exps, t * nv);
     const inv = invModP(f.coefs[0], this.p);
@@ -99,7 +104,8 @@ class F4 {
   }
 
   toSparse(f: Poly): Sparse<number> {
-    const nv = this.T.nv, n = f.mons.length;
+    const nv = this.T.nv,
+      n = f.mons.length;
     const exps = new Int32Array(n * nv);
     for (let t = 0; t < n; t++) exps.set(this.T.row(f.mons[t]), t * nv);
     return { exps, coefs: Array.from(f.coefs) };
@@ -138,7 +144,8 @@ class F4 {
     const polys = this.polys;
     this.pairs = this.pairs.filter((pr) => {
       if (!T.divides(lh, pr.lcm)) return true;
-      const li = T.lcm(polys[pr.i].mons[0], lh), lj = T.lcm(polys[pr.j].mons[0], lh);
+      const li = T.lcm(polys[pr.i].mons[0], lh),
+        lj = T.lcm(polys[pr.j].mons[0], lh);
       return li === pr.lcm || lj === pr.lcm;
     });
     for (let a = 0; a < cand.length; a++) if (keep[a] && !coprimeC[a]) this.pairs.push(cand[a]);
@@ -157,12 +164,14 @@ class F4 {
    * re-tested only against the elements added since.
    */
   private reducerFor(m: number): number {
-    const T = this.T, polys = this.polys;
+    const T = this.T,
+      polys = this.polys;
     this.scratch();
     const cached = this.divisor[m] - 1;
     if (cached >= 0 && this.active[cached]) return cached;
     const from = cached === -1 ? this.checkedUpTo[m] : 0;
-    let best = -1, bestLen = Infinity;
+    let best = -1,
+      bestLen = Infinity;
     const list = this.activeList;
     for (let k = 0; k < list.length; k++) {
       const i = list[k];
@@ -188,12 +197,14 @@ class F4 {
     const T = this.T;
     this.stamp++;
     const stamp = this.stamp;
-    const rowsMult: number[] = [], rowsPoly: number[] = [];
+    const rowsMult: number[] = [],
+      rowsPoly: number[] = [];
     const rowsMons: Int32Array[] = [];
     const toReduce: number[] = [];
     const allMons: number[] = [];
     const addRowMons = (r: number) => {
-      const g = this.polys[rowsPoly[r]], mult = rowsMult[r];
+      const g = this.polys[rowsPoly[r]],
+        mult = rowsMult[r];
       const mons = new Int32Array(g.mons.length);
       rowsMons[r] = mons;
       for (let t = 0; t < g.mons.length; t++) {
@@ -251,7 +262,9 @@ class F4 {
     if (ncols > this.stats.maxColumns) this.stats.maxColumns = ncols;
     this.lastShape = `rows ${rowsMult.length} (reduce ${toReduce.length}) cols ${ncols}`;
     const makeRow = (r: number): Row => {
-      const g = this.polys[rowsPoly[r]], mons = rowsMons[r], n = mons.length;
+      const g = this.polys[rowsPoly[r]],
+        mons = rowsMons[r],
+        n = mons.length;
       const rc = new Int32Array(n);
       for (let t = 0; t < n; t++) rc[t] = this.colOf[mons[t]];
       return { cols: rc, coefs: g.coefs };
@@ -264,7 +277,8 @@ class F4 {
     // Reduce, largest leading column first (a new pivot then helps the rows after it).
     const work = toReduce.map(makeRow);
     work.sort((a, b) => a.cols[0] - b.cols[0]);
-    const p = this.p, K = this.lazyK;
+    const p = this.p,
+      K = this.lazyK;
     const dense = new Float64Array(ncols);
     const out: Poly[] = [];
     for (const row of work) {
@@ -291,7 +305,9 @@ class F4 {
         }
         dense[c] = 0;
         const mult = p - v;
-        const pc = piv.cols, pk = piv.coefs, pn = pc.length;
+        const pc = piv.cols,
+          pk = piv.coefs,
+          pn = pc.length;
         if (K >= 1) {
           for (let t = 1; t < pn; t++) dense[pc[t]] += mult * pk[t];
           if (++adds >= K) {
@@ -312,7 +328,8 @@ class F4 {
       // Collect, normalise (leading coefficient 1) and keep as a new pivot.
       let cnt = 0;
       for (let c = lead; c < ncols; c++) if (dense[c] !== 0) cnt++;
-      const rc = new Int32Array(cnt), rk = new Float64Array(cnt);
+      const rc = new Int32Array(cnt),
+        rk = new Float64Array(cnt);
       let w = 0;
       for (let c = lead; c < ncols; c++) {
         const v = dense[c];
@@ -353,9 +370,13 @@ class F4 {
         start.push({ mult: T.quotient(pr.lcm, this.polys[pr.i].mons[0]), poly: pr.i });
         start.push({ mult: T.quotient(pr.lcm, this.polys[pr.j].mons[0]), poly: pr.j });
       }
-      const t0 = TRACE ? performance.now() : 0, c0 = TRACE ? process.cpuUsage().user : 0;
+      const t0 = TRACE ? performance.now() : 0,
+        c0 = TRACE ? process.cpuUsage().user : 0;
       const fresh = this.reduceRows(start, false);
-      if (TRACE) console.error(`step ${this.stats.steps} sugar ${sugar} pairs ${chosen.length} new ${fresh.length} basis ${this.activeList.length} monomials ${T.count} ${this.lastShape} ${(performance.now() - t0).toFixed(0)} ms (${((process.cpuUsage().user - c0) / 1000).toFixed(0)} ms CPU)`);
+      if (TRACE)
+        console.error(
+          `step ${this.stats.steps} sugar ${sugar} pairs ${chosen.length} new ${fresh.length} basis ${this.activeList.length} monomials ${T.count} ${this.lastShape} ${(performance.now() - t0).toFixed(0)} ms (${((process.cpuUsage().user - c0) / 1000).toFixed(0)} ms CPU)`,
+        );
       if (fresh.some((f) => T.deg[f.mons[0]] === 0)) return [unitBasis(T.nv)];
       fresh.sort((a, b) => T.cmp(a.mons[0], b.mons[0]));
       for (const f of fresh) {
@@ -377,7 +398,8 @@ class F4 {
       let redundant = false;
       for (const b of act) {
         if (a === b) continue;
-        const la = this.polys[a].mons[0], lb = this.polys[b].mons[0];
+        const la = this.polys[a].mons[0],
+          lb = this.polys[b].mons[0];
         if (T.divides(lb, la) && (la !== lb || b < a)) {
           redundant = true;
           break;
@@ -388,7 +410,10 @@ class F4 {
     }
     this.activeList = minimal;
     const one = T.id(new Int32Array(T.nv));
-    const reduced = this.reduceRows(minimal.map((poly) => ({ mult: one, poly })), true);
+    const reduced = this.reduceRows(
+      minimal.map((poly) => ({ mult: one, poly })),
+      true,
+    );
     reduced.sort((a, b) => T.cmp(a.mons[0], b.mons[0]));
     lastF4Stats = this.stats;
     return reduced.map((f) => this.toSparse(f));

@@ -12,7 +12,20 @@
 export { termOrder, matrixOrder, TermOrder, type OrderSpec } from './termOrder.js';
 export type { GroebnerOptions } from './bounds.js';
 export {
-  groebnerBasis, leadingTerm, normalForm, isGroebnerBasis, inIdeal, idealEquals, eliminate, eliminationOrder,
-  intersect, quotient, saturation, inRadical, variablesOf, type IdealOptions, type NormalFormOptions,
+  groebnerBasis,
+  leadingTerm,
+  normalForm,
+  isGroebnerBasis,
+  inIdeal,
+  idealEquals,
+  eliminate,
+  eliminationOrder,
+  intersect,
+  quotient,
+  saturation,
+  inRadical,
+  variablesOf,
+  type IdealOptions,
+  type NormalFormOptions,
 } from './ideals.js';
 export { lastF4Stats, type F4Stats } from './f4.js';

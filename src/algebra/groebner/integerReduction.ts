@@ -35,12 +35,15 @@ function primitive(f: ZPoly): ZPoly {
 
 /** a f - b x^m g with the leading terms cancelling (f's first term dropped). */
 function combine(order: TermOrder, f: ZPoly, a: bigint, b: bigint, m: Int32Array, g: ZPoly): ZPoly {
-  const nv = order.nv, nf = f.coefs.length, ng = g.coefs.length;
+  const nv = order.nv,
+    nf = f.coefs.length,
+    ng = g.coefs.length;
   const exps = new Int32Array((nf + ng) * nv);
   const coefs: bigint[] = [];
   const sh = new Int32Array(nv);
   const cmp = order.compareAt;
-  let i = 1, j = 1;
+  let i = 1,
+    j = 1;
   while (i < nf || j < ng) {
     if (j < ng) for (let v = 0; v < nv; v++) sh[v] = g.exps[j * nv + v] + m[v];
     const s = i >= nf ? -1 : j >= ng ? 1 : cmp(f.exps, i * nv, sh, 0);
@@ -73,7 +76,8 @@ export function reducesToZero(order: TermOrder, f: ZPoly, G: readonly ZPoly[], l
     limits.tick();
     const g = G.find((g) => dividesRow(g.exps, 0, f.exps, 0, nv, m));
     if (!g) return false;
-    const lf = f.coefs[0], lg = g.coefs[0];
+    const lf = f.coefs[0],
+      lg = g.coefs[0];
     let d = bigGcd(lf < 0n ? -lf : lf, lg < 0n ? -lg : lg);
     if (d === 0n) d = 1n;
     f = combine(order, f, lg / d, lf / d, m, g);
@@ -85,13 +89,15 @@ export function reducesToZero(order: TermOrder, f: ZPoly, G: readonly ZPoly[], l
 /** The S-polynomial of integer polynomials, fraction free. */
 export function zSPolynomial(order: TermOrder, f: ZPoly, g: ZPoly): ZPoly {
   const nv = order.nv;
-  const mf = new Int32Array(nv), mg = new Int32Array(nv);
+  const mf = new Int32Array(nv),
+    mg = new Int32Array(nv);
   for (let v = 0; v < nv; v++) {
     const l = Math.max(f.exps[v], g.exps[v]);
     mf[v] = l - f.exps[v];
     mg[v] = l - g.exps[v];
   }
-  const lf = f.coefs[0], lg = g.coefs[0];
+  const lf = f.coefs[0],
+    lg = g.coefs[0];
   let d = bigGcd(lf < 0n ? -lf : lf, lg < 0n ? -lg : lg);
   if (d === 0n) d = 1n;
   // (lg/d) x^mf f - (lf/d) x^mg g: shift f by mf first, then combine (leading terms cancel).

@@ -18,7 +18,10 @@ export class MonomialTable {
   private readonly tmp: Int32Array;
   readonly cmp: (a: number, b: number) => number;
 
-  constructor(readonly order: TermOrder, capacity = 1 << 12) {
+  constructor(
+    readonly order: TermOrder,
+    capacity = 1 << 12,
+  ) {
     const nv = (this.nv = order.nv);
     this.exps = new Int32Array(capacity * Math.max(nv, 1));
     this.deg = new Int32Array(capacity);
@@ -42,7 +45,9 @@ export class MonomialTable {
       this.cmp = (a, b) => {
         const d = this.deg[a] - this.deg[b];
         if (d !== 0) return d;
-        const ex = this.exps, ia = a * nv, ib = b * nv;
+        const ex = this.exps,
+          ia = a * nv,
+          ib = b * nv;
         for (let v = nv - 1; v >= 0; v--) {
           const x = ex[ia + v] - ex[ib + v];
           if (x !== 0) return -x;
@@ -53,7 +58,9 @@ export class MonomialTable {
       this.cmp = (a, b) => {
         const d = this.deg[a] - this.deg[b];
         if (d !== 0) return d;
-        const ex = this.exps, ia = a * nv, ib = b * nv;
+        const ex = this.exps,
+          ia = a * nv,
+          ib = b * nv;
         for (let v = 0; v < nv; v++) {
           const x = ex[ia + v] - ex[ib + v];
           if (x !== 0) return x;
@@ -70,7 +77,8 @@ export class MonomialTable {
   }
 
   private grow(): void {
-    const cap = this.deg.length * 2, nv = this.nv;
+    const cap = this.deg.length * 2,
+      nv = this.nv;
     const e = new Int32Array(cap * Math.max(nv, 1));
     e.set(this.exps);
     this.exps = e;
@@ -94,8 +102,10 @@ export class MonomialTable {
 
   private add(row: ArrayLike<number>, off: number, h: number): number {
     if (this.count === this.deg.length) this.grow();
-    const id = this.count++, nv = this.nv;
-    let d = 0, mask = 0;
+    const id = this.count++,
+      nv = this.nv;
+    let d = 0,
+      mask = 0;
     for (let v = 0; v < nv; v++) {
       const e = row[off + v];
       this.exps[id * nv + v] = e;
@@ -117,13 +127,18 @@ export class MonomialTable {
     const nv = this.nv;
     let h = 0;
     for (let v = 0; v < nv; v++) h = (h + Math.imul(row[off + v], this.rnd[v])) | 0;
-    const m = this.slots.length - 1, ex = this.exps;
+    const m = this.slots.length - 1,
+      ex = this.exps;
     for (let s = this.slotOf(h); ; s = (s + 1) & m) {
       const c = this.slots[s];
       if (c === -1) break;
       if (this.hash[c] !== h) continue;
       let same = true;
-      for (let v = 0; v < nv; v++) if (ex[c * nv + v] !== row[off + v]) { same = false; break; }
+      for (let v = 0; v < nv; v++)
+        if (ex[c * nv + v] !== row[off + v]) {
+          same = false;
+          break;
+        }
       if (same) return c;
     }
     return this.add(row, off, h);
@@ -131,17 +146,23 @@ export class MonomialTable {
 
   /** The id of a * b. */
   product(a: number, b: number): number {
-    const nv = this.nv, ex = this.exps;
+    const nv = this.nv,
+      ex = this.exps;
     const h = (this.hash[a] + this.hash[b]) | 0;
     const m = this.slots.length - 1;
-    const ia = a * nv, ib = b * nv;
+    const ia = a * nv,
+      ib = b * nv;
     for (let s = this.slotOf(h); ; s = (s + 1) & m) {
       const c = this.slots[s];
       if (c === -1) break;
       if (this.hash[c] !== h) continue;
       let same = true;
       const ic = c * nv;
-      for (let v = 0; v < nv; v++) if (ex[ic + v] !== ex[ia + v] + ex[ib + v]) { same = false; break; }
+      for (let v = 0; v < nv; v++)
+        if (ex[ic + v] !== ex[ia + v] + ex[ib + v]) {
+          same = false;
+          break;
+        }
       if (same) return c;
     }
     const t = this.tmp;
@@ -151,14 +172,18 @@ export class MonomialTable {
 
   /** The id of a / b (b divides a). */
   quotient(a: number, b: number): number {
-    const nv = this.nv, ex = this.exps, t = this.tmp;
+    const nv = this.nv,
+      ex = this.exps,
+      t = this.tmp;
     for (let v = 0; v < nv; v++) t[v] = ex[a * nv + v] - ex[b * nv + v];
     return this.id(t, 0);
   }
 
   /** The id of lcm(a, b). */
   lcm(a: number, b: number): number {
-    const nv = this.nv, ex = this.exps, t = this.tmp;
+    const nv = this.nv,
+      ex = this.exps,
+      t = this.tmp;
     for (let v = 0; v < nv; v++) t[v] = Math.max(ex[a * nv + v], ex[b * nv + v]);
     return this.id(t, 0);
   }
@@ -166,14 +191,20 @@ export class MonomialTable {
   /** Whether a divides b. */
   divides(a: number, b: number): boolean {
     if ((this.mask[a] & ~this.mask[b]) !== 0) return false;
-    const nv = this.nv, ex = this.exps, ia = a * nv, ib = b * nv;
+    const nv = this.nv,
+      ex = this.exps,
+      ia = a * nv,
+      ib = b * nv;
     for (let v = 0; v < nv; v++) if (ex[ia + v] > ex[ib + v]) return false;
     return true;
   }
 
   /** Whether a and b share no variable. */
   coprime(a: number, b: number): boolean {
-    const nv = this.nv, ex = this.exps, ia = a * nv, ib = b * nv;
+    const nv = this.nv,
+      ex = this.exps,
+      ia = a * nv,
+      ib = b * nv;
     if (nv <= 32) return (this.mask[a] & this.mask[b]) === 0;
     for (let v = 0; v < nv; v++) if (ex[ia + v] > 0 && ex[ib + v] > 0) return false;
     return true;

@@ -18,8 +18,7 @@ export function isPrime(q: number): boolean {
 
 /** Fails unless p is a prime below 2^31. */
 export function checkPrime(p: number): void {
-  if (!Number.isSafeInteger(p) || p < 2 || p >= 2 ** 31 || !isPrime(p))
-    fail(`the characteristic must be a prime below 2^31, not ${p}`);
+  if (!Number.isSafeInteger(p) || p < 2 || p >= 2 ** 31 || !isPrime(p)) fail(`the characteristic must be a prime below 2^31, not ${p}`);
 }
 
 /** a*b mod p for residues 0 <= a, b < p < 2^31. */
@@ -28,7 +27,8 @@ export function mulModP(a: number, b: number, p: number): number {
     const x = a * b;
     return x - Math.floor(x / p) * p;
   }
-  const hi = Math.floor(b / 65536), lo = b - hi * 65536;
+  const hi = Math.floor(b / 65536),
+    lo = b - hi * 65536;
   let r = a * hi;
   r -= Math.floor(r / p) * p;
   r = r * 65536 + a * lo;
@@ -37,7 +37,10 @@ export function mulModP(a: number, b: number, p: number): number {
 
 /** a^-1 mod p (a not divisible by p), by the extended Euclidean algorithm. */
 export function invModP(a: number, p: number): number {
-  let r0 = p, r1 = a % p, t0 = 0, t1 = 1;
+  let r0 = p,
+    r1 = a % p,
+    t0 = 0,
+    t1 = 1;
   if (r1 < 0) r1 += p;
   while (r1 !== 0) {
     const q = Math.floor(r0 / r1);

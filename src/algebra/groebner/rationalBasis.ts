@@ -77,7 +77,9 @@ class Accumulator {
   constructor(readonly nv: number) {}
 
   add(G: readonly Sparse<number>[], p: number): void {
-    const nv = this.nv, M = this.modulus, P = BigInt(p);
+    const nv = this.nv,
+      M = this.modulus,
+      P = BigInt(p);
     const inv = this.primes === 0 ? 0n : modInverse(M % P, P);
     for (let i = 0; i < G.length; i++) {
       if (!this.keys[i]) {
@@ -85,7 +87,8 @@ class Accumulator {
         this.rows[i] = [];
         this.values[i] = [];
       }
-      const keys = this.keys[i], vals = this.values[i];
+      const keys = this.keys[i],
+        vals = this.values[i];
       const residue = new Map<number, number>();
       const g = G[i];
       for (let t = 0; t < g.coefs.length; t++) {
@@ -117,7 +120,8 @@ class Accumulator {
 
   /** The candidate over Q, or null when some coefficient does not reconstruct yet. */
   reconstruct(order: TermOrder): Sparse<Scalar>[] | null {
-    const M = this.modulus, bound = isqrt(M / 2n);
+    const M = this.modulus,
+      bound = isqrt(M / 2n);
     const out: Sparse<Scalar>[] = [];
     for (let i = 0; i < this.values.length; i++) {
       const coefs: Scalar[] = [];
@@ -140,7 +144,10 @@ class Accumulator {
 }
 
 function modInverse(a: bigint, p: bigint): bigint {
-  let r0 = p, r1 = ((a % p) + p) % p, t0 = 0n, t1 = 1n;
+  let r0 = p,
+    r1 = ((a % p) + p) % p,
+    t0 = 0n,
+    t1 = 1n;
   while (r1 !== 0n) {
     const q = r0 / r1;
     [r0, r1] = [r1, r0 - q * r1];
@@ -174,7 +181,10 @@ function provenBasis(order: TermOrder, F: readonly Sparse<Scalar>[], G: readonly
   for (const g of G) if (!isHomogeneous(g, nv)) return false;
   const GZ = G.map(toZ);
   for (const f of F) if (!reducesToZero(order, toZ(f), GZ, limits)) return false;
-  for (const [i, j] of pairsToCheck(G.map((g) => g.exps.subarray(0, nv)), nv)) {
+  for (const [i, j] of pairsToCheck(
+    G.map((g) => g.exps.subarray(0, nv)),
+    nv,
+  )) {
     limits.poll();
     if (!reducesToZero(order, zSPolynomial(order, GZ[i], GZ[j]), GZ, limits)) return false;
   }
@@ -203,7 +213,8 @@ function homogeneousBasis(order: TermOrder, F: readonly Sparse<Scalar>[], limits
     if (!acc) groups.set(key, (acc = new Accumulator(nv)));
     acc.add(Gp, p);
     // Reconstruct for the pattern seen most often.
-    let best: Accumulator = acc, bestKey = key;
+    let best: Accumulator = acc,
+      bestKey = key;
     for (const [kk, a] of groups) if (a.primes > best.primes) [best, bestKey] = [a, kk];
     pending = best.reconstruct(order);
     pendingKey = bestKey;

@@ -17,9 +17,7 @@ export function termCount<T>(f: Sparse<T>): number {
 }
 
 /** Build from terms in any order (equal monomials add up, zeros drop). */
-export function sparseFromTerms<T>(
-  K: Field<T>, order: TermOrder, rows: ArrayLike<number>[], coefs: T[],
-): Sparse<T> {
+export function sparseFromTerms<T>(K: Field<T>, order: TermOrder, rows: ArrayLike<number>[], coefs: T[]): Sparse<T> {
   const nv = order.nv;
   const idx = rows.map((_, i) => i).sort((a, b) => order.compareAt(rows[b], 0, rows[a], 0));
   const exps = new Int32Array(idx.length * nv);
@@ -60,14 +58,15 @@ export function makeMonic<T>(K: Field<T>, f: Sparse<T>): Sparse<T> {
 }
 
 /** f - c * x^m * g, merged in order (m an exponent row). */
-export function subMul<T>(
-  K: Field<T>, order: TermOrder, f: Sparse<T>, c: T, m: ArrayLike<number>, g: Sparse<T>, fromTerm = 0,
-): Sparse<T> {
-  const nv = order.nv, nf = f.coefs.length, ng = g.coefs.length;
+export function subMul<T>(K: Field<T>, order: TermOrder, f: Sparse<T>, c: T, m: ArrayLike<number>, g: Sparse<T>, fromTerm = 0): Sparse<T> {
+  const nv = order.nv,
+    nf = f.coefs.length,
+    ng = g.coefs.length;
   const exps = new Int32Array((nf - fromTerm + ng) * nv);
   const coefs: T[] = [];
   const shifted = new Int32Array(nv);
-  let i = fromTerm, j = 0;
+  let i = fromTerm,
+    j = 0;
   const cmp = order.compareAt;
   while (i < nf || j < ng) {
     let s: number;
@@ -139,7 +138,8 @@ export function remainder<T>(K: Field<T>, order: TermOrder, f: Sparse<T>, G: rea
 /** The S-polynomial of f and g (both nonzero). */
 export function sPolynomial<T>(K: Field<T>, order: TermOrder, f: Sparse<T>, g: Sparse<T>): Sparse<T> {
   const nv = order.nv;
-  const mf = new Int32Array(nv), mg = new Int32Array(nv);
+  const mf = new Int32Array(nv),
+    mg = new Int32Array(nv);
   for (let v = 0; v < nv; v++) {
     const l = Math.max(f.exps[v], g.exps[v]);
     mf[v] = l - f.exps[v];

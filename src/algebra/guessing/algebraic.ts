@@ -59,7 +59,11 @@ export function fitAlgebraic(seq: Sequence, dx: number, dy: number, pw?: Scalar[
   // Leading coefficient (highest power of f, then of x) positive.
   const top = coeffs[dy];
   let lead = 0n;
-  for (let i = top.length - 1; i >= 0; i--) if (top[i] !== 0n) { lead = top[i]; break; }
+  for (let i = top.length - 1; i >= 0; i--)
+    if (top[i] !== 0n) {
+      lead = top[i];
+      break;
+    }
   if (lead < 0n) for (const c of coeffs) for (let i = 0; i < c.length; i++) c[i] = -c[i];
   return { dx, dy, coeffs, determinedTo: seq.offset + rel.determinedAt };
 }
@@ -71,7 +75,11 @@ export function algebraicText(fit: AlgebraicFit, f: string, x = 'x'): string {
     const c = fit.coeffs[j];
     if (c.every((v) => v === 0n)) continue;
     let lead = 0n;
-    for (let i = c.length - 1; i >= 0; i--) if (c[i] !== 0n) { lead = c[i]; break; }
+    for (let i = c.length - 1; i >= 0; i--)
+      if (c[i] !== 0n) {
+        lead = c[i];
+        break;
+      }
     const neg = lead < 0n;
     const poly = intPolyText(neg ? c.map((v) => -v) : c, x);
     const pow = j === 0 ? '1' : j === 1 ? f : `${f}^${j}`;
@@ -107,7 +115,8 @@ export function algebraicGuess(fit: AlgebraicFit, seq: Sequence): Guess {
 export function guessAlgebraic(seq: Sequence): { guess: Guess | null; tried: Attempt | null } {
   const N = seq.terms.length;
   const cands: Array<[number, number]> = [];
-  for (let dy = 2; dy <= 3; dy++) for (let dx = 1; dx <= 8; dx++) if (N >= (dx + 1) * (dy + 1) - 1 + MIN_CONFIRMING_TERMS) cands.push([dx, dy]);
+  for (let dy = 2; dy <= 3; dy++)
+    for (let dx = 1; dx <= 8; dx++) if (N >= (dx + 1) * (dy + 1) - 1 + MIN_CONFIRMING_TERMS) cands.push([dx, dy]);
   cands.sort((a, b) => (a[0] + 1) * (a[1] + 1) - (b[0] + 1) * (b[1] + 1) || a[1] - b[1]);
   if (cands.length === 0) return { guess: null, tried: null };
   const pw = powers(seq.terms, 3);
@@ -117,5 +126,8 @@ export function guessAlgebraic(seq: Sequence): { guess: Guess | null; tried: Att
   }
   const maxDy = Math.max(...cands.map((c) => c[1]));
   const maxDx = Math.max(...cands.map((c) => c[0]));
-  return { guess: null, tried: { guessClass: 'algebraic generating functions', extent: `degree 2..${maxDy} in f, <= ${maxDx} in x`, terms: N } };
+  return {
+    guess: null,
+    tried: { guessClass: 'algebraic generating functions', extent: `degree 2..${maxDy} in f, <= ${maxDx} in x`, terms: N },
+  };
 }

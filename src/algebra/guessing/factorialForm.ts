@@ -119,8 +119,15 @@ export function factorialOf(n: number, cache: Map<number, bigint>): bigint {
 }
 
 /** base^k * prod factorial(u k + v)^m * prod (u k + v)^m, or null when some factorial argument is negative or a linear factor vanishes. */
-export function factorialPart(base: Scalar, facts: readonly FactorialTerm[], k: number, cache: Map<number, bigint>, linear: readonly FactorialTerm[] = []): Scalar | null {
-  let num = 1n, den = 1n;
+export function factorialPart(
+  base: Scalar,
+  facts: readonly FactorialTerm[],
+  k: number,
+  cache: Map<number, bigint>,
+  linear: readonly FactorialTerm[] = [],
+): Scalar | null {
+  let num = 1n,
+    den = 1n;
   for (const f of linear) {
     const x = BigInt(f.u * k + f.v);
     if (x === 0n) return null;
@@ -161,7 +168,8 @@ export function factorialFormText(f: FactorialForm, v: string): string {
   const kn = numOf(K) < 0n ? -numOf(K) : numOf(K);
   if (kn !== 1n) num.push(kn.toString());
   if (denOf(K) !== 1n) den.push(denOf(K).toString());
-  const bn = numOf(f.base), bd = denOf(f.base);
+  const bn = numOf(f.base),
+    bd = denOf(f.base);
   if (bn < 0n) num.push(`(-1)^${v}`);
   const abn = bn < 0n ? -bn : bn;
   if (abn !== 1n) num.push(`${abn}^${v}`);

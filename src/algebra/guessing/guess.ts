@@ -9,7 +9,16 @@ import { guessPolynomial } from './polynomialFit.js';
 import { rationalGeneratingFunction, recurrenceGuess, searchRecurrence } from './recurrence.js';
 import { factor, ratPolyText, intPolyText } from './text.js';
 import { STANDARD_TRANSFORMS, byColumn, type Transform } from './transforms.js';
-import { MAX_GUESS_TERMS, MIN_CONFIRMING_TERMS, type Attempt, type ClaimPlan, type Guess, type GuessKind, type GuessReport, type Sequence } from './types.js';
+import {
+  MAX_GUESS_TERMS,
+  MIN_CONFIRMING_TERMS,
+  type Attempt,
+  type ClaimPlan,
+  type Guess,
+  type GuessKind,
+  type GuessReport,
+  type Sequence,
+} from './types.js';
 
 export interface GuessOptions {
   /** Also try a(n)/c(n) for this column, whose function is called `name` in a conjecture. */
@@ -21,7 +30,9 @@ export interface GuessOptions {
 const KIND_ORDER: GuessKind[] = ['polynomial', 'quasi-polynomial', 'hypergeometric', 'c-finite', 'product', 'p-recursive', 'algebraic'];
 
 function rank(a: Guess, b: Guess): number {
-  return a.unknowns - b.unknowns || KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind) || (a.transform ? 1 : 0) - (b.transform ? 1 : 0);
+  return (
+    a.unknowns - b.unknowns || KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind) || (a.transform ? 1 : 0) - (b.transform ? 1 : 0)
+  );
 }
 
 /** The guesses made on the sequence itself. `light` keeps to closed forms and constant-coefficient recurrences (for transformed sequences). */
@@ -75,7 +86,11 @@ function transformed(t: Transform, seq: Sequence, inner: Guess): Guess {
     formula: inline ? `${body} == ${inner.formula.slice('a(n) == '.length)}` : rename(inner.formula),
     notes: inline ? inner.notes.map(rename).map((n) => `${n}, where b(n) = ${body}`) : [`where b(n) = ${body}`, ...inner.notes.map(rename)],
     transform: t.label,
-    evidence: { from: inner.evidence.from, determinedTo: inner.evidence.determinedTo + t.shift, confirmedTo: inner.evidence.confirmedTo + t.shift },
+    evidence: {
+      from: inner.evidence.from,
+      determinedTo: inner.evidence.determinedTo + t.shift,
+      confirmedTo: inner.evidence.confirmedTo + t.shift,
+    },
     plan: (f): ClaimPlan => {
       const p = inner.plan('b');
       return { ...p, defines: [['b(n)', t.body(f, seq)], ...p.defines], lastFor: (top) => p.lastFor(top - t.shift) };
@@ -101,7 +116,12 @@ export function guessSequence(seq: Sequence, opts: GuessOptions = {}): GuessRepo
       // Offered only when simpler than every direct guess and of another kind (differences of a polynomial say nothing new).
       const simpler = inner.guesses.filter((g) => g.unknowns < best && !guesses.some((d) => !d.transform && d.kind === g.kind));
       guesses.push(...simpler.map((g) => transformed(t, seq, g)));
-      if (guesses.length === 0) tried.push({ guessClass: `after the transform b(n) = ${t.label}`, extent: light ? 'polynomials, C-finite and hypergeometric' : 'every class above', terms: b.terms.length });
+      if (guesses.length === 0)
+        tried.push({
+          guessClass: `after the transform b(n) = ${t.label}`,
+          extent: light ? 'polynomials, C-finite and hypergeometric' : 'every class above',
+          terms: b.terms.length,
+        });
     }
   }
   guesses.sort(rank);

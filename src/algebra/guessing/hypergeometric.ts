@@ -30,7 +30,8 @@ function vanishesFrom(p: bigint[], from: number, roots: Scalar[] | null): boolea
  */
 export function hypergeometricForm(fit: RecurrenceFit, a0: Scalar, n0: number): HypergeometricForm | null {
   const [p0, p1] = fit.coeffs;
-  const f0 = rationalRoots(p0), f1 = rationalRoots(p1);
+  const f0 = rationalRoots(p0),
+    f1 = rationalRoots(p1);
   if (vanishesFrom(p1, n0, f1?.roots ?? null) || vanishesFrom(p0, n0, f0?.roots ?? null)) return null;
   if (!f0 || !f1) {
     // Some root is irrational: check the integers in range directly.
@@ -45,13 +46,19 @@ export function hypergeometricForm(fit: RecurrenceFit, a0: Scalar, n0: number): 
     if (ratio) factorial = completeForm(a0, n0, ratio);
   }
   const ratioText = (v: string) => {
-    const num = intPolyText(p0.map((x) => -x), v);
+    const num = intPolyText(
+      p0.map((x) => -x),
+      v,
+    );
     const den = intPolyText(p1, v);
     return den === '1' ? num : `${factor(num)}/${factor(den)}`;
   };
   return {
     factorial,
-    text: (v) => (factorial ? factorialFormText(factorial, v) : times(scalarFactor(a0), comprehension('product', ratioText('k'), 'k', `${n0}..${v} - 1`))),
+    text: (v) =>
+      factorial
+        ? factorialFormText(factorial, v)
+        : times(scalarFactor(a0), comprehension('product', ratioText('k'), 'k', `${n0}..${v} - 1`)),
   };
 }
 
@@ -82,7 +89,15 @@ export function hypergeometricGuess(fit: RecurrenceFit, seq: Sequence): Guess | 
     notes: [`from the recurrence ${recurrenceText(fit, 'a')}`],
     unknowns: (fit.degree + 1) * 2 - 1,
     evidence: { from: seq.offset, determinedTo: fit.determinedTo, confirmedTo: seq.offset + seq.terms.length - 1 },
-    plan: (f) => ({ variable: 'n', first: seq.offset, lastFor: (top) => top, defines: [], lets: [], claim: `${f}(n) == ${closed}`, indeterminates: [] }),
+    plan: (f) => ({
+      variable: 'n',
+      first: seq.offset,
+      lastFor: (top) => top,
+      defines: [],
+      lets: [],
+      claim: `${f}(n) == ${closed}`,
+      indeterminates: [],
+    }),
   };
 }
 
@@ -99,7 +114,14 @@ export function secondOrderProductGuess(seq: Sequence): { guess: Guess | null; t
   const { fit, tried } = searchRecurrence(bseq, { maxOrder: 1 });
   if (!fit) {
     const maxD = Math.max(...recurrenceCandidates(b.length, { maxOrder: 1 }).map((c) => c[1]));
-    return { guess: null, tried: tried && { guessClass: 'products of hypergeometric ratios', extent: `a(n+1)/a(n) with a ratio of degree <= ${maxD}`, terms: a.length } };
+    return {
+      guess: null,
+      tried: tried && {
+        guessClass: 'products of hypergeometric ratios',
+        extent: `a(n+1)/a(n) with a ratio of degree <= ${maxD}`,
+        terms: a.length,
+      },
+    };
   }
   const form = hypergeometricForm(fit, b[0], seq.offset);
   if (!form || !form.factorial || !formAgrees(form, bseq)) return { guess: null, tried: null };
@@ -113,7 +135,15 @@ export function secondOrderProductGuess(seq: Sequence): { guess: Guess | null; t
       notes: [`the ratio a(n + 1)/a(n) == ${form.text('n')}`],
       unknowns: (fit.degree + 1) * 2,
       evidence: { from: seq.offset, determinedTo: fit.determinedTo + 1, confirmedTo: seq.offset + a.length - 1 },
-      plan: (f) => ({ variable: 'n', first: seq.offset, lastFor: (top) => top, defines: [], lets: [], claim: `${f}(n) == ${closed}`, indeterminates: [] }),
+      plan: (f) => ({
+        variable: 'n',
+        first: seq.offset,
+        lastFor: (top) => top,
+        defines: [],
+        lets: [],
+        claim: `${f}(n) == ${closed}`,
+        indeterminates: [],
+      }),
     },
     tried: null,
   };

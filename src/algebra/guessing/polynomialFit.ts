@@ -72,12 +72,24 @@ function closedFormGuess(fit: QuasiPolynomialFit, seq: Sequence): Guess {
   const realDegree = Math.max(...fit.pieces.map((p) => p.length - 1));
   return {
     kind: poly ? 'polynomial' : 'quasi-polynomial',
-    title: poly ? (realDegree === 0 ? 'constant' : `polynomial in n of degree ${realDegree}`) : `quasi-polynomial of period ${fit.period}, degree ${realDegree}`,
+    title: poly
+      ? realDegree === 0
+        ? 'constant'
+        : `polynomial in n of degree ${realDegree}`
+      : `quasi-polynomial of period ${fit.period}, degree ${realDegree}`,
     formula: `a(n) == ${formula}`,
     notes: [],
     unknowns: fit.period * (fit.degree + 1),
     evidence: { from: seq.offset, determinedTo: fit.determinedTo, confirmedTo: seq.offset + seq.terms.length - 1 },
-    plan: (f) => ({ variable: 'n', first: seq.offset, lastFor: (top) => top, defines: [], lets: [], claim: `${f}(n) == ${formula}`, indeterminates: [] }),
+    plan: (f) => ({
+      variable: 'n',
+      first: seq.offset,
+      lastFor: (top) => top,
+      defines: [],
+      lets: [],
+      claim: `${f}(n) == ${formula}`,
+      indeterminates: [],
+    }),
   };
 }
 

@@ -34,7 +34,7 @@ function lcm(a: bigint, b: bigint): bigint {
 export function recurrenceCandidates(terms: number, opts: RecurrenceSearch = {}): Array<[number, number]> {
   const out: Array<[number, number]> = [];
   const maxR = opts.maxOrder ?? 12;
-  const maxD = opts.constantOnly ? 0 : opts.maxDegree ?? 30;
+  const maxD = opts.constantOnly ? 0 : (opts.maxDegree ?? 30);
   for (let r = 1; r <= maxR; r++)
     for (let d = 0; d <= maxD; d++) {
       const cols = (r + 1) * (d + 1);
@@ -76,7 +76,11 @@ export function fitRecurrence(seq: Sequence, r: number, d: number): RecurrenceFi
   if (coeffs[0].every((c) => c === 0n) || coeffs[r].every((c) => c === 0n)) return null;
   const top = coeffs[r];
   let lead = 0n;
-  for (let j = top.length - 1; j >= 0; j--) if (top[j] !== 0n) { lead = top[j]; break; }
+  for (let j = top.length - 1; j >= 0; j--)
+    if (top[j] !== 0n) {
+      lead = top[j];
+      break;
+    }
   if (lead < 0n) for (const p of coeffs) for (let j = 0; j < p.length; j++) p[j] = -p[j];
   return { order: r, degree: d, coeffs: coeffs.map(trim), determinedTo: seq.offset + rel.determinedAt + r };
 }
@@ -99,7 +103,8 @@ export function searchRecurrence(seq: Sequence, opts: RecurrenceSearch = {}): { 
   const maxD = Math.max(...cands.map((c) => c[1]));
   const maxU = Math.max(...cands.map(([r, d]) => (r + 1) * (d + 1) - 1));
   // With only constant coefficients within reach, say so rather than "degree <= 0".
-  if (opts.constantOnly || maxD === 0) return { fit: null, tried: { guessClass: 'C-finite recurrences', extent: `order <= ${maxR}`, terms: seq.terms.length } };
+  if (opts.constantOnly || maxD === 0)
+    return { fit: null, tried: { guessClass: 'C-finite recurrences', extent: `order <= ${maxR}`, terms: seq.terms.length } };
   const extent = `order r and degree d with at most ${maxU} unknown${maxU === 1 ? '' : 's'} (r <= ${maxR}, d <= ${maxD})`;
   return { fit: null, tried: { guessClass: 'P-recursive recurrences', extent, terms: seq.terms.length } };
 }
@@ -109,7 +114,11 @@ export function recurrenceText(fit: RecurrenceFit, f: string, v = 'n'): string {
   const term = (p: bigint[], i: number, negate: boolean): [boolean, string] => {
     const q = negate ? p.map((c) => -c) : p;
     let lead = 0n;
-    for (let j = q.length - 1; j >= 0; j--) if (q[j] !== 0n) { lead = q[j]; break; }
+    for (let j = q.length - 1; j >= 0; j--)
+      if (q[j] !== 0n) {
+        lead = q[j];
+        break;
+      }
     const neg = lead < 0n;
     const body = times(intPolyText(neg ? q.map((c) => -c) : q, v), shifted(f, v, i));
     return [neg, body];

@@ -28,7 +28,10 @@ export interface Relation {
 class Echelon {
   readonly pivotRows: Float64Array[] = [];
   readonly pivotCols: number[] = [];
-  constructor(readonly cols: number, readonly p: number) {}
+  constructor(
+    readonly cols: number,
+    readonly p: number,
+  ) {}
 
   /** Reduces the row against the pivots and adds it when it is independent; returns whether it was. */
   add(r: Float64Array): boolean {
@@ -46,7 +49,11 @@ class Echelon {
       }
     }
     let c = -1;
-    for (let j = 0; j < this.cols; j++) if (r[j] !== 0) { c = j; break; }
+    for (let j = 0; j < this.cols; j++)
+      if (r[j] !== 0) {
+        c = j;
+        break;
+      }
     if (c < 0) return false;
     const inv = invMod(r[c], p);
     for (let j = 0; j < this.cols; j++) if (r[j] !== 0) r[j] = mulMod(r[j], inv, p);

@@ -13,7 +13,10 @@ function divisors(x: bigint, bound = 1_000_000n): bigint[] | null {
     if (d > bound) return null;
     if (x % d === 0n) {
       let e = 0;
-      while (x % d === 0n) { x /= d; e++; }
+      while (x % d === 0n) {
+        x /= d;
+        e++;
+      }
       primes.push([d, e]);
     }
   }
@@ -23,7 +26,10 @@ function divisors(x: bigint, bound = 1_000_000n): bigint[] | null {
     const next: bigint[] = [];
     for (const d of out) {
       let m = d;
-      for (let i = 0; i <= e; i++) { next.push(m); m *= p; }
+      for (let i = 0; i <= e; i++) {
+        next.push(m);
+        m *= p;
+      }
     }
     out = next;
   }

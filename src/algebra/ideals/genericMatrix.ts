@@ -11,7 +11,8 @@ import { sisZero } from '../../numbers/scalar.js';
 export const GENERIC_MATRIX_MAX_ENTRIES = 400;
 
 export function genericMatrix(base: string, m: number, n: number): Matrix {
-  if (!Number.isSafeInteger(m) || !Number.isSafeInteger(n) || m < 0 || n < 0) fail(`a generic matrix needs nonnegative sizes, not ${m}×${n}`);
+  if (!Number.isSafeInteger(m) || !Number.isSafeInteger(n) || m < 0 || n < 0)
+    fail(`a generic matrix needs nonnegative sizes, not ${m}×${n}`);
   if (m * n > GENERIC_MATRIX_MAX_ENTRIES) fail(`a generic ${m}×${n} matrix has more than ${GENERIC_MATRIX_MAX_ENTRIES} entries`);
   const e: PolyLike[] = [];
   for (let i = 1; i <= m; i++) for (let j = 1; j <= n; j++) e.push(variable(`${base}[${i},${j}]`));
@@ -61,7 +62,12 @@ export function minorsOf(M: Matrix, k: number, rowsOf?: readonly number[], colsO
   const out: PolyLike[] = [];
   for (const rs of subsets(R.length, k))
     for (const cs of subsets(C.length, k)) {
-      const d = polynomialDeterminant(M.entries, M.cols, rs.map((i) => R[i]), cs.map((j) => C[j]));
+      const d = polynomialDeterminant(
+        M.entries,
+        M.cols,
+        rs.map((i) => R[i]),
+        cs.map((j) => C[j]),
+      );
       if (isPolynomial(d) || !sisZero(d)) out.push(d);
     }
   return out;

@@ -125,9 +125,11 @@ export class Ideal implements Structured {
     if (o === this) return true;
     if (o.prime !== this.prime || o.nv !== this.nv) return false;
     for (let v = 0; v < this.nv; v++) if (o.ring[v] !== this.ring[v]) return false;
-    const ma = this.asMonomialIdeal(), mb = o.asMonomialIdeal();
+    const ma = this.asMonomialIdeal(),
+      mb = o.asMonomialIdeal();
     if (ma && mb) return ma.equals(mb);
-    const a = this.canonicalBasis(), b = o.canonicalBasis();
+    const a = this.canonicalBasis(),
+      b = o.canonicalBasis();
     return a.length === b.length && a.every((g, i) => polyText(g) === polyText(b[i]));
   }
 
@@ -188,12 +190,18 @@ export function isIdeal(v: unknown): v is Ideal {
 
 registerDecoder('ideal', (x) => {
   const o = x as { generators?: unknown; ring?: unknown; prime?: unknown };
-  if (!o || typeof o !== 'object' || !Array.isArray(o.generators) || !o.generators.every((g) => typeof g === 'string' || typeof g === 'number'))
+  if (
+    !o ||
+    typeof o !== 'object' ||
+    !Array.isArray(o.generators) ||
+    !o.generators.every((g) => typeof g === 'string' || typeof g === 'number')
+  )
     fail('an ideal record has "generators": a list of polynomials written as text');
   const gens = (o.generators as (string | number)[]).map((g) => (typeof g === 'number' ? g : parsePolynomialText(g)));
   let ring: number[] = [];
   if (o.ring !== undefined) {
-    if (!Array.isArray(o.ring) || !o.ring.every((v) => typeof v === 'string')) fail('the "ring" of an ideal record is a list of variable names');
+    if (!Array.isArray(o.ring) || !o.ring.every((v) => typeof v === 'string'))
+      fail('the "ring" of an ideal record is a list of variable names');
     ring = (o.ring as string[]).map(varId);
   }
   if (o.prime !== undefined && (typeof o.prime !== 'number' || !Number.isSafeInteger(o.prime)))

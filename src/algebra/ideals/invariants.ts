@@ -33,8 +33,7 @@ function withStop(opts: InvariantOptions): InvariantOptions {
 
 /** The reduced Gröbner basis of I for the order (whose variables must include I's ring). */
 export function basisFor(I: Ideal, order: TermOrder, opts: InvariantOptions = {}): PolyLike[] {
-  for (const id of I.ring)
-    if (order.indexOf(id) < 0) fail(`the term order does not order the variable ${varName(id)} of the ideal's ring`);
+  for (const id of I.ring) if (order.indexOf(id) < 0) fail(`the term order does not order the variable ${varName(id)} of the ideal's ring`);
   return groebnerBasis(I.gens, order, I.groebnerOptions(opts));
 }
 
@@ -47,9 +46,10 @@ export function initialIdealOf(I: Ideal, order: TermOrder, opts: InvariantOption
   const rows = G.map((g) => {
     const row = new Int32Array(I.nv);
     const lt = leadingTerm(g, order);
-    if (lt) lt.exps.forEach((e, v) => {
-      if (e > 0) row[where[v]] = e;
-    });
+    if (lt)
+      lt.exps.forEach((e, v) => {
+        if (e > 0) row[where[v]] = e;
+      });
     return row;
   });
   return MonomialIdeal.of(I.ring, rows);

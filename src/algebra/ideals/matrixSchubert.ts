@@ -68,7 +68,8 @@ export function matrixSchubertGenerators(w: readonly number[], base: string): { 
   const r = rankMatrix(w);
   const gens: PolyLike[] = [];
   for (const [p, q] of essentialSet(w)) {
-    const rows = Array.from({ length: p }, (_, i) => i), cols = Array.from({ length: q }, (_, j) => j);
+    const rows = Array.from({ length: p }, (_, i) => i),
+      cols = Array.from({ length: q }, (_, j) => j);
     gens.push(...minorsOf(Z, r[p - 1][q - 1] + 1, rows, cols));
   }
   const ring: number[] = [];
@@ -87,7 +88,8 @@ export function antidiagonalVariableOrder(ring: readonly number[]): number[] {
   }
   return ring.slice().sort((a, b) => {
     if (varBase(a) !== varBase(b)) return rankOf(a) - rankOf(b);
-    const [ia, ja] = varIndices(a), [ib, jb] = varIndices(b);
+    const [ia, ja] = varIndices(a),
+      [ib, jb] = varIndices(b);
     return ia !== ib ? ia - ib : jb - ja;
   });
 }

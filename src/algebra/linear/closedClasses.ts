@@ -15,7 +15,10 @@ export function stronglyConnected(c: SparseChain): { comp: Int32Array; count: nu
   const onStack = new Uint8Array(n);
   const callState = new Int32Array(n); // DFS frames: state
   const callEdge = new Int32Array(n); // DFS frames: next edge to look at
-  let sp = 0, depth = 0, counter = 0, count = 0;
+  let sp = 0,
+    depth = 0,
+    counter = 0,
+    count = 0;
   for (let root = 0; root < n; root++) {
     if (index[root] >= 0) continue;
     callState[0] = root;

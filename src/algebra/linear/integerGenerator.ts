@@ -31,7 +31,8 @@ export function integerGenerator(c: SparseChain): IntegerGenerator | null {
   const weight = new Float64Array(c.target.length);
   const total = new Float64Array(n);
   for (let s = 0; s < n; s++) {
-    const start = c.rowStart[s], end = c.rowStart[s + 1];
+    const start = c.rowStart[s],
+      end = c.rowStart[s + 1];
     let plain = typeof c.total[s] === 'number';
     for (let k = start; k < end && plain; k++) plain = typeof c.weight[k] === 'number';
     if (plain) {

@@ -34,7 +34,7 @@ function colourWeight(c: number, salt: number, q: number): number {
   let h = Math.imul(c + 1, 0x9e3779b1) ^ Math.imul(salt, 0x85ebca6b);
   h = Math.imul(h ^ (h >>> 15), 0x2c1b3c6d);
   h ^= h >>> 12;
-  return (h >>> 0) % (q - 1) + 1;
+  return ((h >>> 0) % (q - 1)) + 1;
 }
 
 /** Sums of products of two residues below 2^23 are reduced before they could pass 2^53. */
@@ -42,14 +42,16 @@ const BIG = 2 ** 52;
 
 export function equitablePartition(c: SparseChain): Partition | null {
   const n = c.size;
-  const r1 = transitionResidues(c, Q1), r2 = transitionResidues(c, Q2);
+  const r1 = transitionResidues(c, Q1),
+    r2 = transitionResidues(c, Q2);
   if (!r1 || !r2) return null;
   // Incoming edges (transpose), with their residues copied so the rounds read them in order.
   const inStart = new Int32Array(n + 1);
   for (let k = 0; k < c.target.length; k++) inStart[c.target[k] + 1]++;
   for (let t = 0; t < n; t++) inStart[t + 1] += inStart[t];
   const inSource = new Int32Array(c.target.length);
-  const in1 = new Float64Array(c.target.length), in2 = new Float64Array(c.target.length);
+  const in1 = new Float64Array(c.target.length),
+    in2 = new Float64Array(c.target.length);
   const fillPos = inStart.slice(0, n);
   for (let s = 0; s < n; s++) {
     for (let k = c.rowStart[s]; k < c.rowStart[s + 1]; k++) {
@@ -67,7 +69,8 @@ export function equitablePartition(c: SparseChain): Partition | null {
   for (let round = 0; ; round++) {
     // Per colour, pseudo-random residues for outgoing mass, incoming mass and the colour itself:
     // w1[3k], w1[3k+1], w1[3k+2] modulo Q1, the same in w2 modulo Q2.
-    const w1 = new Float64Array(3 * count), w2 = new Float64Array(3 * count);
+    const w1 = new Float64Array(3 * count),
+      w2 = new Float64Array(3 * count);
     for (let k = 0; k < count; k++) {
       for (let e = 0; e < 3; e++) {
         w1[3 * k + e] = colourWeight(k, 6 * round + 2 * e, Q1);
@@ -79,7 +82,8 @@ export function equitablePartition(c: SparseChain): Partition | null {
     table.clear();
     for (let s = 0; s < n; s++) {
       const cs = 3 * colour[s];
-      let h1 = w1[cs + 2], h2 = w2[cs + 2];
+      let h1 = w1[cs + 2],
+        h2 = w2[cs + 2];
       for (let k = rowStart[s]; k < rowStart[s + 1]; k++) {
         const col = 3 * colour[target[k]];
         h1 += r1[k] * w1[col];

@@ -40,7 +40,10 @@ export function reduce(x: number, p: number): number {
 
 /** a^-1 mod p by the extended Euclidean algorithm; 0 when a = 0 (callers check). */
 export function invMod(a: number, p: number): number {
-  let r0 = p, r1 = a, t0 = 0, t1 = 1;
+  let r0 = p,
+    r1 = a,
+    t0 = 0,
+    t1 = 1;
   while (r1 !== 0) {
     const q = Math.floor(r0 / r1);
     let t = r0 - q * r1;

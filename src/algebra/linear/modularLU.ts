@@ -116,7 +116,8 @@ export class ModularLU {
     for (let e = 0; e < sparseOrder.length; e++) {
       const v = rhs[sparseOrder[e]];
       if (v === 0) continue;
-      const rows = this.lRows[e], vals = this.lVals[e];
+      const rows = this.lRows[e],
+        vals = this.lVals[e];
       for (let q = 0; q < rows.length; q++) {
         const s = rhs[rows[q]] + mulMod(vals[q], v, p);
         rhs[rows[q]] = s >= p ? s - p : s;
@@ -152,7 +153,8 @@ export class ModularLU {
     for (let i = 0; i < r; i++) x[denseOrder[i]] = xd[i];
     for (let e = sparseOrder.length - 1; e >= 0; e--) {
       const k = sparseOrder[e];
-      const rc = this.uCols[e], rv = this.uVals[e];
+      const rc = this.uCols[e],
+        rv = this.uVals[e];
       let s = 0;
       for (let q = 0; q < rc.length; q++) {
         s += rv[q] * x[rc[q]];
@@ -218,8 +220,10 @@ export function factorModP(
   for (const r of rows) nnz += r.size;
 
   const active = new Uint8Array(m).fill(1);
-  const uCols: Int32Array[] = [], uVals: Float64Array[] = [];
-  const lRows: Int32Array[] = [], lVals: Float64Array[] = [];
+  const uCols: Int32Array[] = [],
+    uVals: Float64Array[] = [];
+  const lRows: Int32Array[] = [],
+    lVals: Float64Array[] = [];
   const pivInv = new Float64Array(m);
   const cost = (k: number) => (rows[k].size - 1) * (cols[k].size - 1);
 
@@ -363,8 +367,10 @@ function eliminateDense(a: Float64Array, r: number, k: number, inv: number, p: n
   const rk = k * r;
   let i = k + 1;
   for (; i + 1 < r; i += 2) {
-    const ri = i * r, ri2 = ri + r;
-    const a1 = reduce(a[ri + k], p), a2 = reduce(a[ri2 + k], p);
+    const ri = i * r,
+      ri2 = ri + r;
+    const a1 = reduce(a[ri + k], p),
+      a2 = reduce(a[ri2 + k], p);
     const f1 = a1 === 0 ? 0 : p - mulMod(a1, inv, p);
     const f2 = a2 === 0 ? 0 : p - mulMod(a2, inv, p);
     a[ri + k] = f1;

@@ -52,7 +52,9 @@ export class PadicKernel {
   /** Adds the next p-adic digit to `values`. */
   step(): void {
     const { c, g, lu } = this;
-    const p = lu.p, n = c.size, f = lu.free;
+    const p = lu.p,
+      n = c.size,
+      f = lu.free;
     let z: Float64Array;
     if (this.digits === 0) z = lu.kernel();
     else {

@@ -41,7 +41,10 @@ export class CrtVector implements ResidueVector {
 
 function invModBig(a: number, p: number): number {
   // p < 2^23, so plain doubles are exact here.
-  let r0 = p, r1 = a, t0 = 0, t1 = 1;
+  let r0 = p,
+    r1 = a,
+    t0 = 0,
+    t1 = 1;
   while (r1 !== 0) {
     const q = Math.floor(r0 / r1);
     [r0, r1] = [r1, r0 - q * r1];
@@ -70,14 +73,18 @@ export function rationalReconstruct(a: bigint, m: bigint, bound: bigint): [bigin
   if (a < 0n) a += m;
   if (a <= bound) return [a, 1n];
   if (m - a <= bound) return [a - m, 1n];
-  let r0 = m, r1 = a, t0 = 0n, t1 = 1n;
+  let r0 = m,
+    r1 = a,
+    t0 = 0n,
+    t1 = 1n;
   while (r1 > bound) {
     const q = r0 / r1;
     [r0, r1] = [r1, r0 - q * r1];
     [t0, t1] = [t1, t0 - q * t1];
   }
   if (t1 === 0n) return null;
-  let n = r1, d = t1;
+  let n = r1,
+    d = t1;
   if (d < 0n) {
     n = -n;
     d = -d;

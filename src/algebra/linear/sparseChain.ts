@@ -49,7 +49,9 @@ export function buildChain(
     const start = targets.length;
     for (const [t, w] of row(s)) {
       if (!isScalar(w)) {
-        fail(`the move from ${describe(s)} to ${describe(t)} has weight ${weightText(w)}, which is not a number; weights must be nonnegative integers or rationals`);
+        fail(
+          `the move from ${describe(s)} to ${describe(t)} has weight ${weightText(w)}, which is not a number; weights must be nonnegative integers or rationals`,
+        );
       }
       if (scmp(w, 0) < 0) {
         fail(`the move from ${describe(s)} to ${describe(t)} has the negative weight ${w.toString()}; weights must be nonnegative`);

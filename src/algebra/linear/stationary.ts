@@ -161,9 +161,7 @@ function solveByPrimes(
   let expected = 3;
   for (let k = 0; k < maxPrimes; k++) {
     const p = modPrime(k);
-    const onProgress = opts.onProgress
-      ? (f: number) => opts.onProgress!(Math.min(0.99, (used + f) / expected))
-      : undefined;
+    const onProgress = opts.onProgress ? (f: number) => opts.onProgress!(Math.min(0.99, (used + f) / expected)) : undefined;
     const r = stationaryModP(c, p, { plan, onProgress });
     if (!r) continue; // an unlucky prime
     plan = r.plan;

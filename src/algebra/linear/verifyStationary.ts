@@ -87,7 +87,8 @@ function balancesByLimbs(c: SparseChain, pi: CommonFraction, C: bigint[], maxC: 
   for (let s = 0; s < n; s++) {
     const base = s * J;
     for (let k = rowStart[s]; k < rowStart[s + 1]; k++) {
-      const w = weight[k], t = target[k] * J;
+      const w = weight[k],
+        t = target[k] * J;
       for (let j = 0; j < J; j++) acc[t + j] += limbs[base + j] * w;
     }
   }

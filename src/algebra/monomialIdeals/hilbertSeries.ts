@@ -78,14 +78,21 @@ export function kPolynomialTerms(M: MonomialIdeal, weights: readonly Int32Array[
     const fs = factors.slice();
     for (const g of gens) {
       let alone = true;
-      for (let v = 0; v < nv; v++) if (g[v] && count[v] > 1) { alone = false; break; }
+      for (let v = 0; v < nv; v++)
+        if (g[v] && count[v] > 1) {
+          alone = false;
+          break;
+        }
       if (alone) fs.push(degOf(g));
       else rest.push(g);
     }
     if (rest.length === 0) return leaf(shift, sign, fs);
     let x = 0;
     for (let v = 1; v < nv; v++) if (count[v] > count[x]) x = v;
-    const exps = rest.filter((g) => g[x] > 0).map((g) => g[x]).sort((a, b) => a - b);
+    const exps = rest
+      .filter((g) => g[x] > 0)
+      .map((g) => g[x])
+      .sort((a, b) => a - b);
     const e = exps[(exps.length - 1) >> 1];
     // M + (x^e): generators not divisible by x^e, and x^e.
     const plus: Exponents[] = [];

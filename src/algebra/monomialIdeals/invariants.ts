@@ -59,4 +59,3 @@ export function hilbertFunctionValue(numerator: readonly Int[], n: number, d: nu
   }
   return s;
 }
-

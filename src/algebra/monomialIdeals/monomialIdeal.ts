@@ -22,7 +22,8 @@ export function totalDegreeOf(a: Exponents): number {
 
 /** Total degree first, then lexicographic with the first variable most significant; descending. */
 function compareDescending(a: Exponents, b: Exponents): number {
-  const da = totalDegreeOf(a), db = totalDegreeOf(b);
+  const da = totalDegreeOf(a),
+    db = totalDegreeOf(b);
   if (da !== db) return db - da;
   for (let v = 0; v < a.length; v++) if (a[v] !== b[v]) return b[v] - a[v];
   return 0;

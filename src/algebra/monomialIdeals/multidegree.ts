@@ -30,12 +30,16 @@ export interface RowColumnGrading {
 
 /** The grading deg z[i,j] = x[i] (y undefined) or x[i] - y[j] on the ring's variables. */
 export function rowColumnGrading(ring: Int32Array, x: string, y?: string): RowColumnGrading {
-  const rows = new Map<number, number>(), cols = new Map<number, number>();
-  const coordinates: number[] = [], isColumn: boolean[] = [];
+  const rows = new Map<number, number>(),
+    cols = new Map<number, number>();
+  const coordinates: number[] = [],
+    isColumn: boolean[] = [];
   const idx = Array.from(ring, (id) => {
     const ind = varIndices(id);
     if (isBareVar(id) || (y !== undefined && ind.length !== 2))
-      fail(`this grading gives z[i,j] the degree x[i]${y ? ' - y[j]' : ''}; the variable ${varName(id)} has no ${y ? 'two indices' : 'index'}`);
+      fail(
+        `this grading gives z[i,j] the degree x[i]${y ? ' - y[j]' : ''}; the variable ${varName(id)} has no ${y ? 'two indices' : 'index'}`,
+      );
     return ind;
   });
   const rowList = [...new Set(idx.map((ind) => ind[0]))].sort((a, b) => a - b);

@@ -18,12 +18,15 @@ import { uniAdd, uniMul, uniNeg, type Uni } from './qtTables.js';
 export function charge(word: readonly number[]): number {
   const n = word.length;
   const used = new Uint8Array(n);
-  let left = n, total = 0;
+  let left = n,
+    total = 0;
   while (left > 0) {
-    let pos = n, index = 0;
+    let pos = n,
+      index = 0;
     for (let r = 1; ; r++) {
       // Search leftwards from pos - 1, wrapping around once.
-      let found = -1, wrapped = false;
+      let found = -1,
+        wrapped = false;
       for (let step = 1; step <= n; step++) {
         let q = pos - step;
         if (q < 0) {

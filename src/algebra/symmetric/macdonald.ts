@@ -58,7 +58,8 @@ function monomialCoefficient(cells: Cell[], lam: Parts, dim: number): Int[] {
     const cell = cells[k];
     for (let v = 1; v <= left.length; v++) {
       if (left[v - 1] === 0) continue;
-      let di = 0, dm = 0;
+      let di = 0,
+        dm = 0;
       for (const u of cell.attackers) if (sigma[u] > v) di++;
       if (cell.above >= 0 && sigma[cell.above] > v) {
         dm += cells[cell.above].leg + 1;

@@ -54,7 +54,8 @@ export function partsKey(p: Parts): string {
 
 /** Decreasing lexicographic comparison: negative when a comes first (larger degree first). */
 export function compareParts(a: Parts, b: Parts): number {
-  const da = sizeOfParts(a), db = sizeOfParts(b);
+  const da = sizeOfParts(a),
+    db = sizeOfParts(b);
   if (da !== db) return db - da;
   const n = Math.min(a.length, b.length);
   for (let i = 0; i < n; i++) if (a[i] !== b[i]) return b[i] - a[i];
@@ -105,7 +106,8 @@ export function containsParts(lam: Parts, mu: Parts): boolean {
 /** The union of two partitions (parts merged, decreasing). */
 export function unionParts(a: Parts, b: Parts): number[] {
   const out: number[] = [];
-  let i = 0, j = 0;
+  let i = 0,
+    j = 0;
   while (i < a.length || j < b.length) {
     if (j >= b.length || (i < a.length && a[i] >= b[j])) out.push(a[i++]);
     else out.push(b[j++]);

@@ -45,7 +45,12 @@ export function plethysmOf(f: SymLike, g: SymLike): SymLike {
     let m = cache.get(k);
     if (!m) {
       m = new Map();
-      for (const t of G) addTo(m, t.parts.map((x) => x * k), adams(t.coef, k));
+      for (const t of G)
+        addTo(
+          m,
+          t.parts.map((x) => x * k),
+          adams(t.coef, k),
+        );
       cache.set(k, m);
     }
     return m;
@@ -56,5 +61,8 @@ export function plethysmOf(f: SymLike, g: SymLike): SymLike {
     for (const k of t.parts) prod = multiply(prod, pk(k));
     for (const e of prod.values()) addTo(total, e.parts, pmul(t.coef, e.coef));
   }
-  return fromBasis('power', [...total.values()].map((e) => [e.parts, e.coef] as const));
+  return fromBasis(
+    'power',
+    [...total.values()].map((e) => [e.parts, e.coef] as const),
+  );
 }

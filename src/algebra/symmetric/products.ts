@@ -84,7 +84,8 @@ export function symPow(a: SymLike, e: number): SymLike {
   if (!isSymmetricFunction(a)) return ppow(a, e);
   if (!Number.isInteger(e) || e < 0) fail(`a symmetric function to a negative power (${e}) is not a symmetric function`);
   checkDegree(a.degree * e, 'a power of a symmetric function');
-  let result: SymLike = 1, base: SymLike = a;
+  let result: SymLike = 1,
+    base: SymLike = a;
   while (e > 0) {
     if (e & 1) result = symMul(result, base);
     e = Math.floor(e / 2);

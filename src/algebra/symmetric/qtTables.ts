@@ -56,7 +56,8 @@ export type Bi = Int[][];
 
 /** sum c_ij q^i t^j at values of q and t. */
 export function evalBi(c: Bi, q: PolyLike, t: PolyLike): PolyLike {
-  const qi = asVariable(q), ti = asVariable(t);
+  const qi = asVariable(q),
+    ti = asVariable(t);
   if (qi !== undefined && ti !== undefined && qi !== ti) {
     const terms: [number[], Int][] = [];
     c.forEach((row, i) =>

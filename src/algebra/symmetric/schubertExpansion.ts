@@ -18,7 +18,8 @@ import { xCoefficients } from './specialize.js';
 const MAX_STEPS = 20_000;
 
 function compareLeading(a: readonly number[], b: readonly number[]): number {
-  let da = 0, db = 0;
+  let da = 0,
+    db = 0;
   for (const x of a) da += x;
   for (const x of b) db += x;
   if (da !== db) return da - db;
@@ -35,7 +36,8 @@ function maxIndex(p: PolyLike, x: string, call: string): number {
     for (const id of p.vars)
       if (varBase(id) === x) {
         const i = varIndex(id);
-        if (i === null || i < 1) fail(`${call}: ${polyText(p)} contains ${x}${i === null ? '' : `[${i}]`}; the family ${x} starts at ${x}[1]`);
+        if (i === null || i < 1)
+          fail(`${call}: ${polyText(p)} contains ${x}${i === null ? '' : `[${i}]`}; the family ${x} starts at ${x}[1]`);
         m = Math.max(m, i);
       }
   return m;

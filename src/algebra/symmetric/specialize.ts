@@ -78,7 +78,11 @@ export function fromPolynomialIn(p: PolyLike, x: string, m: number, call: string
       ok = other !== undefined && pequals(other.coef, coef);
     }
     if (!ok) {
-      const mono = e.map((k, i) => (k === 0 ? '' : k === 1 ? `${x}[${i + 1}]` : `${x}[${i + 1}]^${k}`)).filter((s) => s).join('*') || '1';
+      const mono =
+        e
+          .map((k, i) => (k === 0 ? '' : k === 1 ? `${x}[${i + 1}]` : `${x}[${i + 1}]^${k}`))
+          .filter((s) => s)
+          .join('*') || '1';
       fail(`${call}: ${polyText(p)} is not symmetric in ${x}[1..${m}] (compare the coefficients of ${mono} and its rearrangements)`);
     }
   }

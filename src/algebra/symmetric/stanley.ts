@@ -22,7 +22,8 @@ export function stanleySchurCoefficients(w: readonly number[]): [number[], numbe
   const key = w.join(',');
   const hit = memo.get(key);
   if (hit) return hit;
-  const n = w.length, l = lengthOf(w);
+  const n = w.length,
+    l = lengthOf(w);
   const inverse = new Array<number>(n);
   w.forEach((v, i) => (inverse[v - 1] = i + 1));
   const ext = leftFactorTest(inverse);
@@ -63,7 +64,9 @@ export function stanleySchurCoefficients(w: readonly number[]): [number[], numbe
 export function monomialCoefficientOfStanley(w: readonly number[], lam: readonly number[]): number {
   const n = w.length;
   const ext = leftFactorTest(w);
-  let states = new Map<string, { u: number[]; count: number }>([[Array.from({ length: n }, (_, i) => i + 1).join(','), { u: Array.from({ length: n }, (_, i) => i + 1), count: 1 }]]);
+  let states = new Map<string, { u: number[]; count: number }>([
+    [Array.from({ length: n }, (_, i) => i + 1).join(','), { u: Array.from({ length: n }, (_, i) => i + 1), count: 1 }],
+  ]);
   for (const len of lam) {
     // Within a block: strictly decreasing letters; the state carries the last letter.
     let inner = new Map<string, { u: number[]; count: number; last: number }>();

@@ -43,7 +43,8 @@ export class SymmetricFunction implements Structured {
     if (o === this) return true;
     if (!(o instanceof SymmetricFunction) || o.terms.length !== this.terms.length) return false;
     for (let i = 0; i < this.terms.length; i++) {
-      const a = this.terms[i], b = o.terms[i];
+      const a = this.terms[i],
+        b = o.terms[i];
       if (partsKey(a.parts) !== partsKey(b.parts) || !pequals(a.coef, b.coef)) return false;
     }
     return true;

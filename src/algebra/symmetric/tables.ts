@@ -124,14 +124,16 @@ class LazyTables implements DegreeTables {
 
   get Kinv(): readonly (readonly Int[])[] {
     if (!this.kinv) {
-      const K = this.K, N = this.parts.length;
+      const K = this.K,
+        N = this.parts.length;
       const inv: Int[][] = this.parts.map(() => new Array<Int>(N).fill(0));
       for (let i = 0; i < N; i++) {
         inv[i][i] = 1;
         for (let j = i + 1; j < N; j++) {
           let s: Int = 0;
           for (let k = i; k < j; k++) {
-            const a = inv[i][k], b = K[k][j];
+            const a = inv[i][k],
+              b = K[k][j];
             if (a !== 0 && b !== 0) s = iadd(s, imul(a, b));
           }
           inv[i][j] = ineg(s);

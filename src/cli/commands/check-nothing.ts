@@ -18,9 +18,14 @@ export const MAX_FILE_SAMPLE_COUNT = 10_000_000;
 export function refuseNothingToCheck(compiled: CompiledConjecture[], req: RunRequest, shownPaths: string[]): void {
   if (compiled.length === 0) {
     const where = shownPaths.length ? shownPaths.join(', ') : 'the conjecture paths';
-    throw new InputError(`nothing to check: ${where} ${shownPaths.length === 1 ? 'holds' : 'hold'} no conjecture (a document with "conjecture: <id>" and a claim)`);
+    throw new InputError(
+      `nothing to check: ${where} ${shownPaths.length === 1 ? 'holds' : 'hold'} no conjecture (a document with "conjecture: <id>" and a claim)`,
+    );
   }
-  for (const [opt, list] of [['--sizes', req.sizes], ['--sample', req.sampleRanges]] as const) {
+  for (const [opt, list] of [
+    ['--sizes', req.sizes],
+    ['--sample', req.sampleRanges],
+  ] as const) {
     for (const [name, lo, hi] of list) {
       const names = [...new Set(compiled.flatMap((cc) => cc.bindings.filter((b) => b.source.kind === 'range').map((b) => b.name)))];
       if (!names.includes(name)) {
@@ -38,7 +43,11 @@ export function refuseNothingToCheck(compiled: CompiledConjecture[], req: RunReq
   for (const cc of compiled) {
     const fileCount = cc.spec.sample?.count ?? null;
     if (fileCount !== null && fileCount > MAX_FILE_SAMPLE_COUNT)
-      throw new InputError(`${cc.spec.id}: sample count ${fileCount.toLocaleString('en-US')} is more than the ${MAX_FILE_SAMPLE_COUNT.toLocaleString('en-US')} random cases per size a file may ask for`, cc.spec.pos, String(fileCount));
+      throw new InputError(
+        `${cc.spec.id}: sample count ${fileCount.toLocaleString('en-US')} is more than the ${MAX_FILE_SAMPLE_COUNT.toLocaleString('en-US')} random cases per size a file may ask for`,
+        cc.spec.pos,
+        String(fileCount),
+      );
     if (cc.sizeIndex < 0) continue;
     const b = cc.bindings[cc.sizeIndex];
     if (b.source.kind !== 'range') continue;
@@ -51,7 +60,11 @@ export function refuseNothingToCheck(compiled: CompiledConjecture[], req: RunReq
       throw e;
     }
     if (!o && sizes.length === 0)
-      throw new InputError(`${cc.spec.id}: the range of ${b.name} is empty (its first bound is above its last), so nothing would be checked`, b.pos, b.name);
+      throw new InputError(
+        `${cc.spec.id}: the range of ${b.name} is empty (its first bound is above its last), so nothing would be checked`,
+        b.pos,
+        b.name,
+      );
     if (!req.exhaustive) continue;
     const { count, ranges } = sampleSettingsOf(cc, { count: req.count ?? undefined, sampleRanges: overrides(req.sampleRanges) });
     if (count > 0 && ranges.size > 0) continue;

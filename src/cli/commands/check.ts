@@ -87,7 +87,9 @@ export const MAX_SAMPLE_COUNT = 10_000_000;
 
 function limitCount(n: number): number {
   if (n > MAX_SAMPLE_COUNT)
-    throw new InputError(`--count ${n.toLocaleString('en-US')} is more than the ${MAX_SAMPLE_COUNT.toLocaleString('en-US')} random cases per size a run may draw`);
+    throw new InputError(
+      `--count ${n.toLocaleString('en-US')} is more than the ${MAX_SAMPLE_COUNT.toLocaleString('en-US')} random cases per size a run may draw`,
+    );
   return n;
 }
 
@@ -125,7 +127,9 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   // More threads than cores only adds memory and switching: use every core, and say so.
   const cores = Math.max(1, availableParallelism());
   if (workers > cores) {
-    t.err(`${t.color.yellow('note:')} --workers ${workers} is more than the ${cores} core${cores === 1 ? '' : 's'} of this machine; using ${cores}.\n`);
+    t.err(
+      `${t.color.yellow('note:')} --workers ${workers} is more than the ${cores} core${cores === 1 ? '' : 's'} of this machine; using ${cores}.\n`,
+    );
     workers = cores;
   }
   req.shard = shardFlag(flags.shard);
@@ -145,7 +149,10 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
   }
   refuseNothingToCheck(compiled, req, paths);
   // --no-ledger records nothing: no counterexample file either, unless asked for.
-  const recorder: CheckRecorder = createCheckRecorder(project, compiled, { ledger: flags.ledger, counterexamples: flags.ledger !== false || flags.counterexamples === true });
+  const recorder: CheckRecorder = createCheckRecorder(project, compiled, {
+    ledger: flags.ledger,
+    counterexamples: flags.ledger !== false || flags.counterexamples === true,
+  });
   req.regression = recorder.regressionCases(compiled);
   if (flags.resume) req.resume = heldRecordsForResume(flags.ledger, project.config.ledger, compiled);
 
@@ -215,7 +222,11 @@ export async function runCheck(paths: string[], flags: CheckFlags, t: Terminal):
     t.out(formatSummary(results, performance.now() - started, style));
     if (interrupted) {
       const left = compiled.length - results.length;
-      t.out(t.color.yellow(`Interrupted${left ? `: ${left} conjecture${left === 1 ? '' : 's'} not started` : ''}; what was finished is recorded.\n`));
+      t.out(
+        t.color.yellow(
+          `Interrupted${left ? `: ${left} conjecture${left === 1 ? '' : 's'} not started` : ''}; what was finished is recorded.\n`,
+        ),
+      );
     }
   }
   // A "holds" over no case at all (a family found empty only while running) is no pass.

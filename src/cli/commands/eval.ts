@@ -24,7 +24,12 @@ export const addEvalCommand: AddCommand = (program, t, setExit) => {
     .action(async (expr: string, flags: { let?: string[]; indeterminates?: string; json?: boolean; allowPlugins?: boolean }) => {
       const project = await openCommandProject(t, undefined, { allowPlugins: flags.allowPlugins }); // plugins are part of the language
       const lets: Array<[string, string]> = (flags.let ?? []).map(parseLetOption);
-      const vars = flags.indeterminates ? flags.indeterminates.split(',').map((s) => s.trim()).filter(Boolean) : [];
+      const vars = flags.indeterminates
+        ? flags.indeterminates
+            .split(',')
+            .map((s) => s.trim())
+            .filter(Boolean)
+        : [];
       let v;
       try {
         v = evaluate(expr, lets, vars);

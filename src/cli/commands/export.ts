@@ -42,7 +42,8 @@ function looksLikeCounterexample(path: string): boolean {
 
 function format(flags: ExportFlags): 'latex' | 'markdown' | 'svg' {
   const chosen = (['latex', 'markdown', 'svg'] as const).filter((f) => flags[f]);
-  if (chosen.length > 1) throw new InputError(`choose one of --latex, --markdown and --svg (got ${chosen.map((c) => `--${c}`).join(' and ')})`);
+  if (chosen.length > 1)
+    throw new InputError(`choose one of --latex, --markdown and --svg (got ${chosen.map((c) => `--${c}`).join(' and ')})`);
   if (flags.document && chosen[0] !== 'latex') throw new InputError('--document goes with --latex (it writes a whole .tex file)');
   return chosen[0] ?? 'markdown';
 }
@@ -51,7 +52,8 @@ function svgOf(m: CounterexampleModel, binding: string | undefined): string {
   const all = [...m.bindings, ...m.values];
   if (binding !== undefined) {
     const v = all.find((b) => b.name === binding);
-    if (!v) throw new InputError(`the counterexample has no binding or value named ${binding} (it has ${all.map((b) => b.name).join(', ')})`);
+    if (!v)
+      throw new InputError(`the counterexample has no binding or value named ${binding} (it has ${all.map((b) => b.name).join(', ')})`);
     if (!v.scene) throw new InputError(`${binding} = ${v.text.slice(0, 80)} has no picture (pictures exist for combinatorial objects)`);
     return sceneToSvg(v.scene) + '\n';
   }
@@ -71,15 +73,15 @@ function notebookText(n: NotebookModel, fmt: 'latex' | 'markdown', document: boo
 export const addExportCommand: AddCommand = (program, t, setExit) => {
   program
     .command('export')
-    .description('a counterexample, a result or a notebook\'s status as LaTeX, Markdown or SVG, for a paper, a mail or a tracker')
+    .description("a counterexample, a result or a notebook's status as LaTeX, Markdown or SVG, for a paper, a mail or a tracker")
     .argument('<file>', 'a counterexample file, a conjecture file, or a folder of conjectures')
     .option('--latex', 'LaTeX with TikZ pictures (a snippet; needs \\usepackage{tikz})')
     .option('--document', 'with --latex: a whole .tex file that pdflatex compiles as it is')
     .option('--markdown', 'Markdown with the pictures as fenced text (the default)')
-    .option('--svg', 'one picture as SVG (of a counterexample file\'s first binding that has one)')
+    .option('--svg', "one picture as SVG (of a counterexample file's first binding that has one)")
     .option('--binding <NAME>', 'with --svg: the binding or value to draw')
     .option('--id <ID>', 'only the conjecture with this id (for a conjecture file or folder)')
-    .option('--ledger <PATH>', 'the ledger to read (default: the project\'s)')
+    .option('--ledger <PATH>', "the ledger to read (default: the project's)")
     .option('-o, --output <FILE>', 'write to this file instead of standard output')
     .option('--allow-plugins', ALLOW_PLUGINS_HELP)
     .action(async (file: string, flags: ExportFlags) => {
@@ -98,9 +100,13 @@ export const addExportCommand: AddCommand = (program, t, setExit) => {
         }
         if (fmt === 'svg') text = svgOf(m, flags.binding);
         else if (fmt === 'markdown') text = counterexampleMarkdown(m, cover);
-        else text = flags.document ? latexDocument(`Counterexample to ${m.id}`, [counterexampleLatex(m, cover)]) : counterexampleLatex(m, cover);
+        else
+          text = flags.document
+            ? latexDocument(`Counterexample to ${m.id}`, [counterexampleLatex(m, cover)])
+            : counterexampleLatex(m, cover);
       } else {
-        if (fmt === 'svg') throw new InputError(`--svg draws one picture: give it a counterexample file (counterexamples/<id>.yaml), not ${file}`);
+        if (fmt === 'svg')
+          throw new InputError(`--svg draws one picture: give it a counterexample file (counterexamples/<id>.yaml), not ${file}`);
         const project = await openCommandProject(t, file, { allowPlugins: flags.allowPlugins });
         const { model, warnings } = loadNotebook(project, [file], { id: flags.id, ledger: flags.ledger });
         for (const w of warnings) t.err(`${t.color.yellow('warning:')} ${w}\n`);

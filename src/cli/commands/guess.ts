@@ -32,7 +32,10 @@ interface GuessFlags {
 }
 
 function parseTerms(text: string): Scalar[] {
-  const parts = text.split(',').map((s) => s.trim()).filter((s) => s !== '');
+  const parts = text
+    .split(',')
+    .map((s) => s.trim())
+    .filter((s) => s !== '');
   if (parts.length === 0) throw new InputError('--terms takes a comma-separated list of numbers, e.g. --terms 1,2,7,42');
   return parts.map((p) => {
     try {
@@ -50,7 +53,9 @@ function parseInteger(text: string, option: string): number {
 
 function parsePick(text: string, count: number): number[] {
   const out = text.split(',').map((s) => parseInteger(s, '--pick'));
-  for (const k of out) if (k < 1 || k > count) throw new InputError(`--pick ${k}: there ${count === 1 ? 'is 1 guess' : `are ${count} guesses`}; pick among 1..${count}`);
+  for (const k of out)
+    if (k < 1 || k > count)
+      throw new InputError(`--pick ${k}: there ${count === 1 ? 'is 1 guess' : `are ${count} guesses`}; pick among 1..${count}`);
   return [...new Set(out)];
 }
 
@@ -84,17 +89,26 @@ export const addGuessCommand: AddCommand = (program, t, setExit) => {
       } else {
         if (expr === undefined) throw new InputError('give an expression with --over NAME=A..B, or the terms with --terms 1,2,7,...');
         if (flags.over === undefined) throw new InputError(`the expression needs a range: --over n=1..10`);
-        if (flags.offset !== undefined) throw new InputError('--offset goes with --terms; with an expression the range of --over gives the indices');
+        if (flags.offset !== undefined)
+          throw new InputError('--offset goes with --terms; with an expression the range of --over gives the indices');
         const [name, lo, hi] = parseRangeOption(flags.over, '--over');
-        if (hi - lo + 1 > MAX_GUESS_TERMS) throw new InputError(`--over ${flags.over} has ${hi - lo + 1} terms; guessing takes at most ${MAX_GUESS_TERMS} (a guess needs far fewer)`);
+        if (hi - lo + 1 > MAX_GUESS_TERMS)
+          throw new InputError(
+            `--over ${flags.over} has ${hi - lo + 1} terms; guessing takes at most ${MAX_GUESS_TERMS} (a guess needs far fewer)`,
+          );
         const lets: Array<[string, string]> = (flags.let ?? []).map(parseLetOption);
-        if (lets.some(([n]) => n === name)) throw new InputError(`--let ${name}=... names the variable of --over ${flags.over}; give it another name`);
-        if (lets.length && flags.write) throw new InputError('--write cannot carry --let values into the file: write them into the expression');
+        if (lets.some(([n]) => n === name))
+          throw new InputError(`--let ${name}=... names the variable of --over ${flags.over}; give it another name`);
+        if (lets.length && flags.write)
+          throw new InputError('--write cannot carry --let values into the file: write them into the expression');
         terms = scalarColumn(tabulate(expr, name, lo, hi, lets), name, expr);
         if (flags.divideBy !== undefined) divisorColumn = scalarColumn(tabulate(flags.divideBy, name, lo, hi, lets), name, flags.divideBy);
         origin = { expr, variable: name, lo, hi, divisor: flags.divideBy };
       }
-      if (terms.length > MAX_GUESS_TERMS) throw new InputError(`guessing takes at most ${MAX_GUESS_TERMS} terms; this is ${terms.length} (a guess needs far fewer: narrow --over)`);
+      if (terms.length > MAX_GUESS_TERMS)
+        throw new InputError(
+          `guessing takes at most ${MAX_GUESS_TERMS} terms; this is ${terms.length} (a guess needs far fewer: narrow --over)`,
+        );
       const report: GuessReport = guessSequence(
         { offset: origin.lo, terms },
         divisorColumn ? { divisor: { name: 'c', column: { offset: origin.lo, terms: divisorColumn } } } : {},
@@ -104,24 +118,45 @@ export const addGuessCommand: AddCommand = (program, t, setExit) => {
         if (report.guesses.length === 0) throw new InputError('--write: there is no guess to write');
         const picks = flags.pick ? parsePick(flags.pick, report.guesses.length) : report.guesses.map((_, i) => i + 1);
         const to = flags.to === undefined ? origin.hi + 1 : parseInteger(flags.to, '--to');
-        if (origin.expr !== undefined && to <= origin.hi) throw new InputError(`--to ${to} must lie beyond the terms guessed from (n = ${origin.lo}..${origin.hi})`);
-        if (flags.to !== undefined && origin.expr === undefined) throw new InputError('--to needs an expression: a list of terms cannot be computed further');
-        if (existsSync(flags.write) && !flags.force) throw new InputError(`${flags.write} exists; choose another file or add --force to replace it`);
+        if (origin.expr !== undefined && to <= origin.hi)
+          throw new InputError(`--to ${to} must lie beyond the terms guessed from (n = ${origin.lo}..${origin.hi})`);
+        if (flags.to !== undefined && origin.expr === undefined)
+          throw new InputError('--to needs an expression: a list of terms cannot be computed further');
+        if (existsSync(flags.write) && !flags.force)
+          throw new InputError(`${flags.write} exists; choose another file or add --force to replace it`);
         const prefix = flags.id ?? 'guess';
         if (!/^[a-z0-9][a-z0-9-]*$/.test(prefix)) throw new InputError(`--id ${prefix}: ids are lowercase letters, digits and '-'`);
-        const text = guessConjectureFile(picks.map((k) => ({ rank: k, guess: report.guesses[k - 1] })), origin, { to, idPrefix: prefix });
+        const text = guessConjectureFile(
+          picks.map((k) => ({ rank: k, guess: report.guesses[k - 1] })),
+          origin,
+          { to, idPrefix: prefix },
+        );
         writeFileAtomic(flags.write, text);
         written = { file: flags.write, ids: picks.map((k) => `${prefix}-${k}`), to: origin.expr !== undefined ? to : origin.hi };
       }
       if (flags.json) {
-        const head = origin.expr !== undefined ? { expr: origin.expr, over: origin.variable, ...(origin.divisor !== undefined ? { divideBy: origin.divisor } : {}) } : {};
-        t.out(JSON.stringify({ ...head, values: terms.map((x) => encodeValue(x)), ...guessReportJson(report), ...(written ? { written } : {}) }, null, 2) + '\n');
+        const head =
+          origin.expr !== undefined
+            ? { expr: origin.expr, over: origin.variable, ...(origin.divisor !== undefined ? { divideBy: origin.divisor } : {}) }
+            : {};
+        t.out(
+          JSON.stringify(
+            { ...head, values: terms.map((x) => encodeValue(x)), ...guessReportJson(report), ...(written ? { written } : {}) },
+            null,
+            2,
+          ) + '\n',
+        );
       } else {
         const divisor = origin.divisor !== undefined ? `, c(${origin.variable}) = ${origin.divisor}` : '';
-        const header = origin.expr !== undefined ? `a(${origin.variable}) = ${origin.expr}${divisor}, ${origin.variable} = ${origin.lo}..${origin.hi}` : 'the terms given';
+        const header =
+          origin.expr !== undefined
+            ? `a(${origin.variable}) = ${origin.expr}${divisor}, ${origin.variable} = ${origin.lo}..${origin.hi}`
+            : 'the terms given';
         t.out(formatGuesses(report, header, t.color.dim));
         if (written)
-          t.out(`\nWrote ${written.ids.length} conjecture${written.ids.length === 1 ? '' : 's'} (${written.ids.join(', ')}) to ${written.file}, to be checked up to n = ${written.to}: hunch check ${written.file}\n`);
+          t.out(
+            `\nWrote ${written.ids.length} conjecture${written.ids.length === 1 ? '' : 's'} (${written.ids.join(', ')}) to ${written.file}, to be checked up to n = ${written.to}: hunch check ${written.file}\n`,
+          );
       }
       setExit(EXIT.ok);
     });

@@ -23,7 +23,8 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
       const fams = allFamilies();
       const fns = allFunctions();
       const topics = [...new Set(fns.map((f) => f.topic))].sort();
-      let showF = true, showFn = true;
+      let showF = true,
+        showFn = true;
       let fnFilter = (_: (typeof fns)[number]) => true;
       let famFilter = (_: (typeof fams)[number]) => true;
       const showForms = what === undefined || what === 'forms';
@@ -43,7 +44,12 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
           famFilter = (f) => hit(`${f.name} ${f.description}`);
         } else {
           const s = nearest(what, ['families', 'functions', 'forms', ...topics, ...fns.map((f) => f.name), ...fams.map((f) => f.name)]);
-          throw new InputError(`nothing is listed under "${what}"${s ? `; did you mean ${s}?` : ''} (topics: ${topics.join(', ')})`, undefined, what, s);
+          throw new InputError(
+            `nothing is listed under "${what}"${s ? `; did you mean ${s}?` : ''} (topics: ${topics.join(', ')})`,
+            undefined,
+            what,
+            s,
+          );
         }
       }
       const selF = showF ? fams.filter(famFilter) : [];
@@ -52,8 +58,23 @@ export const addListCommand: AddCommand = (program, t, setExit) => {
         t.out(
           JSON.stringify(
             {
-              families: selF.map((f) => ({ name: f.name, signature: f.signature, description: f.description, example: f.example, source: f.source, sampler: Boolean(f.arbitrary) })),
-              functions: selFn.map((f) => ({ name: f.name, topic: f.topic, signature: signatureOf(f), description: f.description, example: f.example, value: f.exampleValue, source: f.source })),
+              families: selF.map((f) => ({
+                name: f.name,
+                signature: f.signature,
+                description: f.description,
+                example: f.example,
+                source: f.source,
+                sampler: Boolean(f.arbitrary),
+              })),
+              functions: selFn.map((f) => ({
+                name: f.name,
+                topic: f.topic,
+                signature: signatureOf(f),
+                description: f.description,
+                example: f.example,
+                value: f.exampleValue,
+                source: f.source,
+              })),
             },
             null,
             2,

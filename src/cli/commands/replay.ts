@@ -38,7 +38,14 @@ export const addReplayCommand: AddCommand = (program, t, setExit) => {
       const budgetMs = flags.budget === undefined ? undefined : parseDuration(flags.budget);
       // The evaluation runs on this thread: Ctrl-C ends the process at once (nothing is written).
       const r = replayCounterexample(file, project, { budgetMs });
-      const code = r.verdict === 'stopped' ? EXIT.interrupted : r.verdict === 'refutes' ? EXIT.ok : r.verdict === 'needs-plugins' || r.verdict === 'not-a-case' ? EXIT.invalid : EXIT.contradicted;
+      const code =
+        r.verdict === 'stopped'
+          ? EXIT.interrupted
+          : r.verdict === 'refutes'
+            ? EXIT.ok
+            : r.verdict === 'needs-plugins' || r.verdict === 'not-a-case'
+              ? EXIT.invalid
+              : EXIT.contradicted;
       if (flags.json) {
         t.out(JSON.stringify({ ...r, file: undefined, conjecture: r.file.conjecture, hash: r.file.hash }, null, 2) + '\n');
         setExit(code);
@@ -59,15 +66,21 @@ export const addReplayCommand: AddCommand = (program, t, setExit) => {
         return;
       }
       for (const p of r.changedPlugins)
-        t.err(`${c.yellow('warning:')} the plugin providing ${p.functions.join(', ')} differs from the one the case was found with (${p.file}).\n`);
+        t.err(
+          `${c.yellow('warning:')} the plugin providing ${p.functions.join(', ')} differs from the one the case was found with (${p.file}).\n`,
+        );
       if (!r.embeddedHashMatches)
-        t.err(`${c.yellow('warning:')} the conjecture inside ${file} was edited after the file was written (its hash no longer matches); replaying it as it is now.\n`);
+        t.err(
+          `${c.yellow('warning:')} the conjecture inside ${file} was edited after the file was written (its hash no longer matches); replaying it as it is now.\n`,
+        );
       if (r.local)
         t.err(
           `${c.yellow('note:')} ${r.file.conjecture} in ${r.local.file} has changed since this counterexample was found, so it is replayed against the conjecture as written in the file. What changed:\n` +
             r.local.differences.map((d) => `    ${d}\n`).join(''),
         );
-      const caseText = Object.entries(r.bindings).map(([k, v]) => `    ${k} = ${v}`).join('\n');
+      const caseText = Object.entries(r.bindings)
+        .map(([k, v]) => `    ${k} = ${v}`)
+        .join('\n');
       switch (r.verdict) {
         case 'refutes':
           t.out(`${c.green('still refutes')} ${id}\n${caseText}\n`);
@@ -79,7 +92,9 @@ export const addReplayCommand: AddCommand = (program, t, setExit) => {
           t.out(`${c.red('no longer refutes')} ${id}: the claim holds for this case\n${caseText}\n`);
           break;
         case 'stopped':
-          t.err(`${c.yellow('stopped:')} ${file}: ${r.error === 'budget' ? 'the budget was reached' : 'interrupted'} before the case was evaluated; nothing is known yet (give more time with --budget)\n`);
+          t.err(
+            `${c.yellow('stopped:')} ${file}: ${r.error === 'budget' ? 'the budget was reached' : 'interrupted'} before the case was evaluated; nothing is known yet (give more time with --budget)\n`,
+          );
           break;
         case 'not-a-case':
           t.err(`${c.red('error:')} ${file}: not a case of this conjecture (${r.error}), so it refutes nothing\n${caseText}\n`);

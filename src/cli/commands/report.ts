@@ -13,10 +13,10 @@ export const addReportCommand: AddCommand = (program, t, setExit) => {
   program
     .command('report')
     .description('one self-contained HTML page of the notebook: outcomes, verified and sampled ranges, counterexamples drawn')
-    .argument('[paths...]', 'files or folders of conjectures (default: the project\'s conjectures)')
+    .argument('[paths...]', "files or folders of conjectures (default: the project's conjectures)")
     .option('-o, --output <FILE>', 'write the page to this file (default: standard output)')
     .option('--allow-plugins', ALLOW_PLUGINS_HELP)
-    .option('--ledger <PATH>', 'the ledger to read (default: the project\'s)')
+    .option('--ledger <PATH>', "the ledger to read (default: the project's)")
     .option('--title <TEXT>', 'the page\'s title (default: "Notebook" and the project folder\'s name)')
     .action(async (paths: string[], flags: { output?: string; ledger?: string; title?: string; allowPlugins?: boolean }) => {
       const project = await openCommandProject(t, paths[0], { allowPlugins: flags.allowPlugins });
@@ -25,7 +25,9 @@ export const addReportCommand: AddCommand = (program, t, setExit) => {
       const page = reportPage(model);
       if (flags.output) {
         writeFileAtomic(flags.output, page);
-        t.err(`wrote ${flags.output}: ${model.entries.length} conjectures, ${model.entries.filter((e) => e.counterexample).length} counterexamples\n`);
+        t.err(
+          `wrote ${flags.output}: ${model.entries.length} conjectures, ${model.entries.filter((e) => e.counterexample).length} counterexamples\n`,
+        );
       } else t.out(page);
       setExit(EXIT.ok);
     });

@@ -42,7 +42,10 @@ export const addSampleCommand: AddCommand = (program, t, setExit) => {
         throw new InputError(`expected a family with its arguments, such as permutations(5), got "${text}"`, undefined, text);
       const family = getFamily(e.callee);
       if (!family) {
-        const s = nearest(e.callee, allFamilies().map((f) => f.name));
+        const s = nearest(
+          e.callee,
+          allFamilies().map((f) => f.name),
+        );
         throw new InputError(`there is no family "${e.callee}"${s ? `; did you mean ${s}?` : ''}`, undefined, text, s);
       }
       const args: Value[] = e.args.map((a) => evaluate(text.slice(a.start, a.end)));
@@ -55,7 +58,11 @@ export const addSampleCommand: AddCommand = (program, t, setExit) => {
       if (flags.json) {
         for (const o of objects) t.out(JSON.stringify(encodeValue(o)) + '\n');
       } else {
-        t.out(t.color.dim(`${count} uniform random ${count === 1 ? 'object' : 'objects'} of ${text} (seed ${seed}; ${family.count(p)} in all)`) + '\n');
+        t.out(
+          t.color.dim(
+            `${count} uniform random ${count === 1 ? 'object' : 'objects'} of ${text} (seed ${seed}; ${family.count(p)} in all)`,
+          ) + '\n',
+        );
         objects.forEach((o, i) => {
           t.out(`\n${count > 1 ? `${i + 1}. ` : ''}${valueToText(o)}\n`);
           const pic = drawValue(o, { unicode: t.unicode });

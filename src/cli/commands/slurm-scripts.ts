@@ -64,7 +64,11 @@ export function arrayScript(p: ClusterPlan): string {
 
 export function mergeScript(p: ClusterPlan): string {
   return (
-    sbatchHeader(p, `${p.jobName}-merge`, ['#SBATCH --ntasks=1', '#SBATCH --cpus-per-task=1', `#SBATCH --output=${p.ledgerDir}/slurm-merge-%j.out`]) +
+    sbatchHeader(p, `${p.jobName}-merge`, [
+      '#SBATCH --ntasks=1',
+      '#SBATCH --cpus-per-task=1',
+      `#SBATCH --output=${p.ledgerDir}/slurm-merge-%j.out`,
+    ]) +
     `# Runs after every task of the array (afterany): merge the shard ledgers into the project ledger\n` +
     '# and report, per conjecture and size, whether the slices present cover the whole.\n' +
     `HUNCH=\${HUNCH:-${q(p.hunch)}}\n` +

@@ -40,13 +40,13 @@ export const addSlurmCommand: AddCommand = (program, t, setExit) => {
   program
     .command('slurm')
     .description('write a Slurm job array that checks conjectures in K shards and merges their ledgers (and the same over ssh)')
-    .argument('[paths...]', 'files or folders of conjectures (default: the project\'s conjectures/)')
+    .argument('[paths...]', "files or folders of conjectures (default: the project's conjectures/)")
     .requiredOption('--shards <K>', 'number of shards (array tasks)')
     .option('--partition <P>', 'the Slurm partition')
     .option('--time <T>', 'time limit of each task (Slurm syntax: 30, 2:00:00, 1-00:00:00)')
     .option('--cpus <C>', 'cores per task; each task runs that many worker threads', '1')
     .option('-o, --output <FILE>', 'the array script to write (the other scripts go beside it)', 'hunch-slurm.sbatch')
-    .option('--ledger <PATH>', 'the project ledger the merge writes into (default: the project\'s)')
+    .option('--ledger <PATH>', "the project ledger the merge writes into (default: the project's)")
     .option('--name <NAME>', 'the job name', 'hunch')
     .option('--id <ID>', 'only the conjecture with this id (repeatable)', collect)
     .option('--sizes <NAME=A..B>', 'passed to hunch check (repeatable)', collect)
@@ -59,14 +59,16 @@ export const addSlurmCommand: AddCommand = (program, t, setExit) => {
       if (shards < 1) throw new InputError(`--shards must be at least 1, got ${f.shards}`);
       const cpus = parseCount(f.cpus ?? '1', '--cpus');
       if (cpus < 1) throw new InputError(`--cpus must be at least 1, got ${f.cpus}`);
-      if (f.time !== undefined && !TIME.test(f.time)) throw new InputError(`--time must be a Slurm time such as 30, 2:00:00 or 1-00:00:00, got ${f.time}`);
-      if (f.name !== undefined && !/^[A-Za-z0-9_.-]+$/.test(f.name)) throw new InputError(`--name may use letters, digits, "_", "." and "-", got ${f.name}`);
+      if (f.time !== undefined && !TIME.test(f.time))
+        throw new InputError(`--time must be a Slurm time such as 30, 2:00:00 or 1-00:00:00, got ${f.time}`);
+      if (f.name !== undefined && !/^[A-Za-z0-9_.-]+$/.test(f.name))
+        throw new InputError(`--name may use letters, digits, "_", "." and "-", got ${f.name}`);
       for (const s of f.sizes ?? []) parseRangeOption(s, '--sizes');
       for (const s of f.sample ?? []) parseRangeOption(s, '--sample');
       if (f.count !== undefined) parseCount(f.count, '--count');
 
       const project = await openProject(paths[0], { plugins: false }); // only the root and config are needed
-      const absPaths = (paths.length ? paths.map((p) => resolve(p)) : project.config.conjectures);
+      const absPaths = paths.length ? paths.map((p) => resolve(p)) : project.config.conjectures;
       const opts: string[] = [];
       for (const id of f.id ?? []) opts.push('--id', q(id));
       for (const s of f.sizes ?? []) opts.push('--sizes', q(s));
@@ -97,7 +99,9 @@ export const addSlurmCommand: AddCommand = (program, t, setExit) => {
       // A newline or control byte in a path would end a line of the script and start a command.
       for (const s of [plan.hunch, plan.workdir, plan.ledgerDir, plan.ledger, plan.arrayScript, ...absPaths])
         if (/[\u0000-\u001f\u007f]/.test(s))
-          throw new InputError(`the path ${JSON.stringify(s)} holds a newline or control character and cannot be written into a job script safely; rename it`);
+          throw new InputError(
+            `the path ${JSON.stringify(s)} holds a newline or control character and cannot be written into a job script safely; rename it`,
+          );
       mkdirSync(dirname(arrayPath), { recursive: true });
       const files: Array<[string, string]> = [
         [plan.arrayScript, arrayScript(plan)],

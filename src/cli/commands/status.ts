@@ -37,7 +37,10 @@ export const addStatusCommand: AddCommand = (program, t, setExit) => {
       const report = computeStatus(infos, ledger.records);
       if (flags.json) {
         for (const w of ledger.warnings) t.err(`${t.color.yellow('warning:')} ${w}\n`);
-        t.out(JSON.stringify({ tool: 'hunch', version: TOOL_VERSION, ledger: ledgerPath, ...report, warnings: ledger.warnings }, null, 2) + '\n');
+        t.out(
+          JSON.stringify({ tool: 'hunch', version: TOOL_VERSION, ledger: ledgerPath, ...report, warnings: ledger.warnings }, null, 2) +
+            '\n',
+        );
       } else t.out(formatStatus(report, t.color, ledger.warnings));
       setExit(EXIT.ok);
     });

@@ -43,8 +43,11 @@ export const addTrustCommand: AddCommand = (program, t, setExit) => {
         return;
       }
       const entry = trustProject(config);
-      t.out(`Trusting the project ${escapeControl(root)} (its ${escapeControl(config.file)}): these plugins will run when hunch uses it:\n`);
-      for (const p of prints) t.out(`    ${escapeControl(p.file)}  sha256 ${p.sha256}${p.real !== p.path ? `  (${escapeControl(p.real)})` : ''}\n`);
+      t.out(
+        `Trusting the project ${escapeControl(root)} (its ${escapeControl(config.file)}): these plugins will run when hunch uses it:\n`,
+      );
+      for (const p of prints)
+        t.out(`    ${escapeControl(p.file)}  sha256 ${p.sha256}${p.real !== p.path ? `  (${escapeControl(p.real)})` : ''}\n`);
       t.out(`Recorded in ${escapeControl(trustListPath())} on ${entry.at.slice(0, 10)}. If a plugin file changes, hunch asks again.\n`);
       setExit(EXIT.ok);
     });

@@ -33,7 +33,8 @@ export class Asm implements Structured {
     const text = () => JSON.stringify(rows);
     for (const r of rows) {
       if (!Array.isArray(r) || r.length !== n) fail(`${text()} is not an alternating sign matrix: it must be square`);
-      for (const v of r) if (v !== 0 && v !== 1 && v !== -1) fail(`${text()} is not an alternating sign matrix: its entries must be 0, 1 or -1`);
+      for (const v of r)
+        if (v !== 0 && v !== 1 && v !== -1) fail(`${text()} is not an alternating sign matrix: its entries must be 0, 1 or -1`);
     }
     const m = rows as number[][];
     const alternates = (get: (k: number) => number) => {
@@ -46,7 +47,8 @@ export class Asm implements Structured {
     };
     for (let i = 0; i < n; i++) {
       if (!alternates((k) => m[i][k])) fail(`${text()} is not an alternating sign matrix: row ${i + 1} does not alternate 1, -1, ..., 1`);
-      if (!alternates((k) => m[k][i])) fail(`${text()} is not an alternating sign matrix: column ${i + 1} does not alternate 1, -1, ..., 1`);
+      if (!alternates((k) => m[k][i]))
+        fail(`${text()} is not an alternating sign matrix: column ${i + 1} does not alternate 1, -1, ..., 1`);
     }
     return new Asm(m.map((r) => r.slice()));
   }

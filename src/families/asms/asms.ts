@@ -12,7 +12,8 @@ import { Asm } from './asm.js';
 import { asmToTriangle, at, bottomTriangle, entryRange, move, topTriangle, triangleToAsm } from './monotoneTriangles.js';
 
 export function asmCount(n: number): bigint {
-  let num = 1n, den = 1n;
+  let num = 1n,
+    den = 1n;
   for (let k = 0; k < n; k++) {
     num *= factorialBig(3 * k + 1);
     den *= factorialBig(n + k);
@@ -48,7 +49,8 @@ export function randomTriangle(n: number, rng: fc.Random): number[] {
   let T = 1;
   for (;;) {
     while (moves.length < T) moves.push(rng.nextInt(0, 2 * sites.length - 1));
-    const lo = bottomTriangle(n), hi = topTriangle(n);
+    const lo = bottomTriangle(n),
+      hi = topTriangle(n);
     for (let s = T - 1; s >= 0; s--) {
       const m = moves[s];
       const [k, i] = sites[m >> 1];
@@ -56,7 +58,11 @@ export function randomTriangle(n: number, rng: fc.Random): number[] {
       move(hi, k, i, (m & 1) === 1);
     }
     let same = true;
-    for (let e = 0; e < lo.length; e++) if (lo[e] !== hi[e]) { same = false; break; }
+    for (let e = 0; e < lo.length; e++)
+      if (lo[e] !== hi[e]) {
+        same = false;
+        break;
+      }
     if (same) return lo;
     T *= 2;
   }
@@ -125,7 +131,8 @@ function* simplify(a: Asm): Generator<Asm> {
     for (let i = 1; i <= k; i++) {
       const [lo, hi] = entryRange(t, k, i);
       for (const d of [-1, 1]) {
-        const e = at(k, i), v = t[e] + d;
+        const e = at(k, i),
+          v = t[e] + d;
         if (v < lo || v > hi) continue;
         const u = t.slice();
         u[e] = v;
@@ -140,7 +147,8 @@ function* simplify(a: Asm): Generator<Asm> {
 
 /** Delete the row and column of a 1 that is alone in both: an ASM of size n-1. */
 function* deleteLoneOnes(a: Asm): Generator<Asm> {
-  const n = a.n, r = a.rows;
+  const n = a.n,
+    r = a.rows;
   for (let i = 0; i < n; i++) {
     for (let j = 0; j < n; j++) {
       if (r[i][j] !== 1) continue;
@@ -159,8 +167,7 @@ export const asms: Family<SizeParam, Asm> = defineFamily<SizeParam, Asm>({
   signature: 'asms(n: integer)',
   description: 'every n x n alternating sign matrix, through monotone triangles',
   example: 'count(a in asms(4))',
-  source:
-    'OEIS A005130 (Zeilberger 1996); sampler: coupling from the past, Propp and Wilson, Random Structures Algorithms 9 (1996)',
+  source: 'OEIS A005130 (Zeilberger 1996); sampler: coupling from the past, Propp and Wilson, Random Structures Algorithms 9 (1996)',
   prepare(args) {
     return { n: sizeArg(args[0], 'n', 200) };
   },
@@ -196,7 +203,10 @@ export const asms: Family<SizeParam, Asm> = defineFamily<SizeParam, Asm>({
     if (n > MAX_COUNTED_N) return enumerateBySkipping((v) => asms.enumerate(p, v), lo, hi, visit);
     const range = clampRange(lo, hi, asmCount(n));
     if (!range) return false;
-    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    let skip = range.first,
+      skipping = skip > 0n,
+      left = range.length,
+      stopped = false;
     const a = new Asm(emptyRows(n));
     a.transient = true;
     if (n === 0) return visit(a) === true;
@@ -236,10 +246,10 @@ export const asms: Family<SizeParam, Asm> = defineFamily<SizeParam, Asm>({
   arbitrary(p): fc.Arbitrary<Asm> {
     const { n } = p;
     return new FamilyArbitrary(asms, p, (rng) => {
-        const rows = emptyRows(n);
-        triangleToAsm(randomTriangle(n, rng), n, rows);
-        return new Asm(rows);
-      });
+      const rows = emptyRows(n);
+      triangleToAsm(randomTriangle(n, rng), n, rows);
+      return new Asm(rows);
+    });
   },
   *shrink({ n }, obj): Generator<Shrunk<SizeParam, Asm>> {
     const seen = new Set<string>();

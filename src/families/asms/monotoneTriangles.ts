@@ -22,7 +22,8 @@ export function topTriangle(n: number): number[] {
 
 /** The interval an entry (k, i), k < n, may take given all the others. */
 export function entryRange(t: readonly number[], k: number, i: number): [number, number] {
-  let lo = t[at(k + 1, i)], hi = t[at(k + 1, i + 1)];
+  let lo = t[at(k + 1, i)],
+    hi = t[at(k + 1, i + 1)];
   if (i > 1) {
     lo = Math.max(lo, t[at(k, i - 1)] + 1);
     if (k > 1) lo = Math.max(lo, t[at(k - 1, i - 1)]);

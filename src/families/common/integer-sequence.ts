@@ -20,7 +20,8 @@ export abstract class IntegerSequence implements Structured {
   }
 
   equals(other: Structured): boolean {
-    const a = this.sequence(), b = (other as IntegerSequence).sequence();
+    const a = this.sequence(),
+      b = (other as IntegerSequence).sequence();
     if (a.length !== b.length) return false;
     for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
     return true;

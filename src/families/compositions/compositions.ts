@@ -53,7 +53,10 @@ export const compositions: Family<SizeParam, Composition> = defineFamily<SizePar
     // after a first part f, the rest is one of the compositionCount(rest - f) compositions of rest - f.
     const range = clampRange(lo, hi, compositionCount(n));
     if (!range) return false;
-    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    let skip = range.first,
+      skipping = skip > 0n,
+      left = range.length,
+      stopped = false;
     const c = new Composition([]);
     c.transient = true;
     const parts = c.parts;

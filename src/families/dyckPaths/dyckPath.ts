@@ -31,7 +31,8 @@ export class DyckPath implements Structured {
 
   /** Sum over up steps of the height they start at: the unit squares above the path UDUD...UD. */
   area(): number {
-    let h = 0, a = 0;
+    let h = 0,
+      a = 0;
     for (const x of this.steps) {
       if (x > 0) a += h;
       h += x;
@@ -53,7 +54,8 @@ export class DyckPath implements Structured {
   }
 
   equals(other: Structured): boolean {
-    const b = (other as DyckPath).steps, a = this.steps;
+    const b = (other as DyckPath).steps,
+      a = this.steps;
     if (a.length !== b.length) return false;
     for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
     return true;

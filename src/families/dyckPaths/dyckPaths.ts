@@ -52,7 +52,9 @@ export function randomDyckPath(n: number, rng: fc.Random): DyckPath {
     s[i] = s[j];
     s[j] = t;
   }
-  let h = 0, low = 0, at = -1;
+  let h = 0,
+    low = 0,
+    at = -1;
   for (let i = 0; i < m; i++) {
     h += s[i];
     if (h < low) {
@@ -126,7 +128,10 @@ export const dyckPaths = defineFamily<SizeParam, DyckPath>({
     // after i steps at height h, the rest is one of ballotPaths(2n - i, h) paths.
     const range = clampRange(lo, hi, catalanBig(n));
     if (!range) return false;
-    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    let skip = range.first,
+      skipping = skip > 0n,
+      left = range.length,
+      stopped = false;
     const d = new DyckPath(new Array<number>(2 * n).fill(1));
     d.transient = true;
     const s = d.steps;

@@ -3,7 +3,8 @@
 /** The partner list with the arc at point a (1-based) deleted and the points relabelled 1..2n-2. */
 export function deleteArc(p: readonly number[], a: number): number[] {
   const b = p[a - 1];
-  const lo = Math.min(a, b), hi = Math.max(a, b);
+  const lo = Math.min(a, b),
+    hi = Math.max(a, b);
   const shift = (x: number) => x - (x > lo ? 1 : 0) - (x > hi ? 1 : 0);
   const out: number[] = [];
   for (let i = 1; i <= p.length; i++) {

@@ -64,7 +64,8 @@ export class Matching implements Structured {
   }
 
   equals(other: Structured): boolean {
-    const b = (other as Matching).p, a = this.p;
+    const b = (other as Matching).p,
+      a = this.p;
     if (a.length !== b.length) return false;
     for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
     return true;
@@ -75,7 +76,9 @@ export class Matching implements Structured {
   }
 
   toText(): string {
-    return `matching([${this.arcs().map(([a, b]) => `[${a}, ${b}]`).join(', ')}])`;
+    return `matching([${this.arcs()
+      .map(([a, b]) => `[${a}, ${b}]`)
+      .join(', ')}])`;
   }
 
   encode(): unknown {

@@ -72,7 +72,10 @@ export const matchings: Family<SizeParam, Matching> = defineFamily<SizeParam, Ma
     if (!range) return false;
     const below: bigint[] = [1n];
     for (let k = 1; k <= n; k++) below.push(below[k - 1] * BigInt(2 * k - 1));
-    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    let skip = range.first,
+      skipping = skip > 0n,
+      left = range.length,
+      stopped = false;
     const m = new Matching(new Array<number>(2 * n).fill(0));
     m.transient = true;
     const p = m.p;
@@ -119,7 +122,8 @@ export const matchings: Family<SizeParam, Matching> = defineFamily<SizeParam, Ma
       const pool = Array.from({ length: size }, (_, i) => i + 1);
       const where = Array.from({ length: size + 1 }, (_, i) => i - 1);
       const remove = (x: number) => {
-        const at = where[x], last = pool[pool.length - 1];
+        const at = where[x],
+          last = pool[pool.length - 1];
         pool[at] = last;
         where[last] = at;
         pool.pop();
@@ -147,7 +151,8 @@ function* shrinkMatching(n: number, m: Matching): Generator<Shrunk<SizeParam, Ma
   for (let i = 1; i < 2 * n; i++) {
     if (p[i - 1] === i + 1) continue;
     const q = p.slice();
-    const x = p[i - 1], y = p[i];
+    const x = p[i - 1],
+      y = p[i];
     q[i - 1] = y;
     q[i] = x;
     q[x - 1] = i + 1;

@@ -83,7 +83,10 @@ export const noncrossingMatchings: Family<SizeParam, Matching> = defineFamily<Si
     // after i points with `depth` arcs open, the rest is one of ballotPaths(2n - i, depth) Dyck words.
     const range = clampRange(lo, hi, catalanBig(n));
     if (!range) return false;
-    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    let skip = range.first,
+      skipping = skip > 0n,
+      left = range.length,
+      stopped = false;
     const m = new Matching(new Array<number>(2 * n).fill(0));
     m.transient = true;
     const p = m.p;
@@ -143,7 +146,9 @@ export const noncrossingMatchings: Family<SizeParam, Matching> = defineFamily<Si
         idx[j] = t;
         x[idx[i]] = 1;
       }
-      let s = 0, min = 0, at = 0; // at = number of steps before the first minimum's end
+      let s = 0,
+        min = 0,
+        at = 0; // at = number of steps before the first minimum's end
       for (let i = 0; i < len; i++) {
         s += x[i];
         if (s < min) {

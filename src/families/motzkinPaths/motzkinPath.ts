@@ -49,7 +49,8 @@ export class MotzkinPath implements Structured {
   }
 
   equals(other: Structured): boolean {
-    const b = (other as MotzkinPath).steps, a = this.steps;
+    const b = (other as MotzkinPath).steps,
+      a = this.steps;
     if (a.length !== b.length) return false;
     for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
     return true;

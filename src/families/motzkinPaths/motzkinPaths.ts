@@ -16,9 +16,10 @@ const table: bigint[][] = [[1n]];
 export function completions(r: number, h: number): bigint {
   if (h < 0 || h > r) return 0n;
   while (table.length <= r) {
-    const m = table.length, prev = table[m - 1];
+    const m = table.length,
+      prev = table[m - 1];
     const row: bigint[] = [];
-    for (let k = 0; k <= m; k++) row.push((prev[k + 1] ?? 0n) + (prev[k] ?? 0n) + (k > 0 ? prev[k - 1] ?? 0n : 0n));
+    for (let k = 0; k <= m; k++) row.push((prev[k + 1] ?? 0n) + (prev[k] ?? 0n) + (k > 0 ? (prev[k - 1] ?? 0n) : 0n));
     table.push(row);
   }
   return table[r][h];
@@ -42,7 +43,9 @@ export function compareMotzkin(a: MotzkinPath, b: MotzkinPath): number {
 function visitRange(n: number, lo: bigint, hi: bigint, visit: Visit<MotzkinPath>): boolean {
   const range = clampRange(lo, hi, motzkinCount(n));
   if (!range) return false;
-  let skip = range.first, left = range.length, stopped = false;
+  let skip = range.first,
+    left = range.length,
+    stopped = false;
   const p = new MotzkinPath(new Array<number>(n).fill(0));
   p.transient = true;
   const s = p.steps;

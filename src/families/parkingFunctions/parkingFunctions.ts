@@ -59,7 +59,9 @@ export function compareParking(a: ParkingFunction, b: ParkingFunction): number {
 function visitRange(n: number, lo: bigint, hi: bigint, visit: Visit<ParkingFunction>): boolean {
   const range = clampRange(lo, hi, parkingCount(n));
   if (!range) return false;
-  let skip = range.first, left = range.length, stopped = false;
+  let skip = range.first,
+    left = range.length,
+    stopped = false;
   const p = new ParkingFunction(new Array<number>(n).fill(1));
   p.transient = true;
   const a = p.values;
@@ -107,7 +109,8 @@ export const parkingFunctions: Family<SizeParam, ParkingFunction> = defineFamily
   signature: 'parkingFunctions(n: integer)',
   description: 'the parking functions of length n (sequences whose increasing rearrangement b has b_i <= i), in lexicographic order',
   example: 'count(p in parkingFunctions(3))',
-  source: '(n+1)^(n-1), OEIS A000272 (Konheim and Weiss, SIAM J. Appl. Math. 14 (1966)); sampler: Pollak, see Foata and Riordan, Aequationes Math. 10 (1974)',
+  source:
+    '(n+1)^(n-1), OEIS A000272 (Konheim and Weiss, SIAM J. Appl. Math. 14 (1966)); sampler: Pollak, see Foata and Riordan, Aequationes Math. 10 (1974)',
   prepare(args) {
     return { n: sizeArg(args[0], 'n', 10_000) };
   },

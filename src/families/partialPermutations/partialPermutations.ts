@@ -75,7 +75,8 @@ export function randomPartialPermutation(k: number, n: number, rng: fc.Random): 
   const free = Array.from({ length: n }, (_, j) => j + 1);
   const img: number[] = [];
   for (let i = 0; i < k; i++) {
-    const rest = k - i - 1, f = free.length;
+    const rest = k - i - 1,
+      f = free.length;
     const empty = partialPermutationCount(rest, f);
     const z = uniformBelow(rng, empty + BigInt(f) * (f > 0 ? partialPermutationCount(rest, f - 1) : 0n));
     if (z < empty) img.push(0);
@@ -129,7 +130,10 @@ export const partialPermutations = defineFamily<RectParam, Matrix>({
     // with rows i+1.. and f columns free after row i, there are partialPermutationCount(k - i - 1, f) ways on.
     const range = clampRange(lo, hi, partialPermutationCount(k, n));
     if (!range) return false;
-    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    let skip = range.first,
+      skipping = skip > 0n,
+      left = range.length,
+      stopped = false;
     const img = new Array<number>(k).fill(0);
     const used = new Uint8Array(n + 1);
     const go = (i: number, free: number): boolean => {
@@ -169,11 +173,26 @@ export const partialPermutations = defineFamily<RectParam, Matrix>({
   },
   *shrink({ k, n }, obj): Generator<Shrunk<RectParam, Matrix>> {
     const img = rowImages(obj)!;
-    for (let i = 0; i < k; i++) yield { params: { k: k - 1, n }, obj: matrixOfImages(img.filter((_, t) => t !== i), n) };
+    for (let i = 0; i < k; i++)
+      yield {
+        params: { k: k - 1, n },
+        obj: matrixOfImages(
+          img.filter((_, t) => t !== i),
+          n,
+        ),
+      };
     for (let j = 1; j <= n; j++) {
       const rest = img.map((c) => (c === j ? 0 : c > j ? c - 1 : c));
       yield { params: { k, n: n - 1 }, obj: matrixOfImages(rest, n - 1) };
     }
-    for (let i = 0; i < k; i++) if (img[i]) yield { params: { k, n }, obj: matrixOfImages(img.map((x, t) => (t === i ? 0 : x)), n) };
+    for (let i = 0; i < k; i++)
+      if (img[i])
+        yield {
+          params: { k, n },
+          obj: matrixOfImages(
+            img.map((x, t) => (t === i ? 0 : x)),
+            n,
+          ),
+        };
   },
 });

@@ -45,7 +45,8 @@ export function nextPartition(parts: number[]): boolean {
 export function unrankPartition(n: number, r: bigint): number[] {
   const count = boundedPartitionCounter();
   const parts: number[] = [];
-  let m = n, k = n;
+  let m = n,
+    k = n;
   while (m > 0) {
     for (let v = Math.min(m, k); v >= 1; v--) {
       const c = count(m - v, v);
@@ -94,7 +95,8 @@ export function randomPartition(n: number, rng: fc.Random): Partition {
   let m = n;
   while (m > 0) {
     let z = uniformBelow(rng, BigInt(m) * partitionCount(m));
-    let d = 1, j = 1;
+    let d = 1,
+      j = 1;
     search: for (d = 1; d <= m; d++) {
       const bd = BigInt(d);
       for (j = 1; j * d <= m; j++) {

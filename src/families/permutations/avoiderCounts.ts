@@ -46,7 +46,8 @@ export function symmetryClass(p: readonly number[]): Set<string> {
  */
 export function bona1342(n: number): bigint {
   if (n === 0) return 1n;
-  let num = 0n, den = 1n;
+  let num = 0n,
+    den = 1n;
   for (let i = 2; i <= n; i++) {
     const m = BigInt(n - i + 2);
     let tNum = (1n << BigInt(i + 1)) * factorial(2 * i - 4) * ((m * (m - 1n)) / 2n);

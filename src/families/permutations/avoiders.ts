@@ -64,16 +64,18 @@ function generate(n: number, pats: number[][], a: number[], leaf: () => boolean)
 function endsWithPattern(a: ArrayLike<number>, len: number, pat: readonly number[]): boolean {
   const k = pat.length;
   if (k > len) return false;
-  const last = len - 1, top = pat[k - 1], y = a[last];
+  const last = len - 1,
+    top = pat[k - 1],
+    y = a[last];
   const pos = new Int32Array(k);
   const go = (t: number, from: number): boolean => {
     if (t === k - 1) return true;
     for (let i = from; i <= last - (k - 1 - t); i++) {
       const x = a[i];
-      if ((x < y) !== (pat[t] < top)) continue;
+      if (x < y !== pat[t] < top) continue;
       let ok = true;
       for (let s = 0; s < t; s++) {
-        if ((a[pos[s]] < x) !== (pat[s] < pat[t])) {
+        if (a[pos[s]] < x !== pat[s] < pat[t]) {
           ok = false;
           break;
         }
@@ -169,7 +171,8 @@ export const avoiders: Family<AvoidersParam, Permutation> = defineFamily<Avoider
   ],
   objectKind: 'permutation',
   signature: 'avoiders(n: integer, p: list|permutation|string, ...)',
-  description: 'the permutations of 1..n avoiding every given pattern (lists, permutations or digit strings like "1342"), enumerated in lexicographic order like permutations(n)',
+  description:
+    'the permutations of 1..n avoiding every given pattern (lists, permutations or digit strings like "1342"), enumerated in lexicographic order like permutations(n)',
   example: 'count(w in avoiders(5, "132"))',
   source: 'OEIS A000108 (one pattern of length 3), A022558 (1342), A005802 (1234)',
   prepare(args) {

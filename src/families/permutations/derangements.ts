@@ -115,7 +115,10 @@ export const derangements: Family<SizeParam, Permutation> = defineFamily<SizePar
     // k cells (p, p) with both p free: counted by inclusion–exclusion (completionsAvoiding).
     const range = clampRange(lo, hi, derangementCounts(n)[n]);
     if (!range) return false;
-    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    let skip = range.first,
+      skipping = skip > 0n,
+      left = range.length,
+      stopped = false;
     const completions = completionsAvoiding(n);
     const w = new Permutation(new Array<number>(n).fill(0));
     w.transient = true;

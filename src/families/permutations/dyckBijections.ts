@@ -30,7 +30,8 @@ export function maximaFilling(steps: readonly number[]): number[] {
   const n = steps.length >> 1;
   const a = new Array<number>(n).fill(0);
   const isMax = new Uint8Array(n + 1);
-  let ups = 0, downs = 0;
+  let ups = 0,
+    downs = 0;
   for (let i = 0; i < steps.length; i++) {
     if (steps[i] > 0) {
       ups++;

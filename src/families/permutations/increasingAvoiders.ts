@@ -57,7 +57,8 @@ function shapeTable(n: number, maxPart: number): ShapeTable | null {
     for (const s of shapes) {
       // f^lambda = n! / product of hook lengths (Frame, Robinson and Thrall 1954), n! computed once;
       // the hooks are multiplied as numbers while the product stays exact in a double
-      let den = 1n, run = 1;
+      let den = 1n,
+        run = 1;
       for (const row of hookLengths(s)) {
         for (const h of row) {
           if (run * h > Number.MAX_SAFE_INTEGER) {
@@ -111,7 +112,8 @@ export function inverseRsk(P: readonly (readonly number[])[], Q: readonly (reado
     while (--r >= 0) {
       const row = rows[r];
       // the rightmost entry smaller than x (rows increase)
-      let lo = 0, hi = row.length;
+      let lo = 0,
+        hi = row.length;
       while (lo < hi) {
         const mid = (lo + hi) >> 1;
         if (row[mid] < x) lo = mid + 1;
@@ -133,7 +135,8 @@ export function increasingAvoiderDraw(n: number, k: number, dir: 1 | -1): ((rng:
   return (rng) => {
     const r = uniformBelow(rng, table.total);
     // the first shape whose cumulative weight exceeds r
-    let lo = 0, hi = table.cumulative.length - 1;
+    let lo = 0,
+      hi = table.cumulative.length - 1;
     while (lo < hi) {
       const mid = (lo + hi) >> 1;
       if (table.cumulative[mid] > r) hi = mid;

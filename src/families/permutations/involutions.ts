@@ -66,7 +66,10 @@ export const involutions: Family<SizeParam, Permutation> = defineFamily<SizePara
     const counts = involutionCounts(n);
     const range = clampRange(lo, hi, counts[n]);
     if (!range) return false;
-    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    let skip = range.first,
+      skipping = skip > 0n,
+      left = range.length,
+      stopped = false;
     const w = new Permutation(new Array<number>(n).fill(0));
     w.transient = true;
     const a = w.a;

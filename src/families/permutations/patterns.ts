@@ -46,7 +46,8 @@ export function containsPattern(a: ArrayLike<number>, len: number, pat: readonly
   const go = (t: number, from: number): boolean => {
     if (t === k) return true;
     // leave room for the remaining k - t - 1 entries after this one
-    let lo = from, hi = len - (k - t);
+    let lo = from,
+      hi = len - (k - t);
     if (top >= 0) {
       if (t === top) {
         if (forced < lo || forced > hi) return false;
@@ -61,7 +62,7 @@ export function containsPattern(a: ArrayLike<number>, len: number, pat: readonly
       const x = a[i];
       let ok = true;
       for (let s = 0; s < t; s++) {
-        if ((a[pos[s]] < x) !== (pat[s] < pat[t])) {
+        if (a[pos[s]] < x !== pat[s] < pat[t]) {
           ok = false;
           break;
         }

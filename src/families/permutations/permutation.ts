@@ -40,7 +40,8 @@ export class Permutation implements Structured {
   }
 
   equals(other: Structured): boolean {
-    const b = (other as Permutation).a, a = this.a;
+    const b = (other as Permutation).a,
+      a = this.a;
     if (a.length !== b.length) return false;
     for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
     return true;

@@ -15,7 +15,8 @@ export function deleteEntry(a: readonly number[], i: number): number[] {
 
 /** w with the entries at the 0-based positions i < j deleted and the rest standardised. */
 export function deleteTwoEntries(a: readonly number[], i: number, j: number): number[] {
-  const u = Math.min(a[i], a[j]), v = Math.max(a[i], a[j]);
+  const u = Math.min(a[i], a[j]),
+    v = Math.max(a[i], a[j]);
   const out: number[] = [];
   for (let k = 0; k < a.length; k++) {
     if (k === i || k === j) continue;

@@ -56,7 +56,8 @@ export class PipeDream implements Structured {
     }
     out.sort((x, y) => x[0] - y[0] || x[1] - y[1]);
     for (let k = 1; k < out.length; k++) {
-      if (out[k][0] === out[k - 1][0] && out[k][1] === out[k - 1][1]) fail(`${JSON.stringify(crosses)} is not a pipe dream: the cross [${out[k].join(', ')}] appears twice`);
+      if (out[k][0] === out[k - 1][0] && out[k][1] === out[k - 1][1])
+        fail(`${JSON.stringify(crosses)} is not a pipe dream: the cross [${out[k].join(', ')}] appears twice`);
     }
     return new PipeDream(out);
   }
@@ -78,7 +79,10 @@ export class PipeDream implements Structured {
   }
 
   copy(): PipeDream {
-    return new PipeDream(this.crosses.map((c) => [c[0], c[1]] as [number, number]), this.n);
+    return new PipeDream(
+      this.crosses.map((c) => [c[0], c[1]] as [number, number]),
+      this.n,
+    );
   }
 }
 
@@ -100,7 +104,9 @@ export function tracePipes(crosses: readonly [number, number][], n: number): { e
   // which pipes pass it; a cross tile is passed by exactly two pipes.
   const passes = new Map<number, number[]>();
   for (let p = 1; p <= n; p++) {
-    let i = p, j = 1, fromLeft = true;
+    let i = p,
+      j = 1,
+      fromLeft = true;
     while (i >= 1) {
       const t = i * (n + 2) + j;
       if (i + j <= n && cross.has(t)) {

@@ -39,7 +39,8 @@ function continuations(v: number[], lastA: number, lastI: number): bigint {
   const key = `${v.join(',')}|${lastA}|${lastI}`;
   const hit = memo.get(key);
   if (hit !== undefined) return hit;
-  if (memo.size >= MEMO_LIMIT) fail(`counting the pipe dreams of a permutation this large needs more than ${MEMO_LIMIT} intermediate counts`);
+  if (memo.size >= MEMO_LIMIT)
+    fail(`counting the pipe dreams of a permutation this large needs more than ${MEMO_LIMIT} intermediate counts`);
   let s = 0n;
   for (const [a, i] of steps(v, lastA, lastI)) s += continuations(leftMultiply(v, a), a, i);
   memo.set(key, s);
@@ -70,7 +71,8 @@ export function comparePipeDreams(a: PipeDream, b: PipeDream): number {
   const d = a.crosses.length - b.crosses.length;
   if (d) return d;
   for (let k = 0; k < a.crosses.length; k++) {
-    const x = a.crosses[k], y = b.crosses[k];
+    const x = a.crosses[k],
+      y = b.crosses[k];
     if (x[0] !== y[0]) return x[0] - y[0];
     if (x[1] !== y[1]) return x[1] - y[1];
   }
@@ -87,7 +89,9 @@ export function isPipeDreamOf(p: PipeDream, w: readonly number[]): boolean {
 
 /** Exactly uniform: each next (a, i) is drawn with probability proportional to its continuations. */
 export function randomPipeDream(w: readonly number[], rng: fc.Random): PipeDream {
-  let v = w.slice(), lastA = Number.MAX_SAFE_INTEGER, lastI = 1;
+  let v = w.slice(),
+    lastA = Number.MAX_SAFE_INTEGER,
+    lastI = 1;
   const stack: [number, number][] = [];
   while (inversions(v) > 0) {
     let z = uniformBelow(rng, continuations(v, lastA, lastI));
@@ -128,10 +132,10 @@ export const pipeDreams = defineFamily<PipeParam, PipeDream>({
   params: [{ name: 'w', type: 'any' }],
   objectKind: 'pipeDream',
   signature: 'pipeDreams(w: permutation)',
-  description: 'every reduced pipe dream of w: crosses (i, j) with i + j <= n whose pipes read w, no two crossing twice; the pipe entering at the left of row i exits at the top of column w(i)',
+  description:
+    'every reduced pipe dream of w: crosses (i, j) with i + j <= n whose pipes read w, no two crossing twice; the pipe entering at the left of row i exits at the top of column w(i)',
   example: 'count(P in pipeDreams(perm([1, 4, 3, 2])))',
-  source:
-    'S_w(1,...,1); Billey, Jockusch and Stanley, J. Algebraic Combin. 2 (1993); Bergeron and Billey, Experiment. Math. 2 (1993)',
+  source: 'S_w(1,...,1); Billey, Jockusch and Stanley, J. Algebraic Combin. 2 (1993); Bergeron and Billey, Experiment. Math. 2 (1993)',
   prepare(args) {
     const w = permutationArg(args[0]).slice();
     return { w, n: w.length, length: inversions(w) };
@@ -140,7 +144,10 @@ export const pipeDreams = defineFamily<PipeParam, PipeDream>({
     return pipeDreamCount(w);
   },
   enumerate({ w, length }, visit) {
-    const p = new PipeDream(Array.from({ length }, () => [0, 0] as [number, number]), w.length);
+    const p = new PipeDream(
+      Array.from({ length }, () => [0, 0] as [number, number]),
+      w.length,
+    );
     p.transient = true;
     const stack: [number, number][] = [];
     const go = (v: number[], lastA: number, lastI: number): boolean => {
@@ -163,8 +170,14 @@ export const pipeDreams = defineFamily<PipeParam, PipeDream>({
     // after the step (a, i) there are continuations(s_a v, a, i) compatible sequences on.
     const range = clampRange(lo, hi, pipeDreamCount(w));
     if (!range) return false;
-    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
-    const p = new PipeDream(Array.from({ length }, () => [0, 0] as [number, number]), w.length);
+    let skip = range.first,
+      skipping = skip > 0n,
+      left = range.length,
+      stopped = false;
+    const p = new PipeDream(
+      Array.from({ length }, () => [0, 0] as [number, number]),
+      w.length,
+    );
     p.transient = true;
     const stack: [number, number][] = [];
     const go = (v: number[], lastA: number, lastI: number): boolean => {

@@ -13,7 +13,8 @@ export function edelmanGreeneWord(rows: readonly (readonly number[])[]): number[
   const word: number[] = [];
   for (let step = 0; step < total; step++) {
     // The largest entry sits at a corner.
-    let i = 0, j = 0;
+    let i = 0,
+      j = 0;
     for (let a = 0; a < t.length; a++) {
       const b = t[a].length - 1;
       if (t[a][b] === total) {

@@ -108,7 +108,10 @@ export const reducedWords: Family<PermParam, Word> = defineFamily<PermParam, Wor
     // the words beginning with the left descent i are the reducedWordCount(s_i v) ones of s_i v.
     const range = clampRange(lo, hi, reducedWords.count(p));
     if (!range) return false;
-    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    let skip = range.first,
+      skipping = skip > 0n,
+      left = range.length,
+      stopped = false;
     const word = new Word(new Array<number>(length).fill(0));
     word.transient = true;
     const go = (v: number[], k: number): boolean => {

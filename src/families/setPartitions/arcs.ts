@@ -20,7 +20,8 @@ export function partitionCrossings(rgs: readonly number[]): number {
   let c = 0;
   for (let a = 0; a < arcs.length; a++)
     for (let b = a + 1; b < arcs.length; b++) {
-      const [i1, j1] = arcs[a], [i2, j2] = arcs[b];
+      const [i1, j1] = arcs[a],
+        [i2, j2] = arcs[b];
       if (i1 < i2 && i2 < j1 && j1 < j2) c++;
     }
   return c;
@@ -31,7 +32,8 @@ export function partitionNestings(rgs: readonly number[]): number {
   let c = 0;
   for (let a = 0; a < arcs.length; a++)
     for (let b = a + 1; b < arcs.length; b++) {
-      const [i1, j1] = arcs[a], [i2, j2] = arcs[b];
+      const [i1, j1] = arcs[a],
+        [i2, j2] = arcs[b];
       if (i1 < i2 && j2 < j1) c++;
     }
   return c;

@@ -22,7 +22,9 @@ import { isNoncrossing } from './arcs.js';
 export function partitionOfDyckSteps(steps: readonly number[], rgs: number[]): void {
   const blockOf: number[] = []; // stack of open blocks
   const need: number[] = []; // elements each still needs
-  let i = 0, run = 0, blocks = 0;
+  let i = 0,
+    run = 0,
+    blocks = 0;
   for (const s of steps) {
     if (s > 0) {
       run++;
@@ -75,7 +77,8 @@ export function deleteElement(rgs: readonly number[], i: number): number[] {
 
 /** Merge the blocks of i and i+1 (when they differ), renumbered; undefined when that makes a crossing. */
 function mergeNeighbours(rgs: readonly number[], i: number): number[] | undefined {
-  const a = rgs[i - 1], b = rgs[i];
+  const a = rgs[i - 1],
+    b = rgs[i];
   if (a === b) return undefined;
   const merged = rgs.map((x) => (x === b ? a : x));
   const rename = new Map<number, number>();
@@ -91,7 +94,8 @@ export const noncrossingPartitions = defineFamily<SizeParam, SetPartition>({
   params: [{ name: 'n', type: 'integer' }],
   objectKind: 'setPartition',
   signature: 'noncrossingPartitions(n: integer)',
-  description: 'the set partitions of 1..n with no two crossing blocks, in the order of their Dyck paths (U^|B| at the least element of each block B, then D; U before D)',
+  description:
+    'the set partitions of 1..n with no two crossing blocks, in the order of their Dyck paths (U^|B| at the least element of each block B, then D; U before D)',
   example: 'count(s in noncrossingPartitions(5))',
   source: 'Catalan numbers, OEIS A000108 (Kreweras, Discrete Math. 1 (1972)); by number of blocks: Narayana numbers, OEIS A001263',
   prepare(args) {

@@ -52,7 +52,8 @@ export class SetPartition implements Structured {
     for (const b of blocks) {
       if (!Array.isArray(b) || b.length === 0) fail(`${text()} is not a set partition: every block must be a nonempty list`);
       for (const v of b) {
-        if (typeof v !== 'number' || !Number.isSafeInteger(v) || v < 1) fail(`${text()} is not a set partition: its elements must be positive integers`);
+        if (typeof v !== 'number' || !Number.isSafeInteger(v) || v < 1)
+          fail(`${text()} is not a set partition: its elements must be positive integers`);
         n++;
       }
     }
@@ -74,7 +75,8 @@ export class SetPartition implements Structured {
   }
 
   equals(other: Structured): boolean {
-    const b = (other as SetPartition).rgs, a = this.rgs;
+    const b = (other as SetPartition).rgs,
+      a = this.rgs;
     if (a.length !== b.length) return false;
     for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
     return true;
@@ -85,7 +87,9 @@ export class SetPartition implements Structured {
   }
 
   toText(): string {
-    return `setPartition([${this.blocks().map((b) => `[${b.join(', ')}]`).join(', ')}])`;
+    return `setPartition([${this.blocks()
+      .map((b) => `[${b.join(', ')}]`)
+      .join(', ')}])`;
   }
 
   encode(): unknown {

@@ -59,7 +59,8 @@ export const signedPermutations: Family<SizeParam, SignedPermutation> = defineFa
   params: [{ name: 'n', type: 'integer' }],
   objectKind: 'signedPermutation',
   signature: 'signedPermutations(n: integer)',
-  description: 'the signed permutations of 1..n (the hyperoctahedral group B_n), by |w| in lexicographic order, then the signs in binary order (+ before -, w(1) first)',
+  description:
+    'the signed permutations of 1..n (the hyperoctahedral group B_n), by |w| in lexicographic order, then the signs in binary order (+ before -, w(1) first)',
   example: 'count(w in signedPermutations(3))',
   source: '2^n n!, OEIS A000165; length generating function prod [2i]_q, Björner and Brenti, Combinatorics of Coxeter Groups, ch. 8',
   prepare(args) {
@@ -86,8 +87,11 @@ export const signedPermutations: Family<SizeParam, SignedPermutation> = defineFa
   },
   compare: compareSigned,
   arbitrary(p) {
-    return new FamilyArbitrary(signedPermutations, p, (rng) =>
-      new SignedPermutation(fisherYates(rng, p.n).map((v) => (rng.nextInt(0, 1) ? -v : v))));
+    return new FamilyArbitrary(
+      signedPermutations,
+      p,
+      (rng) => new SignedPermutation(fisherYates(rng, p.n).map((v) => (rng.nextInt(0, 1) ? -v : v))),
+    );
   },
   *shrink({ n }, w): Generator<Shrunk<SizeParam, SignedPermutation>> {
     // Delete an entry and standardise (to B_{n-1}); then, at the same size, make a negative entry

@@ -18,7 +18,8 @@ export function lengthB(a: readonly number[]): number {
 
 /** #{i in 0..n-1 : w(i) > w(i+1)} with w(0) = 0 (Björner and Brenti, Prop. 8.1.2). */
 export function desB(a: readonly number[]): number {
-  let d = 0, prev = 0;
+  let d = 0,
+    prev = 0;
   for (const v of a) {
     if (prev > v) d++;
     prev = v;

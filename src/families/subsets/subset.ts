@@ -31,7 +31,8 @@ export class Subset implements Structured {
 
   has(x: number): boolean {
     const e = this.elems;
-    let lo = 0, hi = e.length - 1;
+    let lo = 0,
+      hi = e.length - 1;
     while (lo <= hi) {
       const mid = (lo + hi) >> 1;
       if (e[mid] === x) return true;
@@ -47,7 +48,8 @@ export class Subset implements Structured {
       if (!Number.isSafeInteger(x) || x < 1) fail(`[${elems.join(', ')}] is not a set of positive integers: ${x}`);
     }
     const s = elems.slice().sort((a, b) => a - b);
-    for (let i = 1; i < s.length; i++) if (s[i] === s[i - 1]) fail(`[${elems.join(', ')}] lists ${s[i]} twice; a subset holds each element once`);
+    for (let i = 1; i < s.length; i++)
+      if (s[i] === s[i - 1]) fail(`[${elems.join(', ')}] lists ${s[i]} twice; a subset holds each element once`);
     return new Subset(s);
   }
 
@@ -57,7 +59,8 @@ export class Subset implements Structured {
   }
 
   equals(other: Structured): boolean {
-    const b = (other as Subset).elems, a = this.elems;
+    const b = (other as Subset).elems,
+      a = this.elems;
     if (a.length !== b.length) return false;
     for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
     return true;

@@ -61,7 +61,8 @@ function unrankCombination(n: number, k: number, r: bigint, e: number[]): void {
   for (let pos = 0; pos < k; pos++) {
     const j = k - pos - 1;
     const all = binomialBig(n - x0 + 1, j + 1);
-    let lo = x0, hi = n - j;
+    let lo = x0,
+      hi = n - j;
     while (lo < hi) {
       const mid = lo + Math.ceil((hi - lo) / 2);
       if (all - binomialBig(n - mid + 1, j + 1) <= r) lo = mid;

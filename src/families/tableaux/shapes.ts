@@ -44,7 +44,8 @@ export function hookLengthCount(parts: readonly number[]): bigint {
  * numerators is divisible by that of the hooks, so the division is exact.
  */
 export function hookContentCount(parts: readonly number[], m: number): bigint {
-  let num = 1n, den = 1n;
+  let num = 1n,
+    den = 1n;
   const hooks = hookLengths(parts);
   for (let i = 0; i < parts.length; i++) {
     for (let j = 0; j < parts[i]; j++) {

@@ -31,7 +31,8 @@ export function hookWalk(parts: readonly number[], rng: fc.Random): Tableau {
   const lam = parts.slice();
   const rows = parts.map((l) => new Array<number>(l).fill(0));
   for (let m = sizeOf(parts); m >= 1; m--) {
-    let c = rng.nextInt(0, m - 1), i = 0;
+    let c = rng.nextInt(0, m - 1),
+      i = 0;
     while (c >= lam[i]) c -= lam[i++];
     let j = c;
     for (;;) {
@@ -60,7 +61,8 @@ function positions(t: Tableau): [number, number][] {
 function* simplify(t: Tableau): Generator<Tableau> {
   const pos = positions(t);
   for (let k = 1; k < t.size; k++) {
-    const [a, b] = pos[k], [c, d] = pos[k + 1];
+    const [a, b] = pos[k],
+      [c, d] = pos[k + 1];
     if (a === c || b === d) continue; // same row or column: the exchange breaks standardness
     const u = t.copy();
     u.rows[a][b] = k + 1;
@@ -152,12 +154,16 @@ export const standardTableaux: Family<ShapeParam, Tableau> = defineFamily<ShapeP
     const { parts, n } = p;
     // Subtrees are counted over the shapes inside lambda; where there are too many of them, walk
     // from the start instead (such shapes have far too many tableaux for an exhaustive check).
-    if (shapesInside(parts, MAX_SUBSHAPES) > MAX_SUBSHAPES) return enumerateBySkipping((v) => standardTableaux.enumerate(p, v), lo, hi, visit);
+    if (shapesInside(parts, MAX_SUBSHAPES) > MAX_SUBSHAPES)
+      return enumerateBySkipping((v) => standardTableaux.enumerate(p, v), lo, hi, visit);
     const range = clampRange(lo, hi, hookLengthCount(parts));
     if (!range) return false;
     // The recursion of `enumerate`, passing over whole subtrees while objects remain to be skipped:
     // with the entries so far filling the shape `fill`, the rest is a standard filling of lambda/fill.
-    let skip = range.first, skipping = skip > 0n, left = range.length, stopped = false;
+    let skip = range.first,
+      skipping = skip > 0n,
+      left = range.length,
+      stopped = false;
     const t = new Tableau(parts.map((l) => new Array<number>(l).fill(0)));
     t.transient = true;
     const fill = new Array<number>(parts.length).fill(0);

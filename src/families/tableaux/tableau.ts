@@ -73,10 +73,12 @@ export class Tableau implements Structured {
   }
 
   equals(other: Structured): boolean {
-    const b = (other as Tableau).rows, a = this.rows;
+    const b = (other as Tableau).rows,
+      a = this.rows;
     if (a.length !== b.length) return false;
     for (let i = 0; i < a.length; i++) {
-      const x = a[i], y = b[i];
+      const x = a[i],
+        y = b[i];
       if (x.length !== y.length) return false;
       for (let j = 0; j < x.length; j++) if (x[j] !== y[j]) return false;
     }

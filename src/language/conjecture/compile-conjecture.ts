@@ -128,7 +128,11 @@ export function compileConjecture(spec: ConjectureSpec): CompiledConjecture {
   const claimAst = parse(spec.claim);
   const claim = compiler.compile(claimAst);
   if (claim.type !== 'any' && claim.type !== 'boolean')
-    throw new InputError(`the claim must be true or false, but it is ${claim.type === 'integer' ? 'an' : 'a'} ${claim.type}`, spec.claim.pos, spec.claim.text);
+    throw new InputError(
+      `the claim must be true or false, but it is ${claim.type === 'integer' ? 'an' : 'a'} ${claim.type}`,
+      spec.claim.pos,
+      spec.claim.text,
+    );
   const sides: [Fn, Fn] | null =
     claimAst.type === 'binary' && COMPARISONS.has(claimAst.op)
       ? [compiler.compile(claimAst.left).fn, compiler.compile(claimAst.right).fn]

@@ -10,7 +10,12 @@ export type { Fn, Frame } from '../expr/frame.js';
 
 export type BindingSource =
   | { kind: 'range'; lo: Fn; hi: Fn }
-  | { kind: 'family'; family: Family<any, any>; args: Fn[]; /** per argument: the binding name it is, when it is a bare name */ argNames: (string | null)[] }
+  | {
+      kind: 'family';
+      family: Family<any, any>;
+      args: Fn[] /** per argument: the binding name it is, when it is a bare name */;
+      argNames: (string | null)[];
+    }
   | { kind: 'list'; list: Fn };
 
 export interface CompiledBinding {

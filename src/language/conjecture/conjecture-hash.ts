@@ -168,7 +168,7 @@ export function namesUsed(spec: ConjectureSpec): Set<string> {
     changed = false;
     for (const d of defs) {
       if (used.has(d.name)) {
-        for (const n of d.body.names) if (!used.has(n)) (used.add(n), (changed = true));
+        for (const n of d.body.names) if (!used.has(n)) used.add(n), (changed = true);
       }
     }
   }

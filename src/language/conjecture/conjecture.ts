@@ -47,6 +47,16 @@ export interface ConjectureSpec {
 }
 
 export const CONJECTURE_KEYS = [
-  'conjecture', 'statement', 'expect', 'indeterminates', 'for', 'where', 'let', 'claim', 'sample', 'references', 'define',
+  'conjecture',
+  'statement',
+  'expect',
+  'indeterminates',
+  'for',
+  'where',
+  'let',
+  'claim',
+  'sample',
+  'references',
+  'define',
 ] as const;
 export const EXPECTATIONS = ['holds', 'fails', 'open'] as const;

@@ -45,8 +45,7 @@ export function loadConjectures(paths: string[]): ConjectureSpec[] {
     text = readInputFile(f, 'the conjecture file');
     for (const c of loadConjectureFile(displayPath(f), text).conjectures) {
       const prev = byId.get(c.id);
-      if (prev)
-        throw new InputError(`the id ${c.id} is used twice (first at ${prev.file}:${prev.pos.line})`, c.pos, c.id);
+      if (prev) throw new InputError(`the id ${c.id} is used twice (first at ${prev.file}:${prev.pos.line})`, c.pos, c.id);
       byId.set(c.id, c);
       all.push(c);
     }

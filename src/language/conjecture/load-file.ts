@@ -46,7 +46,8 @@ function noAliases(y: YamlFile, doc: Document.Parsed): void {
 /** The document as plain data; integers stay exact (numbers when safe, else decimal strings). */
 function plain(doc: Document.Parsed): Record<string, unknown> {
   const exact = (v: unknown): unknown => {
-    if (typeof v === 'bigint') return v >= BigInt(Number.MIN_SAFE_INTEGER) && v <= BigInt(Number.MAX_SAFE_INTEGER) ? Number(v) : v.toString();
+    if (typeof v === 'bigint')
+      return v >= BigInt(Number.MIN_SAFE_INTEGER) && v <= BigInt(Number.MAX_SAFE_INTEGER) ? Number(v) : v.toString();
     if (Array.isArray(v)) return v.map(exact);
     if (v && typeof v === 'object') return Object.fromEntries(Object.entries(v).map(([k, x]) => [k, exact(x)]));
     return v;
@@ -102,7 +103,13 @@ export function loadConjectureFile(file: string, source: string): LoadedFile {
     } else {
       const entries = mapEntries(y, node, 'the document');
       // Suggest only for a key that is not already right (a misspelt "conjecture:" or "define:").
-      const near = entries.find((e) => e.key !== 'define' && e.key !== 'conjecture' && e.key !== 'indeterminates' && nearest(e.key, ['conjecture', 'define']) !== undefined);
+      const near = entries.find(
+        (e) =>
+          e.key !== 'define' &&
+          e.key !== 'conjecture' &&
+          e.key !== 'indeterminates' &&
+          nearest(e.key, ['conjecture', 'define']) !== undefined,
+      );
       const s = near ? nearest(near.key, ['conjecture', 'define']) : undefined;
       const extra = entries.find((e) => e.key !== 'define' && e.key !== 'indeterminates');
       if (!near && keys.includes('define') && extra)
@@ -135,15 +142,19 @@ function readConjecture(
 ): ConjectureSpec {
   const entries = mapEntries(y, node, 'the conjecture');
   const get = (k: string) => entries.find((e) => e.key === k);
-  for (const e of entries) if (!(CONJECTURE_KEYS as readonly string[]).includes(e.key)) unknownKey(y, e.key, e.keyNode, CONJECTURE_KEYS, 'a conjecture');
+  for (const e of entries)
+    if (!(CONJECTURE_KEYS as readonly string[]).includes(e.key)) unknownKey(y, e.key, e.keyNode, CONJECTURE_KEYS, 'a conjecture');
 
   const idE = get('conjecture')!;
   const id = scalarString(y, idE.value, 'conjecture (the id)');
-  if (!ID.test(id))
-    throw new InputError(`the id "${id}" may use only lowercase letters, digits and '-'`, y.nodePos(idE.value), id);
+  if (!ID.test(id)) throw new InputError(`the id "${id}" may use only lowercase letters, digits and '-'`, y.nodePos(idE.value), id);
   // The id names counterexamples/<id>.yaml: keep it well inside every file system's name limit.
   if (id.length > MAX_ID_LENGTH)
-    throw new InputError(`the id is ${id.length} characters long; an id may have at most ${MAX_ID_LENGTH}`, y.nodePos(idE.value), id.slice(0, 40) + '...');
+    throw new InputError(
+      `the id is ${id.length} characters long; an id may have at most ${MAX_ID_LENGTH}`,
+      y.nodePos(idE.value),
+      id.slice(0, 40) + '...',
+    );
 
   const expectE = get('expect');
   let expect: Expectation = 'open';
@@ -151,7 +162,12 @@ function readConjecture(
     const v = scalarString(y, expectE.value, 'expect');
     if (!(EXPECTATIONS as readonly string[]).includes(v)) {
       const s = nearest(v, EXPECTATIONS);
-      throw new InputError(`expect must be holds, fails or open, not "${v}"${s ? `; did you mean "${s}"?` : ''}`, y.nodePos(expectE.value), v, s);
+      throw new InputError(
+        `expect must be holds, fails or open, not "${v}"${s ? `; did you mean "${s}"?` : ''}`,
+        y.nodePos(expectE.value),
+        v,
+        s,
+      );
     }
     expect = v as Expectation;
   }

@@ -115,7 +115,11 @@ function comparisonSides(ctx: Ctx, env: Name[], bound: Name[], e: ExprOf<'binary
   if (ctx.recorded.has(e)) return v;
   ctx.recorded.add(e);
   push(ctx, {
-    kind: 'value', at: textOf(e), ...where(e), bindings: encodeBound(bound), value: encodeValue(v),
+    kind: 'value',
+    at: textOf(e),
+    ...where(e),
+    bindings: encodeBound(bound),
+    value: encodeValue(v),
     sides: [encodeValue(evaluate(ctx, env, e.left)), encodeValue(evaluate(ctx, env, e.right))],
   });
   return v;
@@ -161,8 +165,10 @@ function explain(ctx: Ctx, env: Name[], bound: Name[], e: Expr, top: boolean, ro
         const l = top ? side(ctx, env, bound, e.left) : evaluate(ctx, env, e.left);
         const r = top ? side(ctx, env, bound, e.right) : evaluate(ctx, env, e.right);
         const follow: Expr[] = [];
-        if (e.op === 'and') (value ? [e.left, e.right] : [l === false ? e.left : null, r === false ? e.right : null]).forEach((x) => x && follow.push(x));
-        else if (e.op === 'or') (value ? [l === true ? e.left : null, r === true ? e.right : null] : [e.left, e.right]).forEach((x) => x && follow.push(x));
+        if (e.op === 'and')
+          (value ? [e.left, e.right] : [l === false ? e.left : null, r === false ? e.right : null]).forEach((x) => x && follow.push(x));
+        else if (e.op === 'or')
+          (value ? [l === true ? e.left : null, r === true ? e.right : null] : [e.left, e.right]).forEach((x) => x && follow.push(x));
         else if (e.op === 'implies') follow.push(...(value ? [l === false ? e.left : e.right] : [e.left, e.right]));
         else follow.push(e.left, e.right);
         for (const x of follow) explain(ctx, env, bound, x, top);
@@ -218,7 +224,14 @@ type Order = (a: Value, b: Value) => number;
 function search(ctx: Ctx, env: Name[], bound: Name[], e: ExprOf<'comprehension'>, goal: Goal): Name[] | null {
   const { c, slots } = scope(ctx, env);
   const gens = e.generators;
-  const plans: Array<{ g: Generator; slot: number; order: Order; ordered: boolean; each: (fr: Frame, visit: (v: Value, rank: Value) => boolean) => boolean; where: ((fr: Frame) => Value) | null }> = [];
+  const plans: Array<{
+    g: Generator;
+    slot: number;
+    order: Order;
+    ordered: boolean;
+    each: (fr: Frame, visit: (v: Value, rank: Value) => boolean) => boolean;
+    where: ((fr: Frame) => Value) | null;
+  }> = [];
   for (const g of gens) {
     const src = c.compileSource(g.source);
     const slot = c.declareSlot(g.name, src.elementType);
@@ -226,9 +239,14 @@ function search(ctx: Ctx, env: Name[], bound: Name[], e: ExprOf<'comprehension'>
     if (src.kind === 'range') {
       const { lo, hi } = src;
       plans.push({
-        g, slot, where, order: compareValues, ordered: true,
+        g,
+        slot,
+        where,
+        order: compareValues,
+        ordered: true,
         each: (fr, visit) => {
-          const a = lo(fr), b = hi(fr);
+          const a = lo(fr),
+            b = hi(fr);
           if (typeof a !== 'number' || typeof b !== 'number') return false;
           for (let i = a; i <= b; i++) if (visit(i, i)) return true;
           return false;
@@ -238,7 +256,11 @@ function search(ctx: Ctx, env: Name[], bound: Name[], e: ExprOf<'comprehension'>
       const fam = src.family as Family<any, any>;
       const args = src.args;
       plans.push({
-        g, slot, where, order: (a, b) => fam.compare(a, b), ordered: false,
+        g,
+        slot,
+        where,
+        order: (a, b) => fam.compare(a, b),
+        ordered: false,
         each: (fr, visit) => {
           const p = fam.prepare(args.map((f) => f(fr)));
           return fam.enumerate(p, (obj) => visit(obj, obj));
@@ -247,7 +269,11 @@ function search(ctx: Ctx, env: Name[], bound: Name[], e: ExprOf<'comprehension'>
     } else {
       const fn = src.fn;
       plans.push({
-        g, slot, where, order: compareValues, ordered: true,
+        g,
+        slot,
+        where,
+        order: compareValues,
+        ordered: true,
         each: (fr, visit) => {
           const list = elementsOf(fn(fr), undefined);
           for (let i = 0; i < list.length; i++) if (visit(list[i], i)) return true;
@@ -258,7 +284,8 @@ function search(ctx: Ctx, env: Name[], bound: Name[], e: ExprOf<'comprehension'>
   }
   const allOrdered = plans.every((p) => p.ordered);
   const body = e.body ? c.compile(e.body).fn : null;
-  const sides = e.body && e.body.type === 'binary' && COMPARISONS.has(e.body.op) ? [c.compile(e.body.left).fn, c.compile(e.body.right).fn] : null;
+  const sides =
+    e.body && e.body.type === 'binary' && COMPARISONS.has(e.body.op) ? [c.compile(e.body.left).fn, c.compile(e.body.right).fn] : null;
   const frame = frameOf(c, env, slots);
 
   let best: { elems: Value[]; ranks: Value[]; value: Value } | null = null;
@@ -307,7 +334,14 @@ function search(ctx: Ctx, env: Name[], bound: Name[], e: ExprOf<'comprehension'>
   const found = best as { elems: Value[]; ranks: Value[]; value: Value };
   const names: Name[] = plans.map((p, k) => ({ name: p.g.name, type: typeFor(found.elems[k]), value: found.elems[k] }));
   const reducer = e.reducer as 'all' | 'any' | 'min' | 'max';
-  const w: Witness = { kind: 'element', reducer, at: textOf(e), ...where(e), bindings: encodeBound([...bound, ...names]), value: encodeValue(found.value) };
+  const w: Witness = {
+    kind: 'element',
+    reducer,
+    at: textOf(e),
+    ...where(e),
+    bindings: encodeBound([...bound, ...names]),
+    value: encodeValue(found.value),
+  };
   if (sides) {
     plans.forEach((p, k) => (frame[p.slot] = found.elems[k]));
     try {
@@ -331,7 +365,8 @@ export function traceWitnesses(cc: CompiledConjecture, frame: Frame): Witness[] 
   try {
     ctx.defines = parseDefines(spec);
     const env: Name[] = [];
-    for (const b of cc.bindings) if (frame[b.slot] !== undefined) env.push({ name: b.name, type: typeFor(frame[b.slot]), value: frame[b.slot] });
+    for (const b of cc.bindings)
+      if (frame[b.slot] !== undefined) env.push({ name: b.name, type: typeFor(frame[b.slot]), value: frame[b.slot] });
     for (let i = 0; i < cc.lets.length; i++) {
       const l = cc.lets[i];
       frame[l.slot] = l.fn(frame);

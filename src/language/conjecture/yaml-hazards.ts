@@ -151,7 +151,8 @@ export class HazardScanner {
           column = line.length - it[2].length;
         }
       }
-      while (stack.length && stack[stack.length - 1].indent >= indent && (key !== null || stack[stack.length - 1].indent > indent)) stack.pop();
+      while (stack.length && stack[stack.length - 1].indent >= indent && (key !== null || stack[stack.length - 1].indent > indent))
+        stack.pop();
       const parent = stack.length ? stack[stack.length - 1].key : null;
       if (key === null) {
         // A list item: prose under references, else not ours.
@@ -189,8 +190,14 @@ export class HazardScanner {
     if (BLOCK_HEADER.test(text)) return last; // a block scalar: nothing inside is special
     if (first === '"' || first === "'") return this.quotedValue(v, last, what);
     if (text.startsWith('- ') || text === '-') {
-      this.report(v.line, v.column, `${what} reads a value that starts with "- " as a list item`,
-        v.role === 'prose' ? `put the text in quotes: ${fixQuoted(text)}` : `write -(...) without the space, or quote it: ${fixQuoted(text)}`);
+      this.report(
+        v.line,
+        v.column,
+        `${what} reads a value that starts with "- " as a list item`,
+        v.role === 'prose'
+          ? `put the text in quotes: ${fixQuoted(text)}`
+          : `write -(...) without the space, or quote it: ${fixQuoted(text)}`,
+      );
       return last;
     }
     if (FIRST_CHARACTER[first] && !this.intended(text, last, v)) {
@@ -247,7 +254,15 @@ export class HazardScanner {
   }
 
   /** A plain value's first line and continuation lines: ": " and " #". */
-  private plainLine(v: Value, lineNo: number, text: string, column: number, last: number, what: string, fixQuoted: (t: string) => string): void {
+  private plainLine(
+    v: Value,
+    lineNo: number,
+    text: string,
+    column: number,
+    last: number,
+    what: string,
+    fixQuoted: (t: string) => string,
+  ): void {
     const segments: Array<[number, string, number]> = [[lineNo, text, column]];
     for (let k = lineNo + 1; k <= last; k++) {
       const l = this.lines[k];
@@ -262,11 +277,22 @@ export class HazardScanner {
       if (colon >= 0) {
         const whole = this.valueText(segments);
         if (v.role === 'prose') {
-          this.report(ln, col + colon, `${what} reads the ": " in it as the start of a mapping`, `put the text in quotes: ${fixQuoted(whole)}`);
+          this.report(
+            ln,
+            col + colon,
+            `${what} reads the ": " in it as the start of a mapping`,
+            `put the text in quotes: ${fixQuoted(whole)}`,
+          );
         } else {
           const fix = bodyFirstFix(whole);
-          this.report(ln, col + colon, `${what} reads the ": " in it as the start of a mapping`,
-            fix ? `write the comprehension body first, which needs no quotes: ${v.key}: ${fix}` : `put the expression in quotes: ${fixQuoted(whole)}`);
+          this.report(
+            ln,
+            col + colon,
+            `${what} reads the ": " in it as the start of a mapping`,
+            fix
+              ? `write the comprehension body first, which needs no quotes: ${v.key}: ${fix}`
+              : `put the expression in quotes: ${fixQuoted(whole)}`,
+          );
         }
         return;
       }
@@ -274,10 +300,14 @@ export class HazardScanner {
       if (hash >= 0 && v.role === 'expression') {
         const more = s + 1 < segments.length;
         if (more || unfinished(sofar)) {
-          this.report(ln, col + hash + (seg[hash] === '#' ? 0 : 1),
+          this.report(
+            ln,
+            col + hash + (seg[hash] === '#' ? 0 : 1),
             `${what} reads " #" as the start of a comment, so the expression stops here: ${sofar}`,
-            more ? 'put the comment after the whole expression, on its last line or a line of its own'
-              : 'remove the comment from the middle of the expression (the language has no #), or put the expression in quotes');
+            more
+              ? 'put the comment after the whole expression, on its last line or a line of its own'
+              : 'remove the comment from the middle of the expression (the language has no #), or put the expression in quotes',
+          );
         }
         return;
       }
@@ -317,9 +347,12 @@ export class HazardScanner {
           const rest = seg.slice(k + 1);
           if (!/^\s*(#.*)?$/.test(rest)) {
             const whole = this.joined(v, last);
-            this.report(ln, col + k + 1 + (rest.length - rest.trimStart().length),
+            this.report(
+              ln,
+              col + k + 1 + (rest.length - rest.trimStart().length),
               `${what} reads a value that starts with a quote as a quoted text that ends at its closing quote, so "${rest.trim()}" is left over`,
-              `put the whole ${v.role === 'prose' ? 'text' : 'expression'} in quotes: ${v.key === '-' ? '-' : `${v.key}:`} ${q === '"' ? quoted(whole) : `"${whole.replace(/\\/g, '\\\\').replace(/"/g, '\\"')}"`}`);
+              `put the whole ${v.role === 'prose' ? 'text' : 'expression'} in quotes: ${v.key === '-' ? '-' : `${v.key}:`} ${q === '"' ? quoted(whole) : `"${whole.replace(/\\/g, '\\\\').replace(/"/g, '\\"')}"`}`,
+            );
           }
           return Math.max(ln, v.line);
         }

@@ -28,7 +28,12 @@ export class YamlFile {
   ) {
     this.lines = new LineCounter();
     try {
-      this.docs = parseAllDocuments(source, { lineCounter: this.lines, uniqueKeys: true, prettyErrors: false, intAsBigInt: true }) as Document.Parsed[];
+      this.docs = parseAllDocuments(source, {
+        lineCounter: this.lines,
+        uniqueKeys: true,
+        prettyErrors: false,
+        intAsBigInt: true,
+      }) as Document.Parsed[];
     } catch (e) {
       if (e instanceof RangeError) throw new InputError('the YAML is nested too deeply to read', { file, line: 1, column: 1 });
       throw e;

@@ -29,9 +29,7 @@ export type LogicOp = 'and' | 'or' | 'implies' | 'iff';
 export type BinaryOp = ArithOp | CompareOp | LogicOp;
 
 /** The reducers that take comprehensions: sum(i^2 for i in 1..n), count(w in S where ...), ... */
-export const REDUCERS = [
-  'sum', 'product', 'count', 'all', 'any', 'min', 'max', 'list', 'set', 'concat', 'distribution',
-] as const;
+export const REDUCERS = ['sum', 'product', 'count', 'all', 'any', 'min', 'max', 'list', 'set', 'concat', 'distribution'] as const;
 export type Reducer = (typeof REDUCERS)[number];
 export function isReducer(name: string): name is Reducer {
   return (REDUCERS as readonly string[]).includes(name);

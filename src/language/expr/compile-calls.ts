@@ -23,7 +23,11 @@ export function functionValue(cx: CompileContext, name: string, arity: number | 
   const params = arity ?? spec!.params.filter((p) => !p.optional && !p.rest).length;
   const argNames = Array.from({ length: params }, (_, i) => `_${i + 1}`);
   const callExpr: Expr = {
-    type: 'call', callee: name, start: e.start, end: e.end, src: e.src,
+    type: 'call',
+    callee: name,
+    start: e.start,
+    end: e.end,
+    src: e.src,
     args: argNames.map((a) => ({ type: 'name', name: a, start: e.start, end: e.end, src: e.src }) as Expr),
   };
   return compileLambda(cx, { type: 'lambda', params: argNames, body: callExpr, start: e.start, end: e.end, src: e.src }, name);
@@ -52,29 +56,37 @@ export function compileLambda(cx: CompileContext, e: ExprOf<'lambda'>, text?: st
     const [s0] = slots;
     return {
       fn: (fr) =>
-        new Lambda(1, (args) => {
-          const old = fr[s0];
-          fr[s0] = args[0];
-          try {
-            return body(fr);
-          } finally {
-            fr[s0] = old;
-          }
-        }, src),
+        new Lambda(
+          1,
+          (args) => {
+            const old = fr[s0];
+            fr[s0] = args[0];
+            try {
+              return body(fr);
+            } finally {
+              fr[s0] = old;
+            }
+          },
+          src,
+        ),
       type: 'function',
     };
   }
   return {
     fn: (fr) =>
-      new Lambda(n, (args) => {
-        const old = slots.map((s) => fr[s]);
-        for (let i = 0; i < n; i++) fr[slots[i]] = args[i];
-        try {
-          return body(fr);
-        } finally {
-          for (let i = 0; i < n; i++) fr[slots[i]] = old[i];
-        }
-      }, src),
+      new Lambda(
+        n,
+        (args) => {
+          const old = slots.map((s) => fr[s]);
+          for (let i = 0; i < n; i++) fr[slots[i]] = args[i];
+          try {
+            return body(fr);
+          } finally {
+            for (let i = 0; i < n; i++) fr[slots[i]] = old[i];
+          }
+        },
+        src,
+      ),
     type: 'function',
   };
 }
@@ -160,9 +172,12 @@ export function callDefine(cx: CompileContext, cell: DefineCell, argExprs: Expr[
 export function arityError(cx: CompileContext, spec: FunctionSpec, got: number, e: Expr): InputError {
   const required = spec.params.filter((p) => !p.optional && !p.rest).length;
   const max = spec.params.some((p) => p.rest) ? Infinity : spec.params.length;
-  const wanted = required === max ? plural(required, 'argument')
-    : max === Infinity ? `at least ${plural(required, 'argument')}`
-    : `${required} to ${max} arguments`;
+  const wanted =
+    required === max
+      ? plural(required, 'argument')
+      : max === Infinity
+        ? `at least ${plural(required, 'argument')}`
+        : `${required} to ${max} arguments`;
   return errorAt(cx, `${spec.name} takes ${wanted}, got ${got}: ${signatureOf(spec)}`, e, signatureOf(spec));
 }
 
@@ -174,9 +189,12 @@ export function callLibrary(cx: CompileContext, spec: FunctionSpec, e: ExprOf<'c
     const decl = i < spec.params.length ? spec.params[i] : spec.params[spec.params.length - 1];
     const c = cx.expr(a);
     if (!mayAccept(decl.type, c.type)) {
-      throw errorAt(cx, 
+      throw errorAt(
+        cx,
         `the argument ${decl.name} of ${spec.name} must be ${typeList(decl.type)}, but this is ${describeType(c.type)}`,
-        a, signatureOf(spec));
+        a,
+        signatureOf(spec),
+      );
     }
     if (surelyAccepts(decl.type, c.type)) return c.fn;
     return guard(cx, c.fn, decl.type, `the argument ${decl.name} of ${spec.name}`, a, spec);
@@ -209,7 +227,8 @@ export function callLibrary(cx: CompileContext, spec: FunctionSpec, e: ExprOf<'c
     case 2: {
       const [a, b] = args;
       fn = (fr) => {
-        const x = a(fr), y = b(fr);
+        const x = a(fr),
+          y = b(fr);
         try {
           return impl(x, y);
         } catch (err) {
@@ -221,7 +240,9 @@ export function callLibrary(cx: CompileContext, spec: FunctionSpec, e: ExprOf<'c
     case 3: {
       const [a, b, c] = args;
       fn = (fr) => {
-        const x = a(fr), y = b(fr), z = c(fr);
+        const x = a(fr),
+          y = b(fr),
+          z = c(fr);
         try {
           return impl(x, y, z);
         } catch (err) {
@@ -251,8 +272,10 @@ export function guard(cx: CompileContext, f: Fn, expected: TypeName | TypeName[]
     const v = f(fr);
     const t = typeOf(v);
     if (!surelyAccepts(exps, t)) {
-      throw new EvalError(`${what} must be ${typeList(expected)}, got ${describeType(t)} (${short(v)})` +
-        (spec ? `: ${signatureOf(spec)}` : ''), pos);
+      throw new EvalError(
+        `${what} must be ${typeList(expected)}, got ${describeType(t)} (${short(v)})` + (spec ? `: ${signatureOf(spec)}` : ''),
+        pos,
+      );
     }
     return v;
   };

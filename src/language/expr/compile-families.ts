@@ -24,7 +24,10 @@ export function familyAsList(cx: CompileContext, fam: Family, e: ExprOf<'call'>)
       const p = plan.prepare(fr);
       const count = fam.count(p);
       if (count > BigInt(MAX_FAMILY_AS_LIST)) {
-        throw new EvalError(`${short(printExpression(e))} has ${count} objects, too many to make into a list; iterate over it with "v in ..." instead`, pos);
+        throw new EvalError(
+          `${short(printExpression(e))} has ${count} objects, too many to make into a list; iterate over it with "v in ..." instead`,
+          pos,
+        );
       }
       const out: Value[] = [];
       try {
@@ -44,13 +47,23 @@ export function familyPlan(cx: CompileContext, fam: Family, e: ExprOf<'call'>): 
   const required = fam.params.filter((p) => !p.optional && !p.rest).length;
   const hasRest = fam.params.some((p) => p.rest);
   if (e.args.length < required || (!hasRest && e.args.length > fam.params.length)) {
-    throw errorAt(cx, `${fam.name} takes ${required === fam.params.length && !hasRest ? plural(required, 'argument') : `${required} or more arguments`}, got ${e.args.length}: ${fam.signature}`, e, fam.signature);
+    throw errorAt(
+      cx,
+      `${fam.name} takes ${required === fam.params.length && !hasRest ? plural(required, 'argument') : `${required} or more arguments`}, got ${e.args.length}: ${fam.signature}`,
+      e,
+      fam.signature,
+    );
   }
   const args = e.args.map((a, i) => {
     const decl = i < fam.params.length ? fam.params[i] : fam.params[fam.params.length - 1];
     const c = cx.expr(a);
     if (!mayAccept(decl.type, c.type)) {
-      throw errorAt(cx, `the argument ${decl.name} of ${fam.name} must be ${typeList(decl.type)}, but this is ${describeType(c.type)}`, a, fam.signature);
+      throw errorAt(
+        cx,
+        `the argument ${decl.name} of ${fam.name} must be ${typeList(decl.type)}, but this is ${describeType(c.type)}`,
+        a,
+        fam.signature,
+      );
     }
     return c.fn;
   });

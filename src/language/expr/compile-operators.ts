@@ -82,7 +82,8 @@ export function compileRangeValue(cx: CompileContext, e: ExprOf<'range'>): Compi
   const pos = posOf(cx, e);
   return {
     fn: (fr) => {
-      const a = lo(fr), b = hi(fr);
+      const a = lo(fr),
+        b = hi(fr);
       if (b - a + 1 > MAX_RANGE_LIST) throw new EvalError(`the range ${a}..${b} is too long to make into a list`, pos);
       const out: number[] = [];
       for (let i = a; i <= b; i++) out.push(i);
@@ -128,12 +129,18 @@ export function compileLogic(cx: CompileContext, e: ExprOf<'binary'>): Compiled 
 }
 
 export function compileEquality(cx: CompileContext, e: ExprOf<'binary'>): Compiled {
-  const l = cx.expr(e.left), r = cx.expr(e.right);
+  const l = cx.expr(e.left),
+    r = cx.expr(e.right);
   if (!equalityPossible(l.type, r.type)) {
-    throw errorAt(cx, `cannot compare ${describeType(l.type)} with ${describeType(r.type)}`, e,
-      'both sides of == must be the same kind of value');
+    throw errorAt(
+      cx,
+      `cannot compare ${describeType(l.type)} with ${describeType(r.type)}`,
+      e,
+      'both sides of == must be the same kind of value',
+    );
   }
-  const lf = l.fn, rf = r.fn;
+  const lf = l.fn,
+    rf = r.fn;
   const pos = posOf(cx, e);
   const negate = e.op === '!=';
   if (l.type === 'integer' && r.type === 'integer') {
@@ -143,7 +150,8 @@ export function compileEquality(cx: CompileContext, e: ExprOf<'binary'>): Compil
   const slow = negate ? ops.ne : ops.eq;
   return {
     fn: (fr) => {
-      const a = lf(fr), b = rf(fr);
+      const a = lf(fr),
+        b = rf(fr);
       if (typeof a === 'number' && typeof b === 'number') return negate ? a !== b : a === b;
       return at2(slow, a, b, pos);
     },
@@ -152,38 +160,51 @@ export function compileEquality(cx: CompileContext, e: ExprOf<'binary'>): Compil
 }
 
 export function compileOrder(cx: CompileContext, e: ExprOf<'binary'>): Compiled {
-  const l = cx.expr(e.left), r = cx.expr(e.right);
-  for (const [side, t, x] of [['left', l.type, e.left], ['right', r.type, e.right]] as const) {
+  const l = cx.expr(e.left),
+    r = cx.expr(e.right);
+  for (const [side, t, x] of [
+    ['left', l.type, e.left],
+    ['right', r.type, e.right],
+  ] as const) {
     if (!mayAccept('number', t)) {
-      throw errorAt(cx, `${e.op} compares integers and rationals only, but the ${side} side is ${describeType(t)}`, x,
-        t === 'polynomial' || t === 'scalarOrPolynomial' ? undefined : 'use == to compare other values');
+      throw errorAt(
+        cx,
+        `${e.op} compares integers and rationals only, but the ${side} side is ${describeType(t)}`,
+        x,
+        t === 'polynomial' || t === 'scalarOrPolynomial' ? undefined : 'use == to compare other values',
+      );
     }
   }
-  const lf = l.fn, rf = r.fn;
+  const lf = l.fn,
+    rf = r.fn;
   const pos = posOf(cx, e);
   let fn: Fn;
   switch (e.op) {
     case '<':
       fn = (fr) => {
-        const a = lf(fr), b = rf(fr);
+        const a = lf(fr),
+          b = rf(fr);
         return typeof a === 'number' && typeof b === 'number' ? a < b : at2(ops.lt, a, b, pos);
       };
       break;
     case '<=':
       fn = (fr) => {
-        const a = lf(fr), b = rf(fr);
+        const a = lf(fr),
+          b = rf(fr);
         return typeof a === 'number' && typeof b === 'number' ? a <= b : at2(ops.le, a, b, pos);
       };
       break;
     case '>':
       fn = (fr) => {
-        const a = lf(fr), b = rf(fr);
+        const a = lf(fr),
+          b = rf(fr);
         return typeof a === 'number' && typeof b === 'number' ? a > b : at2(ops.gt, a, b, pos);
       };
       break;
     default:
       fn = (fr) => {
-        const a = lf(fr), b = rf(fr);
+        const a = lf(fr),
+          b = rf(fr);
         return typeof a === 'number' && typeof b === 'number' ? a >= b : at2(ops.ge, a, b, pos);
       };
   }
@@ -194,8 +215,12 @@ export function compileOrder(cx: CompileContext, e: ExprOf<'binary'>): Compiled 
 export function checkArith(cx: CompileContext, op: string, a: TypeName, b: TypeName | undefined, e: Expr): TypeName {
   const bad = (why?: string): never => {
     const what = b === undefined ? describeType(a) : `${describeType(a)} and ${describeType(b)}`;
-    throw errorAt(cx, `${op} is not defined for ${what}`, e,
-      why ?? (op === '+' && a === 'list' && (b === 'list' || b === 'any') ? 'to join lists use concat([A, B])' : undefined));
+    throw errorAt(
+      cx,
+      `${op} is not defined for ${what}`,
+      e,
+      why ?? (op === '+' && a === 'list' && (b === 'list' || b === 'any') ? 'to join lists use concat([A, B])' : undefined),
+    );
   };
   const arithmetic = (t: TypeName) => t === 'any' || isNumericish(t) || t === 'permutation' || t === 'matrix' || t === 'symmetric';
   if (!arithmetic(a) || (b !== undefined && !arithmetic(b))) bad();
@@ -242,17 +267,20 @@ export function checkArith(cx: CompileContext, op: string, a: TypeName, b: TypeN
 }
 
 export function compileArith(cx: CompileContext, e: ExprOf<'binary'>): Compiled {
-  const l = cx.expr(e.left), r = cx.expr(e.right);
+  const l = cx.expr(e.left),
+    r = cx.expr(e.right);
   let type = checkArith(cx, e.op, l.type, r.type, e);
   // A nonnegative literal exponent keeps integers integers: n^2.
   if (e.op === '^' && l.type === 'integer' && e.right.type === 'int') type = 'integer';
-  const lf = l.fn, rf = r.fn;
+  const lf = l.fn,
+    rf = r.fn;
   const pos = posOf(cx, e);
   let fn: Fn;
   switch (e.op) {
     case '+':
       fn = (fr) => {
-        const a = lf(fr), b = rf(fr);
+        const a = lf(fr),
+          b = rf(fr);
         if (typeof a === 'number' && typeof b === 'number') {
           const s = a + b;
           if (s <= Number.MAX_SAFE_INTEGER && s >= -Number.MAX_SAFE_INTEGER) return s;
@@ -262,7 +290,8 @@ export function compileArith(cx: CompileContext, e: ExprOf<'binary'>): Compiled 
       break;
     case '-':
       fn = (fr) => {
-        const a = lf(fr), b = rf(fr);
+        const a = lf(fr),
+          b = rf(fr);
         if (typeof a === 'number' && typeof b === 'number') {
           const s = a - b;
           if (s <= Number.MAX_SAFE_INTEGER && s >= -Number.MAX_SAFE_INTEGER) return s;
@@ -272,7 +301,8 @@ export function compileArith(cx: CompileContext, e: ExprOf<'binary'>): Compiled 
       break;
     case '*':
       fn = (fr) => {
-        const a = lf(fr), b = rf(fr);
+        const a = lf(fr),
+          b = rf(fr);
         if (typeof a === 'number' && typeof b === 'number') {
           const s = a * b;
           if (s <= Number.MAX_SAFE_INTEGER && s >= -Number.MAX_SAFE_INTEGER) return s === 0 ? 0 : s;
@@ -282,7 +312,8 @@ export function compileArith(cx: CompileContext, e: ExprOf<'binary'>): Compiled 
       break;
     case '/':
       fn = (fr) => {
-        const a = lf(fr), b = rf(fr);
+        const a = lf(fr),
+          b = rf(fr);
         if (typeof a === 'number' && typeof b === 'number' && b !== 0 && a % b === 0) return a / b + 0;
         return at2(ops.div, a, b, pos);
       };
@@ -295,26 +326,43 @@ export function compileArith(cx: CompileContext, e: ExprOf<'binary'>): Compiled 
 
 export function compileIf(cx: CompileContext, e: ExprOf<'if'>): Compiled {
   const c = condition(cx, e.cond, 'the condition of if');
-  const a = cx.expr(e.then), b = cx.expr(e.else);
-  const af = a.fn, bf = b.fn;
+  const a = cx.expr(e.then),
+    b = cx.expr(e.else);
+  const af = a.fn,
+    bf = b.fn;
   return { fn: (fr) => (c(fr) ? af(fr) : bf(fr)), type: join(a.type, b.type) };
 }
 
 export function compileIndex(cx: CompileContext, e: ExprOf<'index'>): Compiled {
   const t = e.target;
   if (t.type === 'name' && cx.indeterminates.has(t.name) && !cx.layout.lookup(t.name)) return indexedVariable(cx, t.name, e);
-  if (e.index2) throw errorAt(cx, 'two indices [i, j] name a doubly indexed indeterminate such as z[i, j] (declared under indeterminates:); to index a list twice write L[i][j]', e);
-  if (t.type === 'name' && !cx.layout.lookup(t.name) && !cx.defines.has(t.name) && !cx.indeterminates.has(t.name) && !getFunction(t.name) && !getFamily(t.name)) {
+  if (e.index2)
+    throw errorAt(
+      cx,
+      'two indices [i, j] name a doubly indexed indeterminate such as z[i, j] (declared under indeterminates:); to index a list twice write L[i][j]',
+      e,
+    );
+  if (
+    t.type === 'name' &&
+    !cx.layout.lookup(t.name) &&
+    !cx.defines.has(t.name) &&
+    !cx.indeterminates.has(t.name) &&
+    !getFunction(t.name) &&
+    !getFamily(t.name)
+  ) {
     throw unknownName(cx, t.name, t, false, true);
   }
-  const target = cx.expr(t), idx = cx.expr(e.index);
+  const target = cx.expr(t),
+    idx = cx.expr(e.index);
   // A polynomial may be an indeterminate passed as an argument (y given x): y[i] is then x[i], checked when it runs.
   const notIndexable = ['integer', 'rational', 'number', 'boolean', 'function', 'distribution'];
   if (notIndexable.includes(target.type)) throw errorAt(cx, `${describeType(target.type)} cannot be indexed`, t);
   if (!mayAccept('integer', idx.type)) throw errorAt(cx, `an index must be an integer, but this is ${describeType(idx.type)}`, e.index);
-  const tf = target.fn, xf = idx.fn;
+  const tf = target.fn,
+    xf = idx.fn;
   const pos = posOf(cx, e);
-  const type = target.type === 'permutation' ? 'integer' : target.type === 'string' ? 'string' : target.type === 'polynomial' ? 'polynomial' : 'any';
+  const type =
+    target.type === 'permutation' ? 'integer' : target.type === 'string' ? 'string' : target.type === 'polynomial' ? 'polynomial' : 'any';
   return { fn: (fr) => indexValue(tf(fr), xf(fr), pos), type };
 }
 
@@ -322,7 +370,8 @@ export function compileIndex(cx: CompileContext, e: ExprOf<'index'>): Compiled {
 export function indexedVariable(cx: CompileContext, base: string, e: ExprOf<'index'>): Compiled {
   if (e.index2) return doublyIndexedVariable(cx, base, e, e.index2);
   const idx = cx.expr(e.index);
-  if (!mayAccept('integer', idx.type)) throw errorAt(cx, `the index of ${base}[...] must be an integer, but this is ${describeType(idx.type)}`, e.index);
+  if (!mayAccept('integer', idx.type))
+    throw errorAt(cx, `the index of ${base}[...] must be an integer, but this is ${describeType(idx.type)}`, e.index);
   const xf = idx.fn;
   const pos = posOf(cx, e);
   const cache = new Map<number, Polynomial>();
@@ -340,15 +389,22 @@ export function indexedVariable(cx: CompileContext, base: string, e: ExprOf<'ind
 
 /** z[i, j] for a declared indeterminate z: the polynomial variable named 'z[i,j]'. */
 function doublyIndexedVariable(cx: CompileContext, base: string, e: ExprOf<'index'>, second: Expr): Compiled {
-  const a = cx.expr(e.index), b = cx.expr(second);
-  for (const [c, x] of [[a, e.index], [b, second]] as const)
-    if (!mayAccept('integer', c.type)) throw errorAt(cx, `the indices of ${base}[i, j] must be integers, but this is ${describeType(c.type)}`, x);
-  const af = a.fn, bf = b.fn;
+  const a = cx.expr(e.index),
+    b = cx.expr(second);
+  for (const [c, x] of [
+    [a, e.index],
+    [b, second],
+  ] as const)
+    if (!mayAccept('integer', c.type))
+      throw errorAt(cx, `the indices of ${base}[i, j] must be integers, but this is ${describeType(c.type)}`, x);
+  const af = a.fn,
+    bf = b.fn;
   const pos = posOf(cx, e);
   const cache = new Map<string, Polynomial>();
   return {
     fn: (fr) => {
-      const i = af(fr), j = bf(fr);
+      const i = af(fr),
+        j = bf(fr);
       if (typeof i !== 'number' || typeof j !== 'number')
         throw new EvalError(`the indices of ${base}[i, j] must be small integers, got ${short(typeof i !== 'number' ? i : j)}`, pos);
       const name = `${base}[${i},${j}]`;

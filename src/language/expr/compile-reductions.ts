@@ -29,8 +29,12 @@ export function sourcePlan(cx: CompileContext, e: Expr): SourcePlan {
   }
   const c = cx.expr(e);
   if (['integer', 'rational', 'number', 'boolean', 'polynomial', 'scalarOrPolynomial', 'function'].includes(c.type)) {
-    throw errorAt(cx, `cannot iterate over ${describeType(c.type)}: a source is a range a..b, a list, a family or a measure`, e,
-      c.type === 'integer' ? `1..${printExpression(e)}` : undefined);
+    throw errorAt(
+      cx,
+      `cannot iterate over ${describeType(c.type)}: a source is a range a..b, a list, a family or a measure`,
+      e,
+      c.type === 'integer' ? `1..${printExpression(e)}` : undefined,
+    );
   }
   return { kind: 'value', fn: c.fn, pos: posOf(cx, e) };
 }
@@ -52,8 +56,12 @@ export function reducerCall(cx: CompileContext, name: Reducer, e: ExprOf<'call'>
   }
   if (e.args.length !== 1) {
     const tail = name === 'min' || name === 'max' ? `, several values ${name}(a, b, ...)` : '';
-    throw errorAt(cx, `${name} takes one list${tail}, or a comprehension ${name}(... for v in S); got ${plural(e.args.length, 'argument')}`, e,
-      `${name}(... for v in S)`);
+    throw errorAt(
+      cx,
+      `${name} takes one list${tail}, or a comprehension ${name}(... for v in S); got ${plural(e.args.length, 'argument')}`,
+      e,
+      `${name}(... for v in S)`,
+    );
   }
   const arg = e.args[0];
   if (name === 'count' && arg.type === 'call' && !cx.layout.lookup(arg.callee) && !cx.defines.has(arg.callee) && getFamily(arg.callee)) {
@@ -98,16 +106,25 @@ export function reduction(cx: CompileContext, reducer: Reducer, gens: Generator[
       const k = plans[0].slot;
       body = { fn: (fr) => fr[k], type: elementType(cx, plans[0].source) };
     } else {
-      throw errorAt(cx, `${reducer}(...) with several generators needs a body to say what to ${reducer === 'sum' || reducer === 'product' ? 'combine' : 'collect'}`, e,
-        `${reducer}(E for ${gens.map((g) => `${g.name} in ...`).join(', ')})`);
+      throw errorAt(
+        cx,
+        `${reducer}(...) with several generators needs a body to say what to ${reducer === 'sum' || reducer === 'product' ? 'combine' : 'collect'}`,
+        e,
+        `${reducer}(E for ${gens.map((g) => `${g.name} in ...`).join(', ')})`,
+      );
     }
     if ((reducer === 'all' || reducer === 'any' || (reducer === 'count' && bodyExpr)) && !mayAccept('boolean', body.type)) {
       throw errorAt(cx, `the body of ${reducer} must be true or false, but it is ${describeType(body.type)}`, bodyExpr ?? e);
     }
-    if ((reducer === 'sum' || reducer === 'product') && bodyExpr === undefined && !(mayAccept('scalarOrPolynomial', body.type) || body.type === 'matrix')) {
+    if (
+      (reducer === 'sum' || reducer === 'product') &&
+      bodyExpr === undefined &&
+      !(mayAccept('scalarOrPolynomial', body.type) || body.type === 'matrix')
+    ) {
       throw errorAt(cx, `${reducer} adds up numbers or polynomials, but the elements are ${describeType(body.type)}`, e);
     }
-    if ((reducer === 'sum' || reducer === 'product') && bodyExpr) checkArith(cx, reducer === 'sum' ? '+' : '*', body.type, body.type, bodyExpr);
+    if ((reducer === 'sum' || reducer === 'product') && bodyExpr)
+      checkArith(cx, reducer === 'sum' ? '+' : '*', body.type, body.type, bodyExpr);
     if (reducer === 'concat' && !mayAccept('list', body.type)) {
       throw errorAt(cx, `concat joins lists, but the elements are ${describeType(body.type)}`, bodyExpr ?? e);
     }

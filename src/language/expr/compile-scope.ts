@@ -76,7 +76,12 @@ export function looksLikeIndeterminate(name: string, indexed: boolean): boolean 
   return indexed || /^[A-Za-z][0-9]*$/.test(name);
 }
 
-export function errorAt(cx: CompileContext, message: string, e: { start: number; end: number; src?: Expr['src'] }, suggestion?: string): InputError {
+export function errorAt(
+  cx: CompileContext,
+  message: string,
+  e: { start: number; end: number; src?: Expr['src'] },
+  suggestion?: string,
+): InputError {
   return inputError(message, e.src, e.start, e.end, suggestion);
 }
 
@@ -86,7 +91,13 @@ export function posOf(cx: CompileContext, e: Expr): SourcePos | undefined {
 
 export function unknownName(cx: CompileContext, name: string, e: Expr, asCall: boolean, indexed = false): InputError {
   const candidates = asCall
-    ? [...cx.defines.keys(), ...REDUCERS, ...allFunctions().map((f) => f.name), ...allFamilies().map((f) => f.name), ...cx.layout.visibleNames()]
+    ? [
+        ...cx.defines.keys(),
+        ...REDUCERS,
+        ...allFunctions().map((f) => f.name),
+        ...allFamilies().map((f) => f.name),
+        ...cx.layout.visibleNames(),
+      ]
     : [...cx.layout.visibleNames(), ...cx.indeterminates, ...cx.defines.keys(), ...allFunctions().map((f) => f.name)];
   const near = nearest(name, candidates);
   const what = asCall ? `unknown function ${name}` : `unknown name ${name}`;

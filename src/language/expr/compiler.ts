@@ -21,7 +21,15 @@ import { type Expr, type ExprOf, isReducer, REDUCERS } from './ast.js';
 import { callDefine, callLibrary, callValue, compileDefine, compileLambda, functionValue, plural } from './compile-calls.js';
 import { familyAsList } from './compile-families.js';
 import {
-  compileArith, compileEquality, compileIf, compileIndex, compileList, compileLogic, compileNegate, compileNot, compileOrder,
+  compileArith,
+  compileEquality,
+  compileIf,
+  compileIndex,
+  compileList,
+  compileLogic,
+  compileNegate,
+  compileNot,
+  compileOrder,
   compileRangeValue,
 } from './compile-operators.js';
 import { compileComprehension, reducerCall, sourcePlan } from './compile-reductions.js';
@@ -55,7 +63,6 @@ export function declareInFile(name: string, declared: readonly string[]): string
 
 const BOOLEAN_OPS = new Set(['and', 'or', 'implies', 'iff']);
 const ORDER_OPS = new Set(['<', '<=', '>', '>=']);
-
 
 export class Compiler {
   readonly file: string;
@@ -217,7 +224,11 @@ export function compileCall(cx: CompileContext, e: ExprOf<'call'>): Compiled {
   const d = cx.defines.get(name);
   if (d) {
     if (e.args.length !== d.decl.params.length) {
-      throw errorAt(cx, `${name} takes ${plural(d.decl.params.length, 'argument')}: ${name}(${d.decl.params.join(', ')}); got ${e.args.length}`, e);
+      throw errorAt(
+        cx,
+        `${name} takes ${plural(d.decl.params.length, 'argument')}: ${name}(${d.decl.params.join(', ')}); got ${e.args.length}`,
+        e,
+      );
     }
     return callDefine(cx, d, e.args, e);
   }

@@ -16,7 +16,6 @@ import type { Fn, Frame } from './frame.js';
 import { at2, located, notBoolean, short } from './runtime.js';
 import { tick } from './stop-poll.js';
 
-
 export type SourcePlan =
   | { kind: 'range'; lo: (fr: Frame) => number; hi: (fr: Frame) => number }
   | { kind: 'family'; family: Family; args: Fn[]; prepare: (fr: Frame) => unknown; pos: SourcePos | undefined }
@@ -44,7 +43,10 @@ export function elementsOf(v: Value, pos: SourcePos | undefined): readonly Value
     }
   }
   if (v instanceof Distribution) return v.support();
-  throw new EvalError(`cannot iterate over ${article(typeOf(v))} (${short(v)}): a source is a range a..b, a list, a family or a measure`, pos);
+  throw new EvalError(
+    `cannot iterate over ${article(typeOf(v))} (${short(v)}): a source is a range a..b, a list, a family or a measure`,
+    pos,
+  );
 }
 
 type Visit = () => boolean;
@@ -106,7 +108,8 @@ function runner(plans: GenPlan[]): (fr: Frame, visit: Visit) => boolean {
   if (its.length === 1) return its[0];
   let run: (fr: Frame, visit: Visit) => boolean = (_fr, visit) => visit();
   for (let k = its.length - 1; k >= 0; k--) {
-    const it = its[k], next = run;
+    const it = its[k],
+      next = run;
     run = (fr, visit) => it(fr, () => next(fr, visit));
   }
   return run;
@@ -149,7 +152,16 @@ export function compileReduction(
           });
           return acc;
         },
-        type: body.type === 'integer' ? 'integer' : body.type === 'matrix' ? 'any' : body.type === 'any' ? 'any' : body.type === 'rational' ? 'number' : body.type,
+        type:
+          body.type === 'integer'
+            ? 'integer'
+            : body.type === 'matrix'
+              ? 'any'
+              : body.type === 'any'
+                ? 'any'
+                : body.type === 'rational'
+                  ? 'number'
+                  : body.type,
       };
     }
     case 'count':

@@ -41,7 +41,16 @@ export { exprEquals, stripPositions, REDUCERS, isReducer } from './ast.js';
 export { parseExpression, parseDefineHeader, MAX_NESTING, MAX_DEPTH } from './parser.js';
 export { printExpression, printHashForm } from './printer.js';
 export { textOrigin, sourcePos } from './origin.js';
-export { Compiler, MAX_CALL_DEPTH, type Compiled, type CompiledSource, type DefineDecl, type CompilerOptions, type Fn, type Frame } from './compiler.js';
+export {
+  Compiler,
+  MAX_CALL_DEPTH,
+  type Compiled,
+  type CompiledSource,
+  type DefineDecl,
+  type CompilerOptions,
+  type Fn,
+  type Frame,
+} from './compiler.js';
 
 /**
  * Evaluate one expression (for `hunch eval`), after `lets` ([name, expression] pairs, in order,
@@ -49,7 +58,9 @@ export { Compiler, MAX_CALL_DEPTH, type Compiled, type CompiledSource, type Defi
  */
 export function evaluate(text: string, lets: Array<[string, string]> = [], indeterminates: string[] = []): Value {
   const c = new Compiler({
-    file: '<expression>', indeterminates, defines: [],
+    file: '<expression>',
+    indeterminates,
+    defines: [],
     declareIndeterminate: (name, declared) => `if ${name} is a polynomial variable, pass --indeterminates ${[...declared, name].join(',')}`,
   });
   const steps: Array<[number, (fr: Value[]) => Value]> = [];

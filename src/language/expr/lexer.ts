@@ -51,13 +51,22 @@ export function tokenize(src: SourceText): Token[] {
         while (j < n && text[j] >= '0' && text[j] <= '9') j++;
         throw inputError(
           `${text.slice(start, j)} is a decimal number; the language has only exact numbers`,
-          src, start, j, 'write a fraction such as 3/2',
+          src,
+          start,
+          j,
+          'write a fraction such as 3/2',
         );
       }
       if (/[A-Za-z_]/.test(text[i] ?? '')) {
         let j = i;
         while (j < n && /[A-Za-z0-9_]/.test(text[j])) j++;
-        throw inputError(`${text.slice(start, j)} is not a number or a name`, src, start, j, `write ${text.slice(start, i)}*${text.slice(i, j)} for a product`);
+        throw inputError(
+          `${text.slice(start, j)} is not a number or a name`,
+          src,
+          start,
+          j,
+          `write ${text.slice(start, i)}*${text.slice(i, j)} for a product`,
+        );
       }
       tokens.push({ kind: 'int', text: text.slice(start, i), start, end: i });
       continue;

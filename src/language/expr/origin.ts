@@ -12,7 +12,8 @@ export function textOrigin(file: string, text: string, line = 1, column = 1): Or
   return {
     file,
     locate(offset: number) {
-      let l = line, c = column;
+      let l = line,
+        c = column;
       const stop = Math.min(offset, text.length);
       for (let i = 0; i < stop; i++) {
         if (text.charCodeAt(i) === 10) {
@@ -32,13 +33,7 @@ export function sourcePos(src: SourceText | undefined, offset: number): SourcePo
 }
 
 /** An InputError pointing at [start, end) of the source. */
-export function inputError(
-  message: string,
-  src: SourceText | undefined,
-  start: number,
-  end: number,
-  suggestion?: string,
-): InputError {
+export function inputError(message: string, src: SourceText | undefined, start: number, end: number, suggestion?: string): InputError {
   const snippet = src ? src.text.slice(start, Math.max(end, start + 1)) || src.text.slice(start) : undefined;
   return new InputError(message, sourcePos(src, start), snippet, suggestion);
 }

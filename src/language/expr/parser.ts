@@ -22,7 +22,17 @@
 
 import { InputError } from '../../base/errors.js';
 import { parseInt10 } from '../../numbers/integer.js';
-import { type BinaryOp, type CompareOp, type Expr, type Generator, type Origin, type Reducer, type SourceText, isReducer, REDUCERS } from './ast.js';
+import {
+  type BinaryOp,
+  type CompareOp,
+  type Expr,
+  type Generator,
+  type Origin,
+  type Reducer,
+  type SourceText,
+  isReducer,
+  REDUCERS,
+} from './ast.js';
 import { tokenize, type Token } from './lexer.js';
 import { inputError } from './origin.js';
 
@@ -102,8 +112,11 @@ class Parser {
     const t: Token = this.toks[this.i];
     if (t.kind !== 'eof') {
       if (t.text === ')' || t.text === ']') throw this.err(`this ${t.text} has no matching ${t.text === ')' ? '(' : '['}`);
-      throw this.err(`unexpected ${this.describe(t)} after a complete expression`, t,
-        t.kind === 'name' || t.kind === 'int' ? 'an operator such as * or a comma may be missing' : undefined);
+      throw this.err(
+        `unexpected ${this.describe(t)} after a complete expression`,
+        t,
+        t.kind === 'name' || t.kind === 'int' ? 'an operator such as * or a comma may be missing' : undefined,
+      );
     }
     return e;
   }
@@ -169,7 +182,11 @@ class Parser {
       const op = this.next();
       const right = this.disjunction();
       if (this.is('iff') || this.is('implies')) {
-        throw this.err(`${op.text} does not chain with ${this.tok.text}`, this.tok, 'add parentheses: (A iff B) iff C, or A iff (B implies C)');
+        throw this.err(
+          `${op.text} does not chain with ${this.tok.text}`,
+          this.tok,
+          'add parentheses: (A iff B) iff C, or A iff (B implies C)',
+        );
       }
       return this.node({ type: 'binary', op: 'iff', left, right, start: left.start, end: right.end });
     }
@@ -179,7 +196,13 @@ class Parser {
       try {
         const right = this.implication();
         if (right.type === 'binary' && right.op === 'iff' && !this.parenthesized(right)) {
-          throw inputError('implies does not chain with iff', this.src, right.start, right.end, 'add parentheses: A implies (B iff C), or (A implies B) iff C');
+          throw inputError(
+            'implies does not chain with iff',
+            this.src,
+            right.start,
+            right.end,
+            'add parentheses: A implies (B iff C), or (A implies B) iff C',
+          );
         }
         return this.node({ type: 'binary', op: 'implies', left, right, start: left.start, end: right.end });
       } finally {
@@ -245,7 +268,9 @@ class Parser {
         const text = (e: Expr) => this.src.text.slice(e.start, e.end);
         throw inputError(
           'comparisons do not chain',
-          this.src, left.start, third.end,
+          this.src,
+          left.start,
+          third.end,
           `${text(left)} ${op} ${text(right)} and ${text(right)} ${op2} ${text(third)}`,
         );
       }
@@ -330,7 +355,11 @@ class Parser {
       }
       this.depth--;
       const close = this.expect(']', 'to close the index', open);
-      e = this.node(index2 ? { type: 'index', target: e, index, index2, start: e.start, end: close.end } : { type: 'index', target: e, index, start: e.start, end: close.end });
+      e = this.node(
+        index2
+          ? { type: 'index', target: e, index, index2, start: e.start, end: close.end }
+          : { type: 'index', target: e, index, start: e.start, end: close.end },
+      );
     }
     return e;
   }
@@ -354,8 +383,11 @@ class Parser {
           return this.node({ type: 'bool', value: t.text === 'true', start: t.start, end: t.end });
         }
         if (t.text === 'if') return this.expr();
-        throw this.err(`expected a value, found the word ${t.text}`, t,
-          t.text === 'in' ? 'a generator "v in S" is written inside sum(...), count(...), all(...) and the like' : undefined);
+        throw this.err(
+          `expected a value, found the word ${t.text}`,
+          t,
+          t.text === 'in' ? 'a generator "v in S" is written inside sum(...), count(...), all(...) and the like' : undefined,
+        );
       case 'op':
         if (t.text === '(') {
           this.next();
@@ -396,9 +428,11 @@ class Parser {
       if (this.tok.kind === 'eof') {
         throw inputError(`${opener.text} is never closed: expected ${closer}`, this.src, opener.start, opener.end, `add ${closer}`);
       }
-      const hint = !this.is('for') ? undefined
-        : closer === ']' ? 'a list comprehension is written list(E for v in S)'
-        : 'a comprehension has a single body before for, as in sum(E for v in S)';
+      const hint = !this.is('for')
+        ? undefined
+        : closer === ']'
+          ? 'a list comprehension is written list(E for v in S)'
+          : 'a comprehension has a single body before for, as in sum(E for v in S)';
       throw this.err(`expected , or ${closer}, found ${this.describe(this.tok)}`, this.tok, hint);
     }
   }
@@ -435,8 +469,11 @@ class Parser {
   /** One generator `v in S` with its optional `where C`. */
   private generator(): Generator {
     if (!this.generatorAhead()) {
-      throw this.err(`expected a generator "v in S", found ${this.describe(this.tok)}`, this.tok,
-        this.tok.kind === 'name' ? `write ${this.tok.text} in S` : undefined);
+      throw this.err(
+        `expected a generator "v in S", found ${this.describe(this.tok)}`,
+        this.tok,
+        this.tok.kind === 'name' ? `write ${this.tok.text} in S` : undefined,
+      );
     }
     const v = this.next();
     this.next(); // in
@@ -530,7 +567,10 @@ function checkDepth(root: Expr, src: SourceText): void {
       throw inputError(
         `the expression is nested more than ${MAX_DEPTH} levels deep (each operator of a chain such as a + b + c, ` +
           'and each index of L[i][j], counts as a level)',
-        src, root.start, root.end, 'split it into parts with let:',
+        src,
+        root.start,
+        root.end,
+        'split it into parts with let:',
       );
     }
     for (const c of children(e)) stack.push([c, d + 1]);
@@ -552,7 +592,14 @@ const IDENT = /^[A-Za-z_][A-Za-z0-9_]*$/;
 export function parseDefineHeader(header: string, origin: Origin): { name: string; params: string[] } {
   const src: SourceText = { text: header, origin };
   const m = DEFINE_HEADER.exec(header);
-  if (!m) throw inputError(`${JSON.stringify(header)} is not a definition header`, src, 0, header.length, 'write name(param, ...), e.g. peaks(w)');
+  if (!m)
+    throw inputError(
+      `${JSON.stringify(header)} is not a definition header`,
+      src,
+      0,
+      header.length,
+      'write name(param, ...), e.g. peaks(w)',
+    );
   const params = m[2] === undefined || m[2].trim() === '' ? [] : m[2].split(',').map((p) => p.trim());
   for (const p of params) {
     if (!IDENT.test(p)) {
@@ -562,7 +609,8 @@ export function parseDefineHeader(header: string, origin: Origin): { name: strin
   }
   const seen = new Set<string>();
   for (const p of params) {
-    if (seen.has(p)) throw inputError(`the parameter ${p} appears twice in ${header.trim()}`, src, header.indexOf(p), header.indexOf(p) + p.length);
+    if (seen.has(p))
+      throw inputError(`the parameter ${p} appears twice in ${header.trim()}`, src, header.indexOf(p), header.indexOf(p) + p.length);
     seen.add(p);
   }
   return { name: m[1], params };

@@ -8,9 +8,21 @@
 import type { BinaryOp, Expr } from './ast.js';
 
 const LEVEL_OF_BINARY: Record<BinaryOp, number> = {
-  implies: 2, iff: 2, or: 3, and: 4,
-  '==': 6, '!=': 6, '<': 6, '<=': 6, '>': 6, '>=': 6,
-  '+': 8, '-': 8, '*': 9, '/': 9, '^': 10,
+  implies: 2,
+  iff: 2,
+  or: 3,
+  and: 4,
+  '==': 6,
+  '!=': 6,
+  '<': 6,
+  '<=': 6,
+  '>': 6,
+  '>=': 6,
+  '+': 8,
+  '-': 8,
+  '*': 9,
+  '/': 9,
+  '^': 10,
 };
 
 function level(e: Expr): number {
@@ -57,7 +69,9 @@ function print(e: Expr, m: Mode): string {
     case 'range':
       return `${at(e.lo, 8, m)}..${at(e.hi, 8, m)}`;
     case 'unary':
-      return e.op === 'not' ? `not ${at(e.operand, 5, m)}` : `-${e.operand.type === 'unary' && e.operand.op === '-' ? print(e.operand, m) : at(e.operand, 10, m)}`;
+      return e.op === 'not'
+        ? `not ${at(e.operand, 5, m)}`
+        : `-${e.operand.type === 'unary' && e.operand.op === '-' ? print(e.operand, m) : at(e.operand, 10, m)}`;
     case 'binary': {
       const L = LEVEL_OF_BINARY[e.op];
       if (e.op === '^') return `${at(e.left, 11, m)}^${exponent(e.right, m)}`;

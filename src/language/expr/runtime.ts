@@ -105,7 +105,8 @@ export function indexValue(t: Value, i: Value, pos: SourcePos | undefined): Valu
       }
       if (count !== null) {
         const units = INDEX_UNITS[(t as Structured).kind] ?? 'entries';
-        const unit = count !== 1 ? units : ({ entries: 'entry', crosses: 'cross' } as Record<string, string>)[units] ?? units.replace(/s$/, '');
+        const unit =
+          count !== 1 ? units : (({ entries: 'entry', crosses: 'cross' } as Record<string, string>)[units] ?? units.replace(/s$/, ''));
         throw new EvalError(`index ${i} is out of range: ${short(t)} has ${count} ${unit}${count ? `: indices 1..${count}` : ''}`, pos);
       }
       throw new EvalError(`index ${i} is out of range for ${short(t)}`, pos);
@@ -116,7 +117,10 @@ export function indexValue(t: Value, i: Value, pos: SourcePos | undefined): Valu
     // An indeterminate passed as an argument (a define's parameter y given x) indexes like x itself.
     const base = bareIndeterminate(t);
     if (base !== null) return indexedVariable(base, i);
-    throw new EvalError(`a polynomial cannot be indexed (${short(t)}); only an indeterminate such as x can: x[i] is its i-th variable`, pos);
+    throw new EvalError(
+      `a polynomial cannot be indexed (${short(t)}); only an indeterminate such as x can: x[i] is its i-th variable`,
+      pos,
+    );
   }
   throw new EvalError(`${article(typeOf(t))} cannot be indexed (${short(t)})`, pos);
 }

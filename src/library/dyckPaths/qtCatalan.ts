@@ -15,7 +15,8 @@ function addInto(acc: Table, x: Table, qShift: number, tShift: number): void {
     const row = x[i];
     for (let j = 0; j < row.length; j++) {
       if (row[j] === 0) continue;
-      const ii = i + qShift, jj = j + tShift;
+      const ii = i + qShift,
+        jj = j + tShift;
       while (acc.length <= ii) acc.push([]);
       const r = acc[ii];
       while (r.length <= jj) r.push(0);

@@ -16,7 +16,8 @@ export function areaSequence(steps: readonly number[]): number[] {
 
 /** The sum of the area sequence (0 for UDUD...UD, n(n-1)/2 for U^n D^n). */
 export function area(steps: readonly number[]): number {
-  let h = 0, a = 0;
+  let h = 0,
+    a = 0;
   for (const s of steps) {
     if (s > 0) a += h;
     h += s;
@@ -40,7 +41,8 @@ export function bounce(steps: readonly number[]): number {
     if (s > 0) ups++;
     else upsBefore.push(ups);
   }
-  let k = 0, b = 0;
+  let k = 0,
+    b = 0;
   while (k < n) {
     k = upsBefore[k];
     if (k < n) b += n - k;
@@ -50,14 +52,16 @@ export function bounce(steps: readonly number[]): number {
 
 /** The largest height reached. */
 export function height(steps: readonly number[]): number {
-  let h = 0, m = 0;
+  let h = 0,
+    m = 0;
   for (const s of steps) if ((h += s) > m) m = h;
   return m;
 }
 
 /** The number of down steps that end on the axis. */
 export function returns(steps: readonly number[]): number {
-  let h = 0, r = 0;
+  let h = 0,
+    r = 0;
   for (const s of steps) if ((h += s) === 0) r++;
   return r;
 }
@@ -83,7 +87,6 @@ export function valleys(steps: readonly number[]): number {
 export function dinv(steps: readonly number[]): number {
   const a = areaSequence(steps);
   let d = 0;
-  for (let i = 0; i < a.length; i++)
-    for (let j = i + 1; j < a.length; j++) if (a[i] === a[j] || a[i] === a[j] + 1) d++;
+  for (let i = 0; i < a.length; i++) for (let j = i + 1; j < a.length; j++) if (a[i] === a[j] || a[i] === a[j] + 1) d++;
   return d;
 }

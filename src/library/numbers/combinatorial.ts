@@ -65,7 +65,8 @@ export function binomial(n: Int, k: Int, kMax: number): Int | undefined {
     if (k < 0 || k > n) return 0;
     return smallBinomial(n, Math.min(k, n - k));
   }
-  const N = toBig(n), K = toBig(k);
+  const N = toBig(n),
+    K = toBig(k);
   if (K < 0n) return 0;
   if (N >= 0n) {
     if (K > N) return 0;
@@ -171,12 +172,14 @@ export function fibonacci(n: number): Int {
   }
   if (n <= 78) {
     // F(78) < 2^53, so plain numbers are exact.
-    let a = 0, b = 1;
+    let a = 0,
+      b = 1;
     for (let i = 0; i < n; i++) [a, b] = [b, a + b];
     return a;
   }
   // Fast doubling: F(2m) = F(m) (2F(m+1) - F(m)), F(2m+1) = F(m)^2 + F(m+1)^2.
-  let a = 0n, b = 1n; // F(m), F(m+1) with m = the bits of n read so far
+  let a = 0n,
+    b = 1n; // F(m), F(m+1) with m = the bits of n read so far
   for (let bit = 31 - Math.clz32(n); bit >= 0; bit--) {
     const c = a * (2n * b - a);
     const d = a * a + b * b;

@@ -43,7 +43,8 @@ function powModBig(b: bigint, e: bigint, m: bigint): bigint {
  * n - 1 = d 2^s, d odd, either a^d = 1 or a^(d 2^r) = -1 mod n for some 0 <= r < s.
  */
 export function isStrongProbablePrime(n: bigint, a: bigint): boolean {
-  let d = n - 1n, s = 0;
+  let d = n - 1n,
+    s = 0;
   while ((d & 1n) === 0n) {
     d >>= 1n;
     s++;
@@ -58,7 +59,8 @@ export function isStrongProbablePrime(n: bigint, a: bigint): boolean {
 }
 
 function isSprpSmall(n: number, a: number): boolean {
-  let d = n - 1, s = 0;
+  let d = n - 1,
+    s = 0;
   while (d % 2 === 0) {
     d /= 2;
     s++;

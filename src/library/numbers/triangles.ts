@@ -14,7 +14,7 @@ export function eulerianRow(n: number): bigint[] {
   let row = [1n];
   for (let m = 1; m <= n; m++) {
     const next: bigint[] = new Array(m).fill(0n);
-    for (let k = 0; k < m; k++) next[k] = BigInt(k + 1) * (row[k] ?? 0n) + BigInt(m - k) * (k > 0 ? row[k - 1] ?? 0n : 0n);
+    for (let k = 0; k < m; k++) next[k] = BigInt(k + 1) * (row[k] ?? 0n) + BigInt(m - k) * (k > 0 ? (row[k - 1] ?? 0n) : 0n);
     row = next;
   }
   return row;
@@ -22,7 +22,8 @@ export function eulerianRow(n: number): bigint[] {
 
 /** M(n) by (n+2) M(n) = (2n+1) M(n-1) + 3(n-1) M(n-2), M(0) = M(1) = 1 (OEIS A001006). */
 export function motzkin(n: number): bigint {
-  let a = 1n, b = 1n; // M(k-2), M(k-1)
+  let a = 1n,
+    b = 1n; // M(k-2), M(k-1)
   if (n <= 1) return 1n;
   for (let k = 2; k <= n; k++) {
     const c = (BigInt(2 * k + 1) * b + BigInt(3 * (k - 1)) * a) / BigInt(k + 2);

@@ -124,7 +124,8 @@ defineFunction({
   exampleValue: 'matrix([[0, 1, 0], [0, 0, 1], [1, 0, 0]])',
   source: 'definition; det(permMatrix(w)) = sign(w)',
   impl: (w) => {
-    const a = (w as Permutation).a, n = a.length;
+    const a = (w as Permutation).a,
+      n = a.length;
     const entries: Scalar[] = new Array<Scalar>(n * n).fill(0);
     for (let i = 0; i < n; i++) entries[i * n + a[i] - 1] = 1;
     return new Matrix(n, n, entries);

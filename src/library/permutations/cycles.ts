@@ -40,7 +40,8 @@ defineFunction({
   topic,
   params: [{ name: 'w', type: 'permutation' }],
   returns: 'list',
-  description: 'the cycles of w as lists [i, w[i], w[w[i]], ...], each starting at its least element, ordered by least element (fixed points included)',
+  description:
+    'the cycles of w as lists [i, w[i], w[w[i]], ...], each starting at its least element, ordered by least element (fixed points included)',
   example: 'cycleList(perm([3, 1, 2, 5, 4, 6]))',
   exampleValue: '[[1, 3, 2], [4, 5], [6]]',
   source: 'definition (Stanley, Enumerative Combinatorics 1, 2nd ed., §1.3); their number: OEIS A132393',
@@ -62,7 +63,11 @@ defineFunction({
 defineFunction({
   name: 'transposition',
   topic,
-  params: [{ name: 'i', type: 'integer' }, { name: 'j', type: 'integer' }, { name: 'n', type: 'integer' }],
+  params: [
+    { name: 'i', type: 'integer' },
+    { name: 'j', type: 'integer' },
+    { name: 'n', type: 'integer' },
+  ],
   returns: 'permutation',
   description: 't_ij in S_n: the permutation exchanging i and j (i != j, both in 1..n) and fixing the rest',
   example: 'transposition(1, 3, 4)',
@@ -70,7 +75,8 @@ defineFunction({
   source: 'definition; w * t_ij exchanges the entries in positions i and j (Björner and Brenti, Combinatorics of Coxeter Groups, §2.1)',
   impl: (i, j, n) => {
     const m = smallIntArg('transposition(i, j, n)', 'n', n, 2, MAX_N);
-    const a = smallIntArg('transposition(i, j, n)', 'i', i, 1, m), b = smallIntArg('transposition(i, j, n)', 'j', j, 1, m);
+    const a = smallIntArg('transposition(i, j, n)', 'i', i, 1, m),
+      b = smallIntArg('transposition(i, j, n)', 'j', j, 1, m);
     if (a === b) fail(`transposition(i, j, n) needs i != j, got i = j = ${a}`);
     const w = Array.from({ length: m }, (_, k) => k + 1);
     w[a - 1] = b;

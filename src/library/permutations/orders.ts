@@ -13,12 +13,14 @@ import { defineFunction, type ParamDecl } from '../registry.js';
 import type { Value } from '../../values/value.js';
 import { Scratch } from './scratch.js';
 
-const bufU = new Scratch(), bufV = new Scratch();
+const bufU = new Scratch(),
+  bufV = new Scratch();
 
 export function bruhatLeq(u: readonly number[], v: readonly number[]): boolean {
   const n = u.length;
   // cu[j] = #{a <= i : u(a) >= j} for the rows i seen so far; the same for cv.
-  const cu = bufU.get(n + 2), cv = bufV.get(n + 2);
+  const cu = bufU.get(n + 2),
+    cv = bufV.get(n + 2);
   for (let i = 0; i < n; i++) {
     for (let j = u[i]; j >= 1; j--) cu[j]++;
     for (let j = v[i]; j >= 1; j--) cv[j]++;
@@ -29,18 +31,19 @@ export function bruhatLeq(u: readonly number[], v: readonly number[]): boolean {
 
 export function weakLeq(u: readonly number[], v: readonly number[]): boolean {
   const n = u.length;
-  const pu = bufU.get(n + 1), pv = bufV.get(n + 1); // positions of the values
+  const pu = bufU.get(n + 1),
+    pv = bufV.get(n + 1); // positions of the values
   for (let i = 0; i < n; i++) {
     pu[u[i]] = i;
     pv[v[i]] = i;
   }
-  for (let x = 1; x <= n; x++)
-    for (let y = x + 1; y <= n; y++) if (pu[x] > pu[y] && pv[x] < pv[y]) return false;
+  for (let x = 1; x <= n; x++) for (let y = x + 1; y <= n; y++) if (pu[x] > pu[y] && pv[x] < pv[y]) return false;
   return true;
 }
 
 function sameSize(call: string, u: Value, v: Value): [number[], number[]] {
-  const a = (u as Permutation).a, b = (v as Permutation).a;
+  const a = (u as Permutation).a,
+    b = (v as Permutation).a;
   if (a.length !== b.length) fail(`${call} compares permutations of the same size, got sizes ${a.length} and ${b.length}`);
   return [a, b];
 }
@@ -59,7 +62,8 @@ defineFunction({
   description: 'whether u <= v in the Bruhat order of S_n (u and v of the same size)',
   example: 'bruhatLeq(perm([1, 3, 2]), perm([3, 1, 2]))',
   exampleValue: 'true',
-  source: 'Björner and Brenti, Combinatorics of Coxeter Groups, ch. 2: rank-matrix criterion, tested against the tableau criterion and the definition',
+  source:
+    'Björner and Brenti, Combinatorics of Coxeter Groups, ch. 2: rank-matrix criterion, tested against the tableau criterion and the definition',
   impl: (u, v) => bruhatLeq(...sameSize('bruhatLeq(u, v)', u, v)),
 });
 

@@ -24,7 +24,8 @@ export interface Pattern {
 
 export function preparePattern(p: readonly number[]): Pattern {
   const k = p.length;
-  const below = new Int32Array(k).fill(-1), above = new Int32Array(k).fill(-1);
+  const below = new Int32Array(k).fill(-1),
+    above = new Int32Array(k).fill(-1);
   for (let j = 0; j < k; j++) {
     for (let i = 0; i < j; i++) {
       if (p[i] < p[j] && (below[j] < 0 || p[i] > p[below[j]])) below[j] = i;
@@ -42,14 +43,16 @@ export function patternArg(call: string, v: Value): Pattern {
   if (typeof v === 'string') {
     let pat = fromStrings.get(v);
     if (pat === undefined) {
-      if (!/^[1-9]*$/.test(v)) fail(`${call}: the pattern ${JSON.stringify(v)} must be a string of digits 1-9 such as "1342"; for longer patterns use a list`);
+      if (!/^[1-9]*$/.test(v))
+        fail(`${call}: the pattern ${JSON.stringify(v)} must be a string of digits 1-9 such as "1342"; for longer patterns use a list`);
       pat = preparePattern(checkPermutation(call, [...v].map(Number), JSON.stringify(v)));
       if (fromStrings.size < 1000) fromStrings.set(v, pat);
     }
     return pat;
   }
   if (Array.isArray(v)) {
-    for (const x of v) if (typeof x !== 'number' && typeof x !== 'bigint') fail(`${call}: the pattern ${valueToText(v)} must be a list of integers`);
+    for (const x of v)
+      if (typeof x !== 'number' && typeof x !== 'bigint') fail(`${call}: the pattern ${valueToText(v)} must be a list of integers`);
     return preparePattern(checkPermutation(call, v as number[], valueToText(v)));
   }
   fail(`${call}: a pattern is a permutation, a list such as [1, 3, 4, 2] or a string such as "1342", got ${valueToText(v)}`);
@@ -65,14 +68,16 @@ function checkPermutation(call: string, p: number[], text: string): number[] {
   return p;
 }
 
-const chosenBuf = new Scratch(), atBuf = new Scratch();
+const chosenBuf = new Scratch(),
+  atBuf = new Scratch();
 
 /**
  * Visit occurrences of the pattern in a: choose positions left to right, each entry checked
  * against its two bounds. `stopAtFirst` ends at the first occurrence. Returns how many were found.
  */
 function occurrences(a: readonly number[], pat: Pattern, stopAtFirst: boolean): number {
-  const n = a.length, k = pat.p.length;
+  const n = a.length,
+    k = pat.p.length;
   if (k === 0) return 1;
   if (k > n) return 0;
   const { below, above } = pat;
@@ -125,7 +130,8 @@ defineFunction({
   topic,
   params,
   returns: 'boolean',
-  description: 'whether w contains the pattern p (a permutation, a list, or a digit string such as "132"): some entries of w, left to right, in the relative order of p',
+  description:
+    'whether w contains the pattern p (a permutation, a list, or a digit string such as "132"): some entries of w, left to right, in the relative order of p',
   example: 'contains(perm([2, 4, 1, 3]), "231")',
   exampleValue: 'true',
   source: patternSource,

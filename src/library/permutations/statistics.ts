@@ -145,7 +145,8 @@ function longestMonotone(a: readonly number[], dir: 1 | -1): number {
   let len = 0;
   for (let i = 0; i < n; i++) {
     const x = dir * a[i];
-    let lo = 0, hi = len; // first l with tails[l] >= x
+    let lo = 0,
+      hi = len; // first l with tails[l] >= x
     while (lo < hi) {
       const mid = (lo + hi) >> 1;
       if (tails[mid] < x) lo = mid + 1;
@@ -170,7 +171,8 @@ defineFunction({
   description: 'the number of inversions: pairs i < j with w[i] > w[j] (of a permutation or a word)',
   example: 'inv(perm([3, 1, 4, 2]))',
   exampleValue: '3',
-  source: 'OEIS A008302 (Mahonian numbers: the distribution of inv over S_n); on words, the q-multinomial coefficient (MacMahon; Andrews, The Theory of Partitions, Thm 3.6)',
+  source:
+    'OEIS A008302 (Mahonian numbers: the distribution of inv over S_n); on words, the q-multinomial coefficient (MacMahon; Andrews, The Theory of Partitions, Thm 3.6)',
   impl: (w) => inv(arr(w)),
 });
 
@@ -179,10 +181,12 @@ defineFunction({
   topic,
   params: PWT,
   returns: 'integer',
-  description: 'the major index: the sum of the descent positions i, where w[i] > w[i+1] (of a permutation or a word); of a standard tableau, the sum of its descents i (i + 1 in a lower row)',
+  description:
+    'the major index: the sum of the descent positions i, where w[i] > w[i+1] (of a permutation or a word); of a standard tableau, the sum of its descents i (i + 1 in a lower row)',
   example: 'maj(perm([3, 1, 4, 2]))',
   exampleValue: '4',
-  source: 'OEIS A008302 (MacMahon: maj and inv are equidistributed, on permutations and on the rearrangements of a word); on standard tableaux, q^n(lambda) [n]_q! / prod [h]_q (Stanley, Enumerative Combinatorics 2, Cor. 7.21.5)',
+  source:
+    'OEIS A008302 (MacMahon: maj and inv are equidistributed, on permutations and on the rearrangements of a word); on standard tableaux, q^n(lambda) [n]_q! / prod [h]_q (Stanley, Enumerative Combinatorics 2, Cor. 7.21.5)',
   impl: (w) => (w instanceof Tableau ? tableauDescents(w, 'maj(T)').reduce((a, b) => a + b, 0) : maj(arr(w))),
 });
 
@@ -191,7 +195,8 @@ defineFunction({
   topic,
   params: PWT,
   returns: 'integer',
-  description: 'the number of descents: positions i with w[i] > w[i+1] (of a permutation or a word); of a standard tableau, the i with i + 1 in a lower row',
+  description:
+    'the number of descents: positions i with w[i] > w[i+1] (of a permutation or a word); of a standard tableau, the i with i + 1 in a lower row',
   example: 'des(perm([3, 1, 4, 2]))',
   exampleValue: '2',
   source: 'OEIS A008292 (Eulerian numbers)',
@@ -203,7 +208,8 @@ defineFunction({
   topic,
   params: PWT,
   returns: 'list',
-  description: 'the list of descent positions i (w[i] > w[i+1]), increasing (of a permutation or a word); of a standard tableau, the i with i + 1 in a lower row than i',
+  description:
+    'the list of descent positions i (w[i] > w[i+1]), increasing (of a permutation or a word); of a standard tableau, the i with i + 1 in a lower row than i',
   example: 'descents(perm([3, 1, 4, 2]))',
   exampleValue: '[1, 3]',
   source: 'definition; OEIS A008292 (Eulerian numbers) for their number',

@@ -22,11 +22,13 @@ export function reverseComplement(a: readonly number[]): number[] {
 
 /** The number of i with w[i] larger (dir = 1) or smaller (dir = -1) than every entry before it. */
 export function leftToRightRecords(a: readonly number[], dir: 1 | -1): number {
-  let best = -Infinity, c = 0;
-  for (const v of a) if (dir * v > best) {
-    best = dir * v;
-    c++;
-  }
+  let best = -Infinity,
+    c = 0;
+  for (const v of a)
+    if (dir * v > best) {
+      best = dir * v;
+      c++;
+    }
   return c;
 }
 

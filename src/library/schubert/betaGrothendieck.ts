@@ -23,7 +23,8 @@ export function betaGrothendieck(a: readonly number[], x: string, beta: PolyLike
     path.push(i + 1);
     [cur[i], cur[i + 1]] = [cur[i + 1], cur[i]];
   }
-  const ids: number[] = [], exps: number[] = [];
+  const ids: number[] = [],
+    exps: number[] = [];
   for (let i = 1; i < m; i++) {
     ids.push(indexedVarId(x, i));
     exps.push(m - i);

@@ -51,12 +51,14 @@ export function klPolynomial(u: readonly number[], w: readonly number[]): Poly {
   else {
     let i = 0;
     while (!(w[i] > w[i + 1])) i++; // a right descent of w (w != e since u < w)
-    const v = swapped(w, i), us = swapped(u, i);
+    const v = swapped(w, i),
+      us = swapped(u, i);
     const c = u[i] > u[i + 1] ? 1 : 0;
     out = [];
     addInto(out, klPolynomial(us, v), 1 - c, 1);
     addInto(out, klPolynomial(u, v), c, 1);
-    const lw = inv(w), lv = inv(v);
+    const lw = inv(w),
+      lv = inv(v);
     for (const z of group(w.length)) {
       if (!(z[i] > z[i + 1]) || !bruhatLeq(u, z) || !bruhatLeq(z, v) || z.join() === v.join()) continue;
       const lz = inv(z);

@@ -12,8 +12,11 @@
 export function benderKnuth(rows: number[][], i: number): void {
   for (let r = 0; r < rows.length; r++) {
     const row = rows[r];
-    const below = rows[r + 1], above = rows[r - 1];
-    let start = -1, a = 0, b = 0;
+    const below = rows[r + 1],
+      above = rows[r - 1];
+    let start = -1,
+      a = 0,
+      b = 0;
     for (let j = 0; j < row.length; j++) {
       const v = row[j];
       if (v === i && !(below && j < below.length && below[j] === i + 1)) {

@@ -20,7 +20,8 @@ function fits(t: number[][], r: number, c: number, v: number): boolean {
 }
 
 export function heckeInsert(word: readonly number[]): { P: number[][]; Q: number[][][] } {
-  const P: number[][] = [], Q: number[][][] = [];
+  const P: number[][] = [],
+    Q: number[][][] = [];
   word.forEach((letter, step) => {
     const label = step + 1;
     let x = letter;

@@ -12,9 +12,11 @@ import { fail } from '../../base/errors.js';
 /** The two-line array of a matrix of nonnegative integers: pairs [i, j] with multiplicity M[i, j], lexicographic. */
 export function twoLineArrayOf(rows: readonly (readonly number[])[]): [number, number][] {
   const out: [number, number][] = [];
-  rows.forEach((r, i) => r.forEach((m, j) => {
-    for (let k = 0; k < m; k++) out.push([i + 1, j + 1]);
-  }));
+  rows.forEach((r, i) =>
+    r.forEach((m, j) => {
+      for (let k = 0; k < m; k++) out.push([i + 1, j + 1]);
+    }),
+  );
   return out;
 }
 
@@ -27,9 +29,11 @@ export function sortTwoLine(pairs: [number, number][]): [number, number][] {
  * entry > x (RSK); weak = true: the leftmost entry >= x (dual RSK, on arrays without repeated pairs).
  */
 export function insertTwoLine(pairs: readonly [number, number][], weak: boolean): { P: number[][]; Q: number[][] } {
-  const P: number[][] = [], Q: number[][] = [];
+  const P: number[][] = [],
+    Q: number[][] = [];
   for (const [top, bottom] of pairs) {
-    let x = bottom, r = 0;
+    let x = bottom,
+      r = 0;
     for (;;) {
       if (r === P.length) {
         P.push([x]);
@@ -93,11 +97,12 @@ export function isSkewSemistandard(rows: readonly (readonly number[])[], mu: rea
   for (let i = 0; i < rows.length; i++) {
     const off = mu[i] ?? 0;
     if (i > 0 && off + rows[i].length > (mu[i - 1] ?? 0) + rows[i - 1].length) return false;
-    if ((mu[i] ?? 0) > (i > 0 ? mu[i - 1] ?? 0 : Infinity)) return false;
+    if ((mu[i] ?? 0) > (i > 0 ? (mu[i - 1] ?? 0) : Infinity)) return false;
     for (let j = 1; j < rows[i].length; j++) if (rows[i][j] < rows[i][j - 1]) return false;
     if (i > 0)
       for (let j = 0; j < rows[i].length; j++) {
-        const c = off + j, above = c - (mu[i - 1] ?? 0);
+        const c = off + j,
+          above = c - (mu[i - 1] ?? 0);
         if (above >= 0 && above < rows[i - 1].length && rows[i - 1][above] >= rows[i][j]) return false;
       }
   }
@@ -110,9 +115,11 @@ export function isSkewSemistandard(rows: readonly (readonly number[])[], mu: rea
  * the row is unchanged and x + 1 goes on to the next row; otherwise y is replaced by x and goes on.
  */
 export function edelmanGreeneInsert(word: readonly number[]): { P: number[][]; Q: number[][] } {
-  const P: number[][] = [], Q: number[][] = [];
+  const P: number[][] = [],
+    Q: number[][] = [];
   word.forEach((letter, step) => {
-    let x = letter, r = 0;
+    let x = letter,
+      r = 0;
     for (;;) {
       if (r === P.length) {
         P.push([x]);

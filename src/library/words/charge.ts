@@ -27,10 +27,14 @@ export function nOf(mu: readonly number[]): number {
 
 export function charge(w: readonly number[], call = 'charge'): number {
   const content = partitionContent(w);
-  if (!content) fail(`${call} needs a word whose content is a partition (as many 1s as 2s or more, as many 2s as 3s or more, ...), got [${w.join(', ')}]`);
+  if (!content)
+    fail(
+      `${call} needs a word whose content is a partition (as many 1s as 2s or more, as many 2s as 3s or more, ...), got [${w.join(', ')}]`,
+    );
   const n = w.length;
   const used = new Uint8Array(n);
-  let left = n, total = 0;
+  let left = n,
+    total = 0;
   while (left > 0) {
     // letters 1..k remain, where k is the number of distinct letters still unused
     let k = 0;
@@ -39,7 +43,8 @@ export function charge(w: readonly number[], call = 'charge'): number {
     let index = 0;
     for (let r = 1; r <= k; r++) {
       // move left cyclically from pos to the first unused r
-      let p = pos - 1, wrapped = false;
+      let p = pos - 1,
+        wrapped = false;
       for (;;) {
         if (p < 0) {
           p = n - 1;

@@ -56,12 +56,15 @@ function reducedWordBindings(doc: Record<string, unknown>): Set<string> {
   const out = new Set<string>();
   const f = doc.for;
   if (f && typeof f === 'object')
-    for (const [k, v] of Object.entries(f as Record<string, unknown>)) if (typeof v === 'string' && /^\s*reducedWords\s*\(/.test(v)) out.add(k);
+    for (const [k, v] of Object.entries(f as Record<string, unknown>))
+      if (typeof v === 'string' && /^\s*reducedWords\s*\(/.test(v)) out.add(k);
   return out;
 }
 
 function sizeWords(size: Record<string, number>): string {
-  return Object.entries(size).map(([k, v]) => `${k} = ${v}`).join(', ');
+  return Object.entries(size)
+    .map(([k, v]) => `${k} = ${v}`)
+    .join(', ');
 }
 
 function foundWords(f: CounterexampleFile): string {
@@ -84,9 +87,15 @@ function recheckWords(r: ReplayResult | null, error: string | null): { ok: boole
     case 'holds':
       return { ok: false, text: 're-checked by this export: the claim HOLDS for this case, so the file does not refute the conjecture' };
     case 'not-a-case':
-      return { ok: false, text: `re-checked by this export: not a case of this conjecture (${r.error ?? 'it is outside its families or ranges'}), so it is not a counterexample` };
+      return {
+        ok: false,
+        text: `re-checked by this export: not a case of this conjecture (${r.error ?? 'it is outside its families or ranges'}), so it is not a counterexample`,
+      };
     case 'needs-plugins':
-      return { ok: false, text: `not re-checked: the conjecture uses plugin functions this project does not load (${r.missingPlugins.flatMap((p) => p.functions).join(', ')})` };
+      return {
+        ok: false,
+        text: `not re-checked: the conjecture uses plugin functions this project does not load (${r.missingPlugins.flatMap((p) => p.functions).join(', ')})`,
+      };
     case 'stopped':
       return { ok: false, text: `not re-checked: the replay was stopped (${r.error ?? 'budget'}) before the case was evaluated` };
     default:
@@ -94,10 +103,16 @@ function recheckWords(r: ReplayResult | null, error: string | null): { ok: boole
   }
 }
 
-export function counterexampleModel(f: CounterexampleFile, replay: ReplayResult | null, replayError: string | null = null): CounterexampleModel {
+export function counterexampleModel(
+  f: CounterexampleFile,
+  replay: ReplayResult | null,
+  replayError: string | null = null,
+): CounterexampleModel {
   const doc = f.document;
   const reduced = reducedWordBindings(doc);
-  const witnesses = Array.isArray((f as unknown as Record<string, unknown>).witnesses) ? ((f as unknown as Record<string, unknown>).witnesses as Record<string, unknown>[]) : [];
+  const witnesses = Array.isArray((f as unknown as Record<string, unknown>).witnesses)
+    ? ((f as unknown as Record<string, unknown>).witnesses as Record<string, unknown>[])
+    : [];
   return {
     id: f.conjecture,
     statement: f.statement,
@@ -110,7 +125,12 @@ export function counterexampleModel(f: CounterexampleFile, replay: ReplayResult 
     witnesses: witnesses.map((w) => ({
       at: String(w.at ?? ''),
       value: shown('', w.value, false).text,
-      bindings: w.bindings && typeof w.bindings === 'object' ? Object.entries(w.bindings as Record<string, unknown>).map(([k, x]) => `${k} = ${shown(k, x, false).text}`).join(', ') : '',
+      bindings:
+        w.bindings && typeof w.bindings === 'object'
+          ? Object.entries(w.bindings as Record<string, unknown>)
+              .map(([k, x]) => `${k} = ${shown(k, x, false).text}`)
+              .join(', ')
+          : '',
     })),
     replay: f.replay,
     recheck: recheckWords(replay, replayError),

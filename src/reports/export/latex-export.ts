@@ -18,7 +18,8 @@ function valueMath(v: ShownValue): string {
 }
 
 function shownValue(v: ShownValue): string {
-  const math = v.text.length > MAX_MATH ? `$${exprToLatex(v.name)} =$ ${valueMath(v)}` : `$${exprToLatex(v.name)} = ${exprToLatex(v.text)}$`;
+  const math =
+    v.text.length > MAX_MATH ? `$${exprToLatex(v.name)} =$ ${valueMath(v)}` : `$${exprToLatex(v.name)} = ${exprToLatex(v.text)}$`;
   const lines = [`\\item ${math}`];
   if (v.scene) {
     lines.push('', '\\smallskip', sceneToTikz(v.scene), '', `{\\footnotesize ${latexText(v.scene.caption)}}`);
@@ -57,7 +58,8 @@ export function counterexampleLatex(m: CounterexampleModel, coverage: CoverageLi
   if (m.sides) out.push(`\\noindent The two sides of the claim: $${exprToLatex(m.sides[0])}$ and $${exprToLatex(m.sides[1])}$.`, '');
   if (m.witnesses.length) {
     out.push('\\noindent\\textbf{Witnesses.}', '\\begin{itemize}');
-    for (const w of m.witnesses) out.push(`\\item ${latexCode(w.at)} is decided by ${w.bindings ? latexText(w.bindings) : 'its element'}: ${latexCode(w.value)}`);
+    for (const w of m.witnesses)
+      out.push(`\\item ${latexCode(w.at)} is decided by ${w.bindings ? latexText(w.bindings) : 'its element'}: ${latexCode(w.value)}`);
     out.push('\\end{itemize}');
   }
   out.push(`\\noindent Replay: ${latexCode(m.replay)}`);

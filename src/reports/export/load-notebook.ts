@@ -39,11 +39,16 @@ export interface NotebookOptions {
   title?: string;
 }
 
-export function loadNotebook(project: Project, paths: readonly string[], opts: NotebookOptions = {}): { model: NotebookModel; warnings: string[] } {
+export function loadNotebook(
+  project: Project,
+  paths: readonly string[],
+  opts: NotebookOptions = {},
+): { model: NotebookModel; warnings: string[] } {
   let specs = loadConjectures(paths.length ? [...paths] : project.config.conjectures);
   if (opts.id !== undefined) {
     specs = specs.filter((s) => s.id === opts.id);
-    if (specs.length === 0) throw new InputError(`no conjecture with id ${opts.id} in ${paths.join(', ') || project.config.conjectures.join(', ')}`);
+    if (specs.length === 0)
+      throw new InputError(`no conjecture with id ${opts.id} in ${paths.join(', ') || project.config.conjectures.join(', ')}`);
   }
   const hashes = pluginHashes();
   const infos = specs.map((s) => ({ id: s.id, file: s.file, expect: s.expect, hash: conjectureHash(s, { pluginHashes: hashes }) }));
@@ -56,7 +61,11 @@ export function loadNotebook(project: Project, paths: readonly string[], opts: N
   });
   const model: NotebookModel = {
     title: opts.title ?? `Notebook ${basename(project.root)}`,
-    generatedAt: new Date().toISOString().replace(/\.\d+Z$/, 'Z').replace('T', ' ').replace('Z', ' UTC'),
+    generatedAt: new Date()
+      .toISOString()
+      .replace(/\.\d+Z$/, 'Z')
+      .replace('T', ' ')
+      .replace('Z', ' UTC'),
     tool: TOOL_VERSION,
     entries,
   };

@@ -46,7 +46,8 @@ export function counterexampleMarkdown(m: CounterexampleModel, coverage: Coverag
   if (m.sides) out.push('', `The two sides of the claim: ${code(m.sides[0])} and ${code(m.sides[1])}.`);
   if (m.witnesses.length) {
     out.push('', '**Witnesses**', '');
-    for (const w of m.witnesses) out.push(`- ${code(w.at)} is decided by ${w.bindings ? code(w.bindings) : 'its element'}: ${code(w.value)}`);
+    for (const w of m.witnesses)
+      out.push(`- ${code(w.at)} is decided by ${w.bindings ? code(w.bindings) : 'its element'}: ${code(w.value)}`);
   }
   out.push('', `Replay: ${code(m.replay)}`, '', `<sub>exported by hunch ${TOOL_VERSION}</sub>`);
   return out.join('\n') + '\n';
@@ -61,7 +62,10 @@ export function notebookMarkdown(n: NotebookModel): string {
     '',
     '| conjecture | expect | latest | verified (exhaustive) | sampled (evidence, not proof) |',
     '|---|---|---|---|---|',
-    ...n.entries.map((e) => `| ${code(e.id)} | ${e.expect} | ${e.agrees === false ? `**${cell(e.latest)}**` : cell(e.latest)} | ${cell(e.exhaustive)} | ${cell(e.sampled)} |`),
+    ...n.entries.map(
+      (e) =>
+        `| ${code(e.id)} | ${e.expect} | ${e.agrees === false ? `**${cell(e.latest)}**` : cell(e.latest)} | ${cell(e.exhaustive)} | ${cell(e.sampled)} |`,
+    ),
     '',
     `<sub>exported by hunch ${TOOL_VERSION} on ${n.generatedAt}</sub>`,
   ];

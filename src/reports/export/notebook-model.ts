@@ -49,13 +49,18 @@ const first = (size: Record<string, number>): number | null => {
   const v = Object.values(size);
   return v.length ? v[0] : null;
 };
-const label = (size: Record<string, number>) => Object.entries(size).map(([k, v]) => `${k} = ${v}`).join(', ') || 'once';
+const label = (size: Record<string, number>) =>
+  Object.entries(size)
+    .map(([k, v]) => `${k} = ${v}`)
+    .join(', ') || 'once';
 
 function sizeCells(s: ConjectureStatus): SizeCell[] {
   const cells: SizeCell[] = [];
-  for (const e of s.exhaustive) cells.push({ size: first(e.size), label: label(e.size), state: e.failures ? 'failed' : 'verified', cases: e.cases });
+  for (const e of s.exhaustive)
+    cells.push({ size: first(e.size), label: label(e.size), state: e.failures ? 'failed' : 'verified', cases: e.cases });
   for (const u of s.unfinished) cells.push({ size: first(u.size), label: label(u.size), state: 'unfinished', cases: 0 });
-  for (const e of s.sampled) cells.push({ size: first(e.size), label: label(e.size), state: e.failures ? 'sample-failed' : 'sampled', cases: e.cases });
+  for (const e of s.sampled)
+    cells.push({ size: first(e.size), label: label(e.size), state: e.failures ? 'sample-failed' : 'sampled', cases: e.cases });
   return cells.sort((a, b) => (a.size ?? 0) - (b.size ?? 0));
 }
 
@@ -77,7 +82,9 @@ export function notebookEntry(
     exhaustive: exhaustiveText(s),
     sampled: sampledText(s),
     sizes: sizeCells(s),
-    stale: s.stale ? `${s.stale.records} record${s.stale.records === 1 ? '' : 's'} of ${s.stale.versions} earlier version${s.stale.versions === 1 ? '' : 's'}` : null,
+    stale: s.stale
+      ? `${s.stale.records} record${s.stale.records === 1 ? '' : 's'} of ${s.stale.versions} earlier version${s.stale.versions === 1 ? '' : 's'}`
+      : null,
     ms: counted.reduce((a, r) => a + r.ms, 0),
     counterexample: counterexample ? counterexample.model : null,
     counterexampleFile: counterexample ? counterexample.file : null,

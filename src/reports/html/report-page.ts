@@ -59,7 +59,14 @@ function counterexampleSection(e: NotebookEntry, m: CounterexampleModel): string
   if (m.values.length) out.push('<h3>Its values</h3><dl>', ...m.values.map(shownValue), '</dl>');
   if (m.sides) out.push(`<p>The two sides of the claim: <code>${h(m.sides[0])}</code> and <code>${h(m.sides[1])}</code>.</p>`);
   if (m.witnesses.length)
-    out.push('<h3>Witnesses</h3><ul class="witnesses">', ...m.witnesses.map((w) => `<li><code>${h(w.at)}</code> is decided by ${w.bindings ? `<code>${h(w.bindings)}</code>` : 'its element'}: <code>${h(w.value)}</code></li>`), '</ul>');
+    out.push(
+      '<h3>Witnesses</h3><ul class="witnesses">',
+      ...m.witnesses.map(
+        (w) =>
+          `<li><code>${h(w.at)}</code> is decided by ${w.bindings ? `<code>${h(w.bindings)}</code>` : 'its element'}: <code>${h(w.value)}</code></li>`,
+      ),
+      '</ul>',
+    );
   out.push(`<p>Replay: <code>${h(m.replay)}</code> · <a href="#${anchor('row', e.id)}">back to the table</a></p>`, '</section>');
   return out.join('\n');
 }

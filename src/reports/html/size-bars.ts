@@ -20,7 +20,9 @@ export const STATE_WORDS: Record<SizeState, string> = {
   unfinished: 'started, not finished (does not count)',
 };
 
-const CELL = 7, GAP = 1, HEIGHT = 14;
+const CELL = 7,
+  GAP = 1,
+  HEIGHT = 14;
 
 function cellRect(c: SizeCell, x: number): string {
   const dashed = c.state === 'sampled' || c.state === 'sample-failed' ? ' stroke="#8a5a00" stroke-dasharray="2 2"' : '';
@@ -32,7 +34,8 @@ export function sizeBar(cells: readonly SizeCell[]): string {
   if (cells.length === 0) return '<span class="unknown">nothing recorded</span>';
   const w = cells.length * (CELL + GAP);
   const parts = cells.map((c, k) => cellRect(c, k * (CELL + GAP)));
-  const first = cells[0].label, last = cells[cells.length - 1].label;
+  const first = cells[0].label,
+    last = cells[cells.length - 1].label;
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${HEIGHT}" viewBox="0 0 ${w} ${HEIGHT}" role="img" aria-label="${xmlEscape(`sizes ${first} to ${last}`)}">${parts.join('')}</svg>`;
 }
 

@@ -19,8 +19,7 @@ export interface BoxRow {
 export function drawBoxes(rows: readonly BoxRow[], cellWidth: number, g: Glyphs): string[] {
   const h = rows.length;
   const w = Math.max(0, ...rows.map((r) => r.start + r.cells.length));
-  const has = (r: number, c: number) =>
-    r >= 0 && r < h && c >= rows[r].start && c < rows[r].start + rows[r].cells.length;
+  const has = (r: number, c: number) => r >= 0 && r < h && c >= rows[r].start && c < rows[r].start + rows[r].cells.length;
   // Edges of the lattice: the horizontal edge above cell (r, c) and the vertical edge left of it.
   const hEdge = (r: number, c: number) => has(r - 1, c) || has(r, c);
   const vEdge = (r: number, c: number) => has(r, c - 1) || has(r, c);

@@ -7,7 +7,8 @@ import type { Glyphs } from './glyphs.js';
 /** Relies on DyckPath.steps: +1 for an up step U, -1 for a down step D. */
 export function drawDyckPath(steps: readonly number[], g: Glyphs): string {
   if (steps.length === 0) return '(the empty Dyck path)';
-  let h = 0, top = 0;
+  let h = 0,
+    top = 0;
   for (const s of steps) top = Math.max(top, (h += s));
   const canvas = new Canvas(top, steps.length);
   h = 0;

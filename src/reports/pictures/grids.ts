@@ -25,7 +25,11 @@ export function drawMatrix(rows: number, cols: number, entries: readonly Scalar[
   if (rows === 0 || cols === 0) return `(the empty ${rows} by ${cols} matrix)`;
   if (entries.every((e) => e === 0 || e === 1 || e === -1)) {
     const grid = Array.from({ length: rows }, (_, i) => entries.slice(i * cols, (i + 1) * cols) as number[]);
-    return drawSignGrid(grid, g, entries.some((e) => e === -1));
+    return drawSignGrid(
+      grid,
+      g,
+      entries.some((e) => e === -1),
+    );
   }
   const text = entries.map((e) => valueToText(e));
   const colWidth = Array.from({ length: cols }, (_, j) => Math.max(...Array.from({ length: rows }, (_, i) => width(text[i * cols + j]))));

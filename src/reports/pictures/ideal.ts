@@ -20,7 +20,9 @@ export function drawIdeal(
   const plural = (k: number, w: string) => `${k} ${w}${k === 1 ? '' : 's'}`;
   const header = `ideal over ${field} in ${plural(nv, 'variable')}, ${plural(gens.length, 'generator')}; leading terms (grevlex) in ${open} ${close}`;
   if (gens.length === 0) return `${header}\n  (the zero ideal)`;
-  const lines = leadingTerms().slice(0, MAX_LINES).map(({ leading, rest }) => `  ${open}${leading}${close}${rest ? ' ' + rest : ''}`);
+  const lines = leadingTerms()
+    .slice(0, MAX_LINES)
+    .map(({ leading, rest }) => `  ${open}${leading}${close}${rest ? ' ' + rest : ''}`);
   if (gens.length > MAX_LINES) lines.push(`  ... and ${gens.length - MAX_LINES} more`);
   return [header, ...lines].join('\n');
 }

@@ -32,7 +32,10 @@ export function digits(n: number): number {
 export class Canvas {
   private readonly cells: string[][];
 
-  constructor(readonly height: number, readonly widthInColumns: number) {
+  constructor(
+    readonly height: number,
+    readonly widthInColumns: number,
+  ) {
     this.cells = Array.from({ length: height }, () => new Array<string>(widthInColumns).fill(' '));
   }
 

@@ -18,7 +18,8 @@ export function arcHeights(arcs: readonly (readonly [number, number])[]): number
     for (let l = 0; l < arcs.length; l++) {
       if (height[l] === 0) continue;
       const [c, e] = arcs[l];
-      if (a < c && e < b) floor = Math.max(floor, height[l] + 1); // nested inside
+      if (a < c && e < b)
+        floor = Math.max(floor, height[l] + 1); // nested inside
       else if ((a < c && c < b && b < e) || (c < a && a < e && e < b)) taken.add(height[l]); // crossing
     }
     let h = floor;

@@ -9,7 +9,8 @@ import type { Glyphs } from './glyphs.js';
 export function drawMotzkinPath(steps: readonly number[], g: Glyphs): string {
   if (steps.length === 0) return '(the empty Motzkin path)';
   // Band b lies between heights b - 1 and b; U and F at height h use band h + 1, D from h uses band h.
-  let h = 0, bands = 1;
+  let h = 0,
+    bands = 1;
   for (const s of steps) {
     bands = Math.max(bands, s < 0 ? h : h + 1);
     h += s;

@@ -17,10 +17,13 @@ export function pipeExits(crosses: readonly (readonly [number, number])[], n: nu
   const cross = new Set(crosses.map(([i, j]) => `${i},${j}`));
   const exits: number[] = [];
   for (let p = 1; p <= n; p++) {
-    let i = p, j = 1, fromLeft = true;
+    let i = p,
+      j = 1,
+      fromLeft = true;
     while (i >= 1) {
       const isCross = i + j <= n && cross.has(`${i},${j}`);
-      if (isCross === fromLeft) j++; // straight through sideways, or an elbow turning right
+      if (isCross === fromLeft)
+        j++; // straight through sideways, or an elbow turning right
       else i--; // straight up, or an elbow turning up
       if (!isCross) fromLeft = !fromLeft;
     }

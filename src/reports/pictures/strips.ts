@@ -18,7 +18,8 @@ export function drawSubset(elems: readonly number[], g: Glyphs): string {
   const max = elems[elems.length - 1];
   const d = digits(max);
   const member = new Set(elems);
-  const labels: string[] = [], marks: string[] = [];
+  const labels: string[] = [],
+    marks: string[] = [];
   for (let i = 1; i <= max; i++) {
     labels.push(padLeft(String(i), d));
     marks.push(padLeft(member.has(i) ? g.dot : g.empty, d));

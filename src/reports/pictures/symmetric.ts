@@ -14,7 +14,10 @@ export function drawSymmetric(terms: readonly { parts: readonly number[]; coef: 
   const names = shown.map((t) => `s[${t.parts.join(',')}]`);
   const head = ['coefficient', 'Schur term'];
   const w = Math.max(head[0].length, ...coefs.map((c) => c.length));
-  const lines = [`${head[0].padEnd(w)} ${g.vertical} ${head[1]}`, `${g.horizontal.repeat(w)}${g.horizontal}${g.cross}${g.horizontal}${g.horizontal.repeat(head[1].length)}`];
+  const lines = [
+    `${head[0].padEnd(w)} ${g.vertical} ${head[1]}`,
+    `${g.horizontal.repeat(w)}${g.horizontal}${g.cross}${g.horizontal}${g.horizontal.repeat(head[1].length)}`,
+  ];
   shown.forEach((_, i) => lines.push(`${coefs[i].padEnd(w)} ${g.vertical} ${names[i]}`));
   if (terms.length > MAX_ROWS) lines.push(`(${terms.length - MAX_ROWS} more terms)`);
   return lines.join('\n');

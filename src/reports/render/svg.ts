@@ -44,8 +44,10 @@ function item(i: Item): string {
 
 /** An <svg> element; its <title> is the scene's caption (read by screen readers and tooltips). */
 export function sceneToSvg(scene: Scene): string {
-  const x = scene.x0 - MARGIN, y = scene.y0 - MARGIN;
-  const w = scene.width + 2 * MARGIN, h = scene.height + 2 * MARGIN;
+  const x = scene.x0 - MARGIN,
+    y = scene.y0 - MARGIN;
+  const w = scene.width + 2 * MARGIN,
+    h = scene.height + 2 * MARGIN;
   return [
     `<svg xmlns="http://www.w3.org/2000/svg" viewBox="${p(x)} ${p(y)} ${p(w)} ${p(h)}" width="${p(w)}" height="${p(h)}" font-family="sans-serif" role="img">`,
     `<title>${xmlEscape(scene.caption)}</title>`,

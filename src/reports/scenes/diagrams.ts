@@ -22,7 +22,10 @@ export function compositionScene(parts: readonly number[]): Scene {
 
 export function tableauScene(rows: readonly (readonly number[])[]): Scene {
   const b = new SceneBuilder();
-  boxes(b, rows.map((r) => r.length));
+  boxes(
+    b,
+    rows.map((r) => r.length),
+  );
   rows.forEach((row, r) => row.forEach((e, c) => b.add({ t: 'text', x: c + 0.5, y: r + 0.5, s: String(e) })));
   return b.build(`tableau of shape (${rows.map((r) => r.length).join(', ')}), English notation`);
 }

@@ -58,16 +58,41 @@ export function pipeDreamScene(crosses: readonly (readonly [number, number])[], 
   for (let i = 1; i <= n; i++) {
     b.add({ t: 'text', x: -0.5, y: i - 0.5, s: String(i), small: true });
     for (let j = 1; j <= n + 1 - i; j++) {
-      const x = j - 1, y = i - 1;
+      const x = j - 1,
+        y = i - 1;
       b.add({ t: 'rect', x, y, w: 1, h: 1, stroke: 'muted' });
       if (i + j <= n && cross.has(`${i},${j}`)) {
         b.add({ t: 'line', x1: x, y1: y + 0.5, x2: x + 1, y2: y + 0.5, tone: 'accent', thick: true });
         b.add({ t: 'line', x1: x + 0.5, y1: y, x2: x + 0.5, y2: y + 1, tone: 'accent', thick: true });
       } else {
         // from the left edge up to the top edge, and (except on the last diagonal) from the bottom edge to the right edge
-        b.add({ t: 'curve', x1: x, y1: y + 0.5, c1x: x + 0.5 * k, c1y: y + 0.5, c2x: x + 0.5, c2y: y + 0.5 - 0.5 * k, x2: x + 0.5, y2: y, tone: 'accent', thick: true });
+        b.add({
+          t: 'curve',
+          x1: x,
+          y1: y + 0.5,
+          c1x: x + 0.5 * k,
+          c1y: y + 0.5,
+          c2x: x + 0.5,
+          c2y: y + 0.5 - 0.5 * k,
+          x2: x + 0.5,
+          y2: y,
+          tone: 'accent',
+          thick: true,
+        });
         if (i + j <= n)
-          b.add({ t: 'curve', x1: x + 0.5, y1: y + 1, c1x: x + 0.5, c1y: y + 1 - 0.5 * k, c2x: x + 1 - 0.5 * k, c2y: y + 0.5, x2: x + 1, y2: y + 0.5, tone: 'accent', thick: true });
+          b.add({
+            t: 'curve',
+            x1: x + 0.5,
+            y1: y + 1,
+            c1x: x + 0.5,
+            c1y: y + 1 - 0.5 * k,
+            c2x: x + 1 - 0.5 * k,
+            c2y: y + 0.5,
+            x2: x + 1,
+            y2: y + 0.5,
+            tone: 'accent',
+            thick: true,
+          });
       }
     }
   }

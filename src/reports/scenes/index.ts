@@ -26,7 +26,20 @@ export interface SceneHint {
 type Fields = Record<string, any>;
 
 /** The kinds that have a scene, in the order the export tests list them. */
-export const SCENE_KINDS = ['permutation', 'partition', 'composition', 'tableau', 'matching', 'setPartition', 'dyck', 'word', 'subset', 'asm', 'pipeDream', 'matrix'] as const;
+export const SCENE_KINDS = [
+  'permutation',
+  'partition',
+  'composition',
+  'tableau',
+  'matching',
+  'setPartition',
+  'dyck',
+  'word',
+  'subset',
+  'asm',
+  'pipeDream',
+  'matrix',
+] as const;
 
 export function sceneOf(v: Value, hint: SceneHint = {}): Scene | null {
   if (!isStructured(v)) return null;
@@ -49,7 +62,9 @@ export function sceneOf(v: Value, hint: SceneHint = {}): Scene | null {
     case 'dyck':
       return dyckPathScene(o.steps);
     case 'word':
-      return hint.reducedWord && o.letters.length > 0 && o.letters.every((l: number) => l >= 1) ? wiringScene(o.letters) : wordScene(o.letters);
+      return hint.reducedWord && o.letters.length > 0 && o.letters.every((l: number) => l >= 1)
+        ? wiringScene(o.letters)
+        : wordScene(o.letters);
     case 'subset':
       return subsetScene(o.elems, Math.max(hint.groundSet ?? 0, ...o.elems, 1));
     case 'asm':
@@ -59,7 +74,11 @@ export function sceneOf(v: Value, hint: SceneHint = {}): Scene | null {
       return pipeDreamScene(o.crosses, n, pipeExits(o.crosses, n));
     }
     case 'matrix':
-      return matrixScene(o.rows, o.cols, (o.entries as Value[]).map((e) => valueToText(e)));
+      return matrixScene(
+        o.rows,
+        o.cols,
+        (o.entries as Value[]).map((e) => valueToText(e)),
+      );
     default:
       return null;
   }

@@ -10,7 +10,19 @@ export type Item =
   | { t: 'rect'; x: number; y: number; w: number; h: number; fill?: Tone; stroke?: Tone }
   | { t: 'dot'; x: number; y: number; r: number; fill?: Tone; open?: boolean }
   /** A cubic curve from (x1, y1) to (x2, y2) with control points (c1x, c1y), (c2x, c2y). */
-  | { t: 'curve'; x1: number; y1: number; c1x: number; c1y: number; c2x: number; c2y: number; x2: number; y2: number; tone?: Tone; thick?: boolean }
+  | {
+      t: 'curve';
+      x1: number;
+      y1: number;
+      c1x: number;
+      c1y: number;
+      c2x: number;
+      c2y: number;
+      x2: number;
+      y2: number;
+      tone?: Tone;
+      thick?: boolean;
+    }
   | { t: 'polyline'; points: Array<[number, number]>; tone?: Tone; thick?: boolean }
   /** Text centred at (x, y) unless anchored at its start or end. */
   | { t: 'text'; x: number; y: number; s: string; small?: boolean; anchor?: 'start' | 'end'; tone?: Tone };
@@ -55,7 +67,13 @@ export class SceneBuilder {
         this.cover(item.x, item.y, item.r);
         break;
       case 'curve':
-        for (const [x, y] of [[item.x1, item.y1], [item.c1x, item.c1y], [item.c2x, item.c2y], [item.x2, item.y2]]) this.cover(x, y);
+        for (const [x, y] of [
+          [item.x1, item.y1],
+          [item.c1x, item.c1y],
+          [item.c2x, item.c2y],
+          [item.x2, item.y2],
+        ])
+          this.cover(x, y);
         break;
       case 'polyline':
         for (const [x, y] of item.points) this.cover(x, y);

@@ -45,7 +45,8 @@ export function countFrom(cc: CompiledConjecture, frame: Frame, fixed: Map<numbe
   const indep = independentLevels(cc)[from];
   const src = b.source;
   if (src.kind === 'range') {
-    const lo = rangeBound(src.lo(frame), b.name), hi = rangeBound(src.hi(frame), b.name);
+    const lo = rangeBound(src.lo(frame), b.name),
+      hi = rangeBound(src.hi(frame), b.name);
     if (hi < lo) return 0n;
     if (indep) {
       frame[b.slot] = lo;
@@ -146,7 +147,8 @@ export function enumerateCaseRange(
       let n: bigint;
       let p: unknown = null;
       if (src.kind === 'range') {
-        const a = rangeBound(src.lo(frame), b.name), z = rangeBound(src.hi(frame), b.name);
+        const a = rangeBound(src.lo(frame), b.name),
+          z = rangeBound(src.hi(frame), b.name);
         n = z < a ? 0n : BigInt(z - a + 1);
         if (n === 0n) return;
         frame[b.slot] = a;
@@ -188,7 +190,8 @@ export function enumerateCaseRange(
         });
       } else {
         let k = first;
-        const slot = b.slot, next = i + 1;
+        const slot = b.slot,
+          next = i + 1;
         enumerateFamilyRange(src.family, p, first, last, (obj) => {
           frame[slot] = obj;
           level(next, base + k * per);
@@ -209,7 +212,8 @@ export function enumerateCaseRange(
       return stopped || at >= hi;
     };
     if (src.kind === 'range') {
-      const a = rangeBound(src.lo(frame), b.name), z = rangeBound(src.hi(frame), b.name);
+      const a = rangeBound(src.lo(frame), b.name),
+        z = rangeBound(src.hi(frame), b.name);
       for (let v = a; v <= z; v++) if (visitValue(v)) break;
     } else if (src.kind === 'list') {
       for (const v of src.list(frame) as Value[]) if (visitValue(v)) break;

@@ -48,7 +48,15 @@ export function sizeLabel(cc: CompiledConjecture, size: number | null): string {
 
 export function planExhaustiveSize(cc: CompiledConjecture, size: number | null, o: PlanOptions): SizePlan {
   const plan: SizePlan = {
-    size, label: sizeLabel(cc, size), total: null, slices: 1, whole: true, units: [0], held: new Map(), shard: o.shard, covered: null,
+    size,
+    label: sizeLabel(cc, size),
+    total: null,
+    slices: 1,
+    whole: true,
+    units: [0],
+    held: new Map(),
+    shard: o.shard,
+    covered: null,
   };
   const rec = sizeRecord(cc, size);
   if (o.resume) {
@@ -91,7 +99,14 @@ export function unitRange(plan: SizePlan, j: number): [bigint, bigint] | null {
 export function coveredPiece(cc: CompiledConjecture, plan: SizePlan): CheckedPiece | null {
   const c = plan.covered;
   if (!c || c.known === false) return null;
-  const piece: CheckedPiece = { phase: 'exhaustive', size: sizeRecord(cc, plan.size), cases: c.cases, failures: 0, skipped: c.skipped, ms: 0 };
+  const piece: CheckedPiece = {
+    phase: 'exhaustive',
+    size: sizeRecord(cc, plan.size),
+    cases: c.cases,
+    failures: 0,
+    skipped: c.skipped,
+    ms: 0,
+  };
   if (plan.shard) piece.shard = shardText(plan.shard);
   return piece;
 }
@@ -112,7 +127,9 @@ export interface SizeOutcome {
 
 /** The slices' outcomes (by slice) make the size's piece, its records and its simplest failing case. */
 export function finishSize(cc: CompiledConjecture, plan: SizePlan, outcomes: Map<number, SliceOutcome>, ms: number): SizeOutcome {
-  let cases = 0, failures = 0, skipped = 0;
+  let cases = 0,
+    failures = 0,
+    skipped = 0;
   for (const h of plan.held.values()) {
     cases += h.cases;
     skipped += h.skipped;
@@ -144,7 +161,12 @@ export function finishSize(cc: CompiledConjecture, plan: SizePlan, outcomes: Map
       const o = outcomes.get(j);
       if (!o || o.stopped || o.fault) continue;
       records.push({
-        phase: 'exhaustive', size: piece.size, cases: o.cases, failures: o.failures, skipped: o.skipped, ms: o.ms,
+        phase: 'exhaustive',
+        size: piece.size,
+        cases: o.cases,
+        failures: o.failures,
+        skipped: o.skipped,
+        ms: o.ms,
         shard: `${j + 1}/${plan.slices}`,
       });
     }

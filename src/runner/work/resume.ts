@@ -62,7 +62,8 @@ export class ResumeIndex {
     if (!cover) return null;
     // Covered whole, but not in a way that gives our shard's own counts.
     if (shard) return { cases: 0, skipped: 0, known: false };
-    let cases = 0, skipped = 0;
+    let cases = 0,
+      skipped = 0;
     for (const r of cover) {
       cases += r.cases;
       skipped += r.skipped;

@@ -31,8 +31,13 @@ export function planSampleSize(
   const chunks = chunkCount(count);
   const covered = resume ? resume.sampleCovered({ [name]: size }, seed, shard) : null;
   return {
-    size, label: `${cc.spec.id}: sampling ${name} = ${size}`, count, chunks,
-    units: covered ? [] : chunksOfShard(chunks, shard), shard, covered,
+    size,
+    label: `${cc.spec.id}: sampling ${name} = ${size}`,
+    count,
+    chunks,
+    units: covered ? [] : chunksOfShard(chunks, shard),
+    shard,
+    covered,
   };
 }
 
@@ -53,8 +58,16 @@ export interface SampleSizeOutcome {
   fault: ErrorInfo | null;
 }
 
-export function finishSampleSize(cc: CompiledConjecture, plan: SamplePlan, outcomes: Map<number, ChunkOutcome>, ms: number, seed: string): SampleSizeOutcome {
-  let cases = 0, failures = 0, skipped = 0;
+export function finishSampleSize(
+  cc: CompiledConjecture,
+  plan: SamplePlan,
+  outcomes: Map<number, ChunkOutcome>,
+  ms: number,
+  seed: string,
+): SampleSizeOutcome {
+  let cases = 0,
+    failures = 0,
+    skipped = 0;
   let complete = true;
   let failingChunk: number | null = null;
   let fault: ErrorInfo | null = null;
@@ -77,7 +90,15 @@ export function finishSampleSize(cc: CompiledConjecture, plan: SamplePlan, outco
       break;
     }
   }
-  const piece: CheckedPiece = { phase: 'sample', size: { [cc.bindings[cc.sizeIndex].name]: plan.size }, cases, failures, skipped, ms, seed };
+  const piece: CheckedPiece = {
+    phase: 'sample',
+    size: { [cc.bindings[cc.sizeIndex].name]: plan.size },
+    cases,
+    failures,
+    skipped,
+    ms,
+    seed,
+  };
   if (plan.shard) piece.shard = shardText(plan.shard);
   if (!complete) piece.partial = true;
   return { piece, complete, failingChunk, fault };
@@ -86,7 +107,15 @@ export function finishSampleSize(cc: CompiledConjecture, plan: SamplePlan, outco
 export function coveredSamplePiece(cc: CompiledConjecture, plan: SamplePlan, seed: string): CheckedPiece | null {
   const c = plan.covered;
   if (!c) return null;
-  const piece: CheckedPiece = { phase: 'sample', size: { [cc.bindings[cc.sizeIndex].name]: plan.size }, cases: c.cases, failures: 0, skipped: c.skipped, ms: 0, seed };
+  const piece: CheckedPiece = {
+    phase: 'sample',
+    size: { [cc.bindings[cc.sizeIndex].name]: plan.size },
+    cases: c.cases,
+    failures: 0,
+    skipped: c.skipped,
+    ms: 0,
+    seed,
+  };
   if (plan.shard) piece.shard = shardText(plan.shard);
   return piece;
 }

@@ -70,12 +70,16 @@ export function sizeValue(size: Record<string, number>): number | null {
 }
 
 /** Group records by size, sizes in increasing order. */
-export function bySize<R extends { size: Record<string, number> }>(records: readonly R[]): Array<{ size: Record<string, number>; records: R[] }> {
+export function bySize<R extends { size: Record<string, number> }>(
+  records: readonly R[],
+): Array<{ size: Record<string, number>; records: R[] }> {
   const m = new Map<string, { size: Record<string, number>; records: R[] }>();
   for (const r of records) {
     const k = sizeKey(r.size);
     if (!m.has(k)) m.set(k, { size: r.size, records: [] });
     m.get(k)!.records.push(r);
   }
-  return [...m.values()].sort((a, b) => (sizeValue(a.size) ?? -Infinity) - (sizeValue(b.size) ?? -Infinity) || (sizeKey(a.size) < sizeKey(b.size) ? -1 : 1));
+  return [...m.values()].sort(
+    (a, b) => (sizeValue(a.size) ?? -Infinity) - (sizeValue(b.size) ?? -Infinity) || (sizeKey(a.size) < sizeKey(b.size) ? -1 : 1),
+  );
 }

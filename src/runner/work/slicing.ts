@@ -74,7 +74,8 @@ export function chunksOfShard(m: number, shard: Shard | null): number[] {
 export function parseShard(text: string): Shard | null {
   const m = /^([1-9][0-9]*)\/([1-9][0-9]*)$/.exec(text);
   if (!m) return null;
-  const index = Number(m[1]), of = Number(m[2]);
+  const index = Number(m[1]),
+    of = Number(m[2]);
   if (!Number.isSafeInteger(of) || index > of) return null;
   return { index, of };
 }

@@ -141,7 +141,15 @@ export function runSlice(cc: CompiledConjecture, size: number | null, range: [bi
   const frame: Frame = new Array(cc.frameSize);
   const fixed = sizeFixing(cc, size);
   const out: SliceOutcome = {
-    kind: 'slice', cases: 0, failures: 0, skipped: 0, best: null, bestEncoded: null, fault: null, stopped: null, ms: 0,
+    kind: 'slice',
+    cases: 0,
+    failures: 0,
+    skipped: 0,
+    best: null,
+    bestEncoded: null,
+    fault: null,
+    stopped: null,
+    ms: 0,
   };
   let visited = 0;
   const poller = new Poller();
@@ -174,7 +182,8 @@ export function runSlice(cc: CompiledConjecture, size: number | null, range: [bi
       else enumerateCaseRange(cc, frame, fixed, range[0], range[1], onCase);
     });
   } catch (e) {
-    if (e instanceof StopSignal) out.stopped = e.reason; // the case in progress is not counted
+    if (e instanceof StopSignal)
+      out.stopped = e.reason; // the case in progress is not counted
     else out.fault = errorInfo(e, encodeBindings(cc, frame));
   }
   if (out.best) out.bestEncoded = encodeBindings(cc, frameFor(cc, out.best));
@@ -200,7 +209,17 @@ export function runSampleChunk(
   const t0 = performance.now();
   const rng = chunkRandom(cc, settings.seed, size, chunk);
   const frame: Frame = new Array(cc.frameSize);
-  const out: ChunkOutcome = { kind: 'chunk', cases: 0, failures: 0, skipped: 0, failed: false, failing: null, fault: null, stopped: null, ms: 0 };
+  const out: ChunkOutcome = {
+    kind: 'chunk',
+    cases: 0,
+    failures: 0,
+    skipped: 0,
+    failed: false,
+    failing: null,
+    fault: null,
+    stopped: null,
+    ms: 0,
+  };
   const poller = new Poller();
   const sizeB = cc.bindings[cc.sizeIndex];
   // A `where` that rejects most draws must not loop for ever.

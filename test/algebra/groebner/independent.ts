@@ -108,7 +108,15 @@ export function plainRemainder(K: PlainField, f: Plain, G: Plain[], cmp: Cmp): P
   while (p.length > 0) {
     const [e, c] = p[0];
     const g = G.find((g) => g.length > 0 && divides(g[0][0], e));
-    if (g) p = subMul(K, p, K.div(c, g[0][1]), e.map((x, i) => x - g[0][0][i]), g, cmp);
+    if (g)
+      p = subMul(
+        K,
+        p,
+        K.div(c, g[0][1]),
+        e.map((x, i) => x - g[0][0][i]),
+        g,
+        cmp,
+      );
     else {
       r.push(p[0]);
       p = p.slice(1);
@@ -121,10 +129,25 @@ export function plainRemainder(K: PlainField, f: Plain, G: Plain[], cmp: Cmp): P
 export function plainIsGroebner(K: PlainField, G: Plain[], cmp: Cmp): boolean {
   for (let i = 0; i < G.length; i++)
     for (let j = i + 1; j < G.length; j++) {
-      const [a, ca] = G[i][0], [b, cb] = G[j][0];
+      const [a, ca] = G[i][0],
+        [b, cb] = G[j][0];
       const l = a.map((x, v) => Math.max(x, b[v]));
-      let s = subMul(K, [], K.div(-1, ca), l.map((x, v) => x - a[v]), G[i], cmp);
-      s = subMul(K, s, K.div(1, cb), l.map((x, v) => x - b[v]), G[j], cmp);
+      let s = subMul(
+        K,
+        [],
+        K.div(-1, ca),
+        l.map((x, v) => x - a[v]),
+        G[i],
+        cmp,
+      );
+      s = subMul(
+        K,
+        s,
+        K.div(1, cb),
+        l.map((x, v) => x - b[v]),
+        G[j],
+        cmp,
+      );
       if (plainRemainder(K, s, G, cmp).length > 0) return false;
     }
   return true;
@@ -132,7 +155,7 @@ export function plainIsGroebner(K: PlainField, G: Plain[], cmp: Cmp): boolean {
 
 /** Reduced: monic, no term of any element divisible by another element's leading monomial. */
 export function plainIsReduced(K: PlainField, G: Plain[]): boolean {
-  return G.every((g, i) => !K.zero(K.sub(g[0][1], 1)) ? false : G.every((h, j) => i === j || g.every(([e]) => !divides(h[0][0], e))));
+  return G.every((g, i) => (!K.zero(K.sub(g[0][1], 1)) ? false : G.every((h, j) => i === j || g.every(([e]) => !divides(h[0][0], e)))));
 }
 
 export const half = makeRat(1n, 2n);

@@ -34,7 +34,15 @@ describe('the printed comparisons (Chapter 2, Section 2)', () => {
     const w = termOrder({ weights: [1, 2, 3], then: 'lex' }, [x, y, z]);
     expect(sign(w.compare([3, 0, 0], [0, 0, 1]))).toBe(1); // equal weight 3, lex decides
     expect(sign(w.compare([0, 1, 0], [1, 0, 0]))).toBe(1); // weight 2 > 1
-    const b = termOrder({ blocks: [{ vars: [z], order: 'grevlex' }, { vars: [x, y], order: 'lex' }] }, [x, y, z]);
+    const b = termOrder(
+      {
+        blocks: [
+          { vars: [z], order: 'grevlex' },
+          { vars: [x, y], order: 'lex' },
+        ],
+      },
+      [x, y, z],
+    );
     expect(sign(b.compare([0, 0, 1], [5, 5, 0]))).toBe(1); // the first block decides
     expect(sign(b.compare([1, 0, 2], [0, 7, 2]))).toBe(1); // then lex with x > y
   });
@@ -42,7 +50,17 @@ describe('the printed comparisons (Chapter 2, Section 2)', () => {
     expect(() => termOrder({ weights: [1, 2] }, [x, y, z])).toThrow(/one weight per variable/);
     expect(() => termOrder({ weights: [1, -2, 0] }, [x, y, z])).toThrow(/nonnegative/);
     expect(() => termOrder({ blocks: [{ vars: [x], order: 'lex' }] }, [x, y, z])).toThrow(/missing y, z/);
-    expect(() => termOrder({ blocks: [{ vars: [x, y], order: 'lex' }, { vars: [y, z], order: 'lex' }] }, [x, y, z])).toThrow(/two blocks/);
+    expect(() =>
+      termOrder(
+        {
+          blocks: [
+            { vars: [x, y], order: 'lex' },
+            { vars: [y, z], order: 'lex' },
+          ],
+        },
+        [x, y, z],
+      ),
+    ).toThrow(/two blocks/);
     expect(() => termOrder('lex', [x, x])).toThrow(EvalError);
     expect(() => termOrder('revlex' as OrderSpec, [x])).toThrow(/unknown term order/);
   });
@@ -50,27 +68,45 @@ describe('the printed comparisons (Chapter 2, Section 2)', () => {
 
 const specArb: fc.Arbitrary<OrderSpec> = fc.oneof(
   fc.constantFrom<OrderSpec>('lex', 'deglex', 'grevlex'),
-  fc.tuple(fc.array(fc.integer({ min: 0, max: 4 }), { minLength: 3, maxLength: 3 }), fc.constantFrom<OrderSpec>('lex', 'grevlex'))
+  fc
+    .tuple(fc.array(fc.integer({ min: 0, max: 4 }), { minLength: 3, maxLength: 3 }), fc.constantFrom<OrderSpec>('lex', 'grevlex'))
     .map(([weights, then]) => ({ weights, then })),
-  fc.tuple(fc.constantFrom<OrderSpec>('lex', 'deglex', 'grevlex'), fc.constantFrom<OrderSpec>('lex', 'deglex', 'grevlex'), fc.integer({ min: 0, max: 2 }))
+  fc
+    .tuple(
+      fc.constantFrom<OrderSpec>('lex', 'deglex', 'grevlex'),
+      fc.constantFrom<OrderSpec>('lex', 'deglex', 'grevlex'),
+      fc.integer({ min: 0, max: 2 }),
+    )
     .map(([a, b, k]) => {
-      const perm = [[x, y, z], [y, z, x], [z, x, y]][k];
-      return { blocks: [{ vars: [perm[0]], order: a }, { vars: [perm[1], perm[2]], order: b }] };
+      const perm = [
+        [x, y, z],
+        [y, z, x],
+        [z, x, y],
+      ][k];
+      return {
+        blocks: [
+          { vars: [perm[0]], order: a },
+          { vars: [perm[1], perm[2]], order: b },
+        ],
+      };
     }),
 );
 const expArb = fc.array(fc.integer({ min: 0, max: 4 }), { minLength: 3, maxLength: 3 });
 
 describe('every order is a monomial order', () => {
   it('total, antisymmetric, transitive, multiplicative, with 1 the smallest monomial', () => {
-    fc.assert(fc.property(specArb, expArb, expArb, expArb, (spec, a, b, c) => {
-      const o = termOrder(spec, [x, y, z]);
-      const ab = sign(o.compare(a, b));
-      expect(sign(o.compare(b, a))).toBe(-ab || 0);
-      expect(ab === 0).toBe(a.every((e, i) => e === b[i]));
-      const add = (u: number[], v: number[]) => u.map((e, i) => e + v[i]);
-      expect(sign(o.compare(add(a, c), add(b, c)))).toBe(ab);
-      if (a.some((e) => e > 0)) expect(sign(o.compare(a, [0, 0, 0]))).toBe(1);
-      if (ab >= 0 && sign(o.compare(b, c)) >= 0) expect(sign(o.compare(a, c))).toBeGreaterThanOrEqual(0);
-    }), { numRuns: 500, seed: 7 });
+    fc.assert(
+      fc.property(specArb, expArb, expArb, expArb, (spec, a, b, c) => {
+        const o = termOrder(spec, [x, y, z]);
+        const ab = sign(o.compare(a, b));
+        expect(sign(o.compare(b, a))).toBe(-ab || 0);
+        expect(ab === 0).toBe(a.every((e, i) => e === b[i]));
+        const add = (u: number[], v: number[]) => u.map((e, i) => e + v[i]);
+        expect(sign(o.compare(add(a, c), add(b, c)))).toBe(ab);
+        if (a.some((e) => e > 0)) expect(sign(o.compare(a, [0, 0, 0]))).toBe(1);
+        if (ab >= 0 && sign(o.compare(b, c)) >= 0) expect(sign(o.compare(a, c))).toBeGreaterThanOrEqual(0);
+      }),
+      { numRuns: 500, seed: 7 },
+    );
   });
 });

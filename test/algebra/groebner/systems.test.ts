@@ -16,7 +16,10 @@ import { commuting, cyclic, katsura, standardMonomialCount } from './systems.js'
 
 function solutions(G: PolyLike[], ids: number[]): number {
   const o = termOrder('grevlex', ids);
-  return standardMonomialCount(G.map((g) => leadingTerm(g, o)!.exps), ids.length);
+  return standardMonomialCount(
+    G.map((g) => leadingTerm(g, o)!.exps),
+    ids.length,
+  );
 }
 
 function checkModular(G: PolyLike[], ids: number[], p: number): void {

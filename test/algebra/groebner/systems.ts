@@ -76,8 +76,10 @@ export function standardMonomialCount(lms: number[][], nv: number): number {
 
 /** The entries of X Y - Y X for generic n×n matrices X = (a[i,j]), Y = (b[i,j]) as a[k], b[k]. */
 export function commuting(n: number): { gens: PolyLike[]; ids: number[] } {
-  const A = vars('ca', n * n), B = vars('cb', n * n);
-  const a = (i: number, j: number) => A.v[i * n + j], b = (i: number, j: number) => B.v[i * n + j];
+  const A = vars('ca', n * n),
+    B = vars('cb', n * n);
+  const a = (i: number, j: number) => A.v[i * n + j],
+    b = (i: number, j: number) => B.v[i * n + j];
   const gens: PolyLike[] = [];
   for (let i = 0; i < n; i++)
     for (let j = 0; j < n; j++) {

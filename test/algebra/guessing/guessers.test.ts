@@ -7,7 +7,12 @@ const big = (xs: number[][]) => xs.map((p) => p.map(BigInt));
 describe('P-recursive recurrences against published ones', () => {
   test('Catalan numbers: (n+2) a(n+1) = (4n+2) a(n) (OEIS A000108)', () => {
     const fit = fitRecurrence({ offset: 0, terms: terms(0, 15, catalan) }, 1, 1)!;
-    expect(fit.coeffs).toEqual(big([[-2, -4], [2, 1]]));
+    expect(fit.coeffs).toEqual(
+      big([
+        [-2, -4],
+        [2, 1],
+      ]),
+    );
     expect(recurrenceText(fit, 'a')).toBe('(n + 2)*a(n + 1) == (4*n + 2)*a(n)');
   });
 
@@ -26,7 +31,13 @@ describe('P-recursive recurrences against published ones', () => {
   test('Franel numbers: (n+1)^2 a(n+1) = (7n^2+7n+2) a(n) + 8n^2 a(n-1) (OEIS A000172; Franel 1894)', () => {
     const fit = fitRecurrence({ offset: 0, terms: terms(0, 24, franel) }, 2, 2)!;
     // n -> n + 1: (n+2)^2 a(n+2) = (7n^2+21n+16) a(n+1) + 8(n+1)^2 a(n).
-    expect(fit.coeffs).toEqual(big([[-8, -16, -8], [-16, -21, -7], [4, 4, 1]]));
+    expect(fit.coeffs).toEqual(
+      big([
+        [-8, -16, -8],
+        [-16, -21, -7],
+        [4, 4, 1],
+      ]),
+    );
     const r = guessSequence({ offset: 0, terms: terms(0, 24, franel) });
     expect(r.guesses[0].kind).toBe('p-recursive');
     expect(r.guesses[0].formula).toBe('(n^2 + 4*n + 4)*a(n + 2) == (7*n^2 + 21*n + 16)*a(n + 1) + (8*n^2 + 16*n + 8)*a(n)');
@@ -46,7 +57,13 @@ describe('P-recursive recurrences against published ones', () => {
     expect(seq.terms.slice(0, 7)).toEqual([1, 2, 6, 22, 92, 422, 2074]); // OEIS A001181, first terms
     const fit = fitRecurrence(seq, 2, 2)!;
     // n -> n + 2: (n+4)(n+5) a(n+2) = (7n^2+35n+40) a(n+1) + 8n(n+1) a(n).
-    expect(fit.coeffs).toEqual(big([[0, -8, -8], [-40, -35, -7], [20, 9, 1]]));
+    expect(fit.coeffs).toEqual(
+      big([
+        [0, -8, -8],
+        [-40, -35, -7],
+        [20, 9, 1],
+      ]),
+    );
     expect(guessSequence(seq).guesses[0].kind).toBe('p-recursive');
   });
 
@@ -54,7 +71,10 @@ describe('P-recursive recurrences against published ones', () => {
     const seq = { offset: 1, terms: terms(0, 10, schroeder) };
     expect(seq.terms).toEqual([1, 2, 6, 22, 90, 394, 1806, 8558, 41586, 206098, 1037718]); // OEIS A006318
     const r = guessSequence(seq);
-    expect(r.guesses.map((g) => g.formula)).toEqual(['(n + 2)*a(n + 2) == (6*n + 3)*a(n + 1) - (n - 1)*a(n)', 'x*f^2 + (x - 1)*f + 1 == 0']);
+    expect(r.guesses.map((g) => g.formula)).toEqual([
+      '(n + 2)*a(n + 2) == (6*n + 3)*a(n + 1) - (n - 1)*a(n)',
+      'x*f^2 + (x - 1)*f + 1 == 0',
+    ]);
     expect(r.guesses[0].evidence).toEqual({ from: 1, determinedTo: 7, confirmedTo: 11 });
   });
 });
@@ -87,7 +107,13 @@ describe('closed forms', () => {
 
   test("Catalan's generating function: x f^2 - f + 1 = 0 (OEIS A000108)", () => {
     const fit = fitAlgebraic({ offset: 0, terms: terms(0, 14, catalan) }, 1, 2)!;
-    expect(fit.coeffs).toEqual(big([[1, 0], [-1, 0], [0, 1]]));
+    expect(fit.coeffs).toEqual(
+      big([
+        [1, 0],
+        [-1, 0],
+        [0, 1],
+      ]),
+    );
   });
 
   test('alternating sign matrices: a product over k of a hypergeometric ratio (OEIS A005130)', () => {
@@ -104,11 +130,17 @@ describe('closed forms', () => {
     expect(guessSequence(tri).guesses[0].formula).toBe('a(n) == (n^2 + n)/2');
     const floorHalf = { offset: 0, terms: terms(0, 12, (n) => BigInt(Math.floor(n / 2))) };
     // The recurrence has 3 unknowns, the quasi-polynomial 4: both are offered, the recurrence first.
-    expect(guessSequence(floorHalf).guesses.map((g) => g.formula)).toEqual(['a(n + 3) == a(n + 2) + a(n + 1) - a(n)', 'a(n) == if mod(n, 2) == 0 then n/2 else (n - 1)/2']);
+    expect(guessSequence(floorHalf).guesses.map((g) => g.formula)).toEqual([
+      'a(n + 3) == a(n + 2) + a(n + 1) - a(n)',
+      'a(n) == if mod(n, 2) == 0 then n/2 else (n - 1)/2',
+    ]);
   });
 
   test('transforms: n! times a constant, and Motzkin numbers whose binomial transform is Catalan(n+1) (OEIS A001006, A000108)', () => {
-    const twice = guessSequence({ offset: 0, terms: terms(0, 10, (n) => 2n * BigInt([...Array(n).keys()].reduce((p, i) => p * (i + 1), 1))) });
+    const twice = guessSequence({
+      offset: 0,
+      terms: terms(0, 10, (n) => 2n * BigInt([...Array(n).keys()].reduce((p, i) => p * (i + 1), 1))),
+    });
     expect(twice.guesses[0].formula).toBe('a(n)/factorial(n) == 2');
     const m = guessSequence({ offset: 0, terms: terms(0, 16, motzkin) });
     expect(m.guesses[0].transform).toBe('the binomial transform of a');
@@ -129,7 +161,8 @@ describe('no guess', () => {
     const r = guessSequence({ offset: 1, terms: [2, 3, 5, 7, 11, 13, 17, 19, 23, 29, 31, 37] });
     expect(r.guesses).toEqual([]);
     const classes = r.tried.map((t) => t.guessClass);
-    for (const c of ['polynomials in n', 'quasi-polynomials', 'P-recursive recurrences', 'algebraic generating functions']) expect(classes).toContain(c);
+    for (const c of ['polynomials in n', 'quasi-polynomials', 'P-recursive recurrences', 'algebraic generating functions'])
+      expect(classes).toContain(c);
     expect(r.tried.find((t) => t.guessClass === 'P-recursive recurrences')!.terms).toBe(12);
   });
 });

@@ -15,11 +15,17 @@ function cFinite(c1: number, c2: number, a0: number, a1: number, N: number): Int
 describe('guessing on random sequences', () => {
   test('a(n+2) = c1 a(n+1) + c2 a(n) is found with at most 2 unknowns, from 14 terms', () => {
     fc.assert(
-      fc.property(fc.integer({ min: -5, max: 5 }), fc.integer({ min: -5, max: 5 }).filter((c) => c !== 0), fc.integer({ min: -9, max: 9 }), fc.integer({ min: -9, max: 9 }), (c1, c2, a0, a1) => {
-        const r = guessSequence({ offset: 0, terms: cFinite(c1, c2, a0, a1, 14) });
-        expect(r.guesses.length).toBeGreaterThan(0);
-        expect(r.guesses[0].unknowns).toBeLessThanOrEqual(2);
-      }),
+      fc.property(
+        fc.integer({ min: -5, max: 5 }),
+        fc.integer({ min: -5, max: 5 }).filter((c) => c !== 0),
+        fc.integer({ min: -9, max: 9 }),
+        fc.integer({ min: -9, max: 9 }),
+        (c1, c2, a0, a1) => {
+          const r = guessSequence({ offset: 0, terms: cFinite(c1, c2, a0, a1, 14) });
+          expect(r.guesses.length).toBeGreaterThan(0);
+          expect(r.guesses[0].unknowns).toBeLessThanOrEqual(2);
+        },
+      ),
       { seed: 16, numRuns: 60 },
     );
   }, 120_000);
@@ -35,7 +41,8 @@ describe('guessing on random sequences', () => {
         expect(fit!.order * (fit!.degree + 1)).toBeLessThanOrEqual(4);
         for (let n = 0; n + fit!.order < a.length; n++) {
           let sum = 0n;
-          for (let i = 0; i <= fit!.order; i++) sum += fit!.coeffs[i].reduce((acc, c, j) => acc + c * BigInt(n) ** BigInt(j), 0n) * a[n + i];
+          for (let i = 0; i <= fit!.order; i++)
+            sum += fit!.coeffs[i].reduce((acc, c, j) => acc + c * BigInt(n) ** BigInt(j), 0n) * a[n + i];
           expect(sum).toBe(0n);
         }
       }),
@@ -45,10 +52,14 @@ describe('guessing on random sequences', () => {
 
   test('random terms: no exception, and whatever is offered has at least 3 confirming terms', () => {
     fc.assert(
-      fc.property(fc.array(fc.bigInt({ min: -(10n ** 30n), max: 10n ** 30n }), { minLength: 0, maxLength: 16 }), fc.integer({ min: -3, max: 3 }), (xs, offset) => {
-        const r = guessSequence({ offset, terms: xs.map(normBig) });
-        for (const g of r.guesses) expect(g.evidence.confirmedTo - g.evidence.determinedTo).toBeGreaterThanOrEqual(3);
-      }),
+      fc.property(
+        fc.array(fc.bigInt({ min: -(10n ** 30n), max: 10n ** 30n }), { minLength: 0, maxLength: 16 }),
+        fc.integer({ min: -3, max: 3 }),
+        (xs, offset) => {
+          const r = guessSequence({ offset, terms: xs.map(normBig) });
+          for (const g of r.guesses) expect(g.evidence.confirmedTo - g.evidence.determinedTo).toBeGreaterThanOrEqual(3);
+        },
+      ),
       { seed: 18, numRuns: 40 },
     );
   }, 120_000);

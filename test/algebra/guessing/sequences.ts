@@ -54,7 +54,8 @@ export const baxter = (n: number) => {
 };
 /** Alternating sign matrices, OEIS A005130: prod_{k=0}^{n-1} (3k+1)!/(n+k)!. */
 export const asm = (n: number) => {
-  let num = 1n, den = 1n;
+  let num = 1n,
+    den = 1n;
   for (let k = 0; k < n; k++) {
     num *= fact(3 * k + 1);
     den *= fact(n + k);
@@ -62,7 +63,8 @@ export const asm = (n: number) => {
   return num / den;
 };
 export const fibonacci = (n: number) => {
-  let a = 0n, b = 1n;
+  let a = 0n,
+    b = 1n;
   for (let i = 0; i < n; i++) [a, b] = [b, a + b];
   return a;
 };

@@ -24,17 +24,22 @@ import { inversions, pipeDreamsIn } from '../pipeDreamExpansion.js';
 function permutationsOf(n: number): number[][] {
   if (n === 0) return [[]];
   const out: number[][] = [];
-  for (const p of permutationsOf(n - 1))
-    for (let k = 0; k <= p.length; k++) out.push([...p.slice(0, k), n, ...p.slice(k)]);
+  for (const p of permutationsOf(n - 1)) for (let k = 0; k <= p.length; k++) out.push([...p.slice(0, k), n, ...p.slice(k)]);
   return out;
 }
 
 describe('essential set', () => {
-  it('matches Fulton\'s examples', () => {
+  it("matches Fulton's examples", () => {
     // w = 1432: D(w) = {(2,2),(2,3),(3,2)}, Ess = {(2,3),(3,2)} (Fulton 1992, §3 by definition)
-    expect(essentialSet([1, 4, 3, 2])).toEqual([[2, 3], [3, 2]]);
+    expect(essentialSet([1, 4, 3, 2])).toEqual([
+      [2, 3],
+      [3, 2],
+    ]);
     // w0 of S_3 = 321: D = {(1,1),(1,2),(2,1)}, Ess = {(1,2),(2,1)}
-    expect(essentialSet([3, 2, 1])).toEqual([[1, 2], [2, 1]]);
+    expect(essentialSet([3, 2, 1])).toEqual([
+      [1, 2],
+      [2, 1],
+    ]);
     expect(essentialSet([1, 2, 3])).toEqual([]);
   });
 });
@@ -46,7 +51,12 @@ for (const n of [3, 4, 5]) {
       if (d.cells.length !== inversions(d.traced)) continue;
       const key = d.traced.join(',');
       if (!reduced.has(key)) reduced.set(key, []);
-      reduced.get(key)!.push(d.cells.map(([i, j]) => `${i},${j}`).sort().join(' '));
+      reduced.get(key)!.push(
+        d.cells
+          .map(([i, j]) => `${i},${j}`)
+          .sort()
+          .join(' '),
+      );
     }
     it('Gröbner basis, squarefree initial ideal, codim, multidegree, K-polynomial, facets', () => {
       for (const w of permutationsOf(n)) {

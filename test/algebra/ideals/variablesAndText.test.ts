@@ -32,7 +32,10 @@ describe('doubly indexed indeterminates', () => {
 
 describe('polynomial text read back', () => {
   it('parsePolynomialText(toText(p)) == p', () => {
-    fc.assert(fc.property(polyArb, (p) => pequals(parsePolynomialText(polyText(p)), p)), { numRuns: 300 });
+    fc.assert(
+      fc.property(polyArb, (p) => pequals(parsePolynomialText(polyText(p)), p)),
+      { numRuns: 300 },
+    );
   });
   it('refuses what is not a printed polynomial', () => {
     expect(() => parsePolynomialText('x + * y')).toThrow(/cannot read/);
@@ -50,7 +53,13 @@ describe('minors', () => {
           const want: number[] = [];
           for (const rs of subsets(4, k))
             for (const cs of subsets(4, k)) {
-              const d = determinant(new Matrix(k, k, rs.flatMap((i) => cs.map((j) => e[i * 4 + j]))));
+              const d = determinant(
+                new Matrix(
+                  k,
+                  k,
+                  rs.flatMap((i) => cs.map((j) => e[i * 4 + j])),
+                ),
+              );
               if (!seq(d, 0)) want.push(Number(d));
             }
           expect(minorsOf(M, k).map(Number)).toEqual(want);
@@ -63,7 +72,8 @@ describe('minors', () => {
 
 describe('over F_p', () => {
   it('the field changes the ideal: (x + y, x - y) is (x, y) over Q but a principal ideal over F_2', () => {
-    const x = variable('fp[1]'), y = variable('fp[2]');
+    const x = variable('fp[1]'),
+      y = variable('fp[2]');
     const gens = [parsePolynomialText('fp[1] + fp[2]'), parsePolynomialText('fp[1] - fp[2]')];
     expect(idealDimensionData(Ideal.of(gens)).dim).toBe(0);
     expect(idealDimensionData(Ideal.of(gens, [], 2)).dim).toBe(1);

@@ -15,7 +15,11 @@ import { describe, expect, it } from 'vitest';
 import { genericMatrix, minorsOf } from '../../../src/algebra/ideals/genericMatrix.js';
 import { Ideal } from '../../../src/algebra/ideals/ideal.js';
 import {
-  grevlexInitial, idealDimensionData, idealHilbertFunction, idealHilbertNumerator, initialIdealOf,
+  grevlexInitial,
+  idealDimensionData,
+  idealHilbertFunction,
+  idealHilbertNumerator,
+  initialIdealOf,
 } from '../../../src/algebra/ideals/invariants.js';
 import { matrixDifference, matrixProduct, matrixDeterminant, Matrix, determinant } from '../../../src/algebra/matrix.js';
 import { hilbertFunctionValue } from '../../../src/algebra/monomialIdeals/invariants.js';
@@ -27,7 +31,8 @@ import { binomialInt, factorialInt } from '../../../src/numbers/integer.js';
 import { varId } from '../../../src/algebra/variables.js';
 
 function determinantalDegree(m: number, n: number, r: number): bigint {
-  let num = 1n, den = 1n;
+  let num = 1n,
+    den = 1n;
   for (let i = 0; i <= m - r - 1; i++) {
     num *= BigInt(factorialInt(n + i)) * BigInt(factorialInt(i));
     den *= BigInt(factorialInt(r + i)) * BigInt(factorialInt(n - r + i));
@@ -36,7 +41,15 @@ function determinantalDegree(m: number, n: number, r: number): bigint {
 }
 
 describe('determinantal varieties', () => {
-  for (const [m, n, r] of [[2, 2, 1], [2, 3, 1], [2, 4, 1], [3, 3, 1], [3, 3, 2], [3, 4, 1], [3, 4, 2]]) {
+  for (const [m, n, r] of [
+    [2, 2, 1],
+    [2, 3, 1],
+    [2, 4, 1],
+    [3, 3, 1],
+    [3, 3, 2],
+    [3, 4, 1],
+    [3, 4, 2],
+  ]) {
     it(`rank <= ${r} in ${m}×${n}: dim, degree, Hilbert function`, () => {
       const I = Ideal.of(minorsOf(genericMatrix('z', m, n), r + 1));
       const d = idealDimensionData(I);
@@ -69,7 +82,8 @@ describe('determinantal varieties', () => {
 
 describe('the commuting variety', () => {
   const commutator = (n: number) => {
-    const X = genericMatrix('a', n, n), Y = genericMatrix('b', n, n);
+    const X = genericMatrix('a', n, n),
+      Y = genericMatrix('b', n, n);
     return matrixDifference(matrixProduct(X, Y), matrixProduct(Y, X)).entries.slice();
   };
   it('n = 2: dim 6, degree 3; n = 3: dim 12, degree 31 (over Q and over F_32003)', () => {
@@ -86,14 +100,24 @@ describe('the commuting variety', () => {
 });
 
 describe('textbook ideals', () => {
-  it('the twisted cubic (Cox, Little, O\'Shea, ch. 1 §2 and ch. 9): dim 2 as a cone, degree 3', () => {
+  it("the twisted cubic (Cox, Little, O'Shea, ch. 1 §2 and ch. 9): dim 2 as a cone, degree 3", () => {
     const [x, y, z, w] = ['tc[1]', 'tc[2]', 'tc[3]', 'tc[4]'].map(variable);
-    const I = Ideal.of(minorsOf(Matrix.from([[x, y, z], [y, z, w]]), 2));
+    const I = Ideal.of(
+      minorsOf(
+        Matrix.from([
+          [x, y, z],
+          [y, z, w],
+        ]),
+        2,
+      ),
+    );
     expect(idealDimensionData(I)).toMatchObject({ dim: 2, degree: 3 });
     expect(idealHilbertNumerator(I).map(Number)).toEqual([1, 0, -3, 2]); // (1 - t)^2 (1 + 2t) over (1 - t)^4
   });
   it('affine: a circle meets a line in 2 points; the affine twisted cubic has dim 1, degree 3', () => {
-    const x = variable('af[1]'), y = variable('af[2]'), z = variable('af[3]');
+    const x = variable('af[1]'),
+      y = variable('af[2]'),
+      z = variable('af[3]');
     const { padd, psub, pmul, ppow } = polyOps;
     const circle = psub(padd(pmul(x, x), pmul(y, y)), 1);
     expect(idealDimensionData(Ideal.of([circle, psub(x, y)]))).toMatchObject({ dim: 0, degree: 2 });
@@ -110,7 +134,9 @@ describe('textbook ideals', () => {
     expect((det as { length: number }).length).toBe(24);
   });
   it('initial ideals depend on the order (lex vs grevlex) but not their Hilbert function', () => {
-    const x = variable('o[1]'), y = variable('o[2]'), z = variable('o[3]');
+    const x = variable('o[1]'),
+      y = variable('o[2]'),
+      z = variable('o[3]');
     const { psub, pmul } = polyOps;
     const I = Ideal.of([psub(pmul(x, x), pmul(y, z)), psub(pmul(y, y), pmul(x, z))]);
     const lex = initialIdealOf(I, termOrder('lex', Array.from(I.ring)));
@@ -123,7 +149,8 @@ describe('textbook ideals', () => {
 describe('the stop check', () => {
   it('an installed stop check ends a basis computation with a clear error', async () => {
     const { setIdealStop } = await import('../../../src/algebra/ideals/stop.js');
-    const X = genericMatrix('s', 3, 3), Y = genericMatrix('u', 3, 3);
+    const X = genericMatrix('s', 3, 3),
+      Y = genericMatrix('u', 3, 3);
     const I = Ideal.of(matrixDifference(matrixProduct(X, Y), matrixProduct(Y, X)).entries.slice());
     setIdealStop(() => true);
     try {

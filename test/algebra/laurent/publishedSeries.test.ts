@@ -15,7 +15,9 @@ import { sadd, sdiv, sisZero, smul, ssub } from '../../../src/numbers/scalar.js'
 import '../../../src/library/index.js';
 
 const run = (s: string) => evaluate(s, [], ['q', 't']);
-const q = variable('q'), Q = varId('q'), T = varId('t');
+const q = variable('q'),
+  Q = varId('q'),
+  T = varId('t');
 
 describe('published identities', () => {
   it('q-Vandermonde with q^-1 (G. E. Andrews, The Theory of Partitions, ch. 3, eq. (3.3.10), at q -> q^-1)', () => {
@@ -31,7 +33,18 @@ describe('published identities', () => {
   });
   it('1/((1-q)...(1-q^k)) counts partitions into at most k parts (OEIS A008284, A000041)', () => {
     // A008284: T(n, k) partitions of n into exactly k parts; at most k parts of n is T(n + k, k).
-    const A008284 = [[1], [1, 1], [1, 1, 1], [1, 2, 1, 1], [1, 2, 2, 1, 1], [1, 3, 3, 2, 1, 1], [1, 3, 4, 3, 2, 1, 1], [1, 4, 5, 5, 3, 2, 1, 1], [1, 4, 7, 6, 5, 3, 2, 1, 1], [1, 5, 8, 9, 7, 5, 3, 2, 1, 1]];
+    const A008284 = [
+      [1],
+      [1, 1],
+      [1, 1, 1],
+      [1, 2, 1, 1],
+      [1, 2, 2, 1, 1],
+      [1, 3, 3, 2, 1, 1],
+      [1, 3, 4, 3, 2, 1, 1],
+      [1, 4, 5, 5, 3, 2, 1, 1],
+      [1, 4, 7, 6, 5, 3, 2, 1, 1],
+      [1, 5, 8, 9, 7, 5, 3, 2, 1, 1],
+    ];
     for (let k = 1; k <= 4; k++) {
       const f = run(`1/${Array.from({ length: k }, (_, i) => `(1 - q^${i + 1})`).join('/')}`) as RationalLike;
       for (let n = 0; n + k <= 10; n++) expect(seriesCoefficient(f, Q, n)).toBe(A008284[n + k - 1][k - 1]);
@@ -67,13 +80,22 @@ describe('published identities', () => {
 
 describe('arithmetic agrees with evaluation at rational points', () => {
   const coef = fc.integer({ min: -4, max: 4 });
-  const polyArb = fc
-    .array(fc.tuple(fc.integer({ min: 0, max: 3 }), fc.integer({ min: 0, max: 1 }), coef), { maxLength: 4 })
-    .map((ts) => fromTerms([Q, T], ts.map(([a, b, c]) => [[a, b], c] as [number[], Scalar])));
-  const rfArb = fc.tuple(polyArb, polyArb).filter(([, d]) => !(typeof d === 'number' && d === 0)).map(([n, d]) => makeRational(n, d));
+  const polyArb = fc.array(fc.tuple(fc.integer({ min: 0, max: 3 }), fc.integer({ min: 0, max: 1 }), coef), { maxLength: 4 }).map((ts) =>
+    fromTerms(
+      [Q, T],
+      ts.map(([a, b, c]) => [[a, b], c] as [number[], Scalar]),
+    ),
+  );
+  const rfArb = fc
+    .tuple(polyArb, polyArb)
+    .filter(([, d]) => !(typeof d === 'number' && d === 0))
+    .map(([n, d]) => makeRational(n, d));
   const point = fc.tuple(fc.integer({ min: -6, max: 6 }), fc.integer({ min: 1, max: 5 })).map(([a, b]) => makeRat(BigInt(a), BigInt(b)));
   const at = (f: RationalLike, x: Scalar, y: Scalar): Scalar | undefined => {
-    const vals = new Map<number, PolyLike>([[Q, x], [T, y]]);
+    const vals = new Map<number, PolyLike>([
+      [Q, x],
+      [T, y],
+    ]);
     try {
       const [n, d] = partsOf(f).map((p) => substitute(p, vals) as Scalar);
       return sisZero(d) ? undefined : sdiv(n, d);
@@ -84,7 +106,8 @@ describe('arithmetic agrees with evaluation at rational points', () => {
   it('+ - * / and the text round trip', () => {
     fc.assert(
       fc.property(rfArb, rfArb, point, point, (f, g, x, y) => {
-        const fx = at(f, x, y), gx = at(g, x, y);
+        const fx = at(f, x, y),
+          gx = at(g, x, y);
         expect(valueEquals(run(valueToText(f)), f)).toBe(true);
         if (fx === undefined || gx === undefined) return;
         const check = (h: RationalLike, want: Scalar) => {

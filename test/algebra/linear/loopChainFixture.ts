@@ -41,11 +41,19 @@ export function loopChain(n: number, join: number, cross: number): LoopChain {
   const move = (p: number[], i: number, crossing: boolean): number[] => {
     const j = (i + 1) % size;
     if (p[i] === j) return p;
-    const q = p.slice(), a = p[i], b = p[j];
+    const q = p.slice(),
+      a = p[i],
+      b = p[j];
     if (crossing) {
-      q[i] = b; q[b] = i; q[j] = a; q[a] = j;
+      q[i] = b;
+      q[b] = i;
+      q[j] = a;
+      q[a] = j;
     } else {
-      q[i] = j; q[j] = i; q[a] = b; q[b] = a;
+      q[i] = j;
+      q[j] = i;
+      q[a] = b;
+      q[b] = a;
     }
     return q;
   };

@@ -24,7 +24,8 @@ describe('modular arithmetic', () => {
     fc.assert(
       fc.property(fc.nat(40), fc.nat(), fc.nat(), (k, a0, b0) => {
         const p = modPrime(k);
-        const a = a0 % p, b = b0 % p;
+        const a = a0 % p,
+          b = b0 % p;
         expect(mulMod(a, b, p)).toBe(Number((BigInt(a) * BigInt(b)) % BigInt(p)));
       }),
     );

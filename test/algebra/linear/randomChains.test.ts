@@ -23,10 +23,10 @@ const weightArb = fc.oneof(
 /** Rows over `size` states; every row gets at least one positive weight. */
 const chainArb = fc.integer({ min: 1, max: 7 }).chain((size) =>
   fc
-    .array(
-      fc.tuple(fc.array(fc.tuple(fc.nat(size - 1), weightArb), { maxLength: 5 }), fc.nat(size - 1)),
-      { minLength: size, maxLength: size },
-    )
+    .array(fc.tuple(fc.array(fc.tuple(fc.nat(size - 1), weightArb), { maxLength: 5 }), fc.nat(size - 1)), {
+      minLength: size,
+      maxLength: size,
+    })
     .map((rows) => ({ size, rows: rows.map(([moves, t]) => [...moves, [t, 1]] as Row) })),
 );
 
@@ -56,69 +56,103 @@ function bruteClosed(c: SparseChain): number[][] {
   for (let s = 0; s < n; s++) {
     if (!recurrent(s)) continue;
     const key = [...reach[s]].sort((a, b) => a - b).join(',');
-    classes.set(key, [...reach[s]].sort((a, b) => a - b));
+    classes.set(
+      key,
+      [...reach[s]].sort((a, b) => a - b),
+    );
   }
   return [...classes.values()].sort((a, b) => a[0] - b[0]);
 }
 
 describe('random small chains', () => {
   it('closed classes agree with brute-force reachability', () => {
-    fc.assert(fc.property(chainArb, ({ size, rows }) => {
-      const c = build(size, rows);
-      expect(closedClasses(c)).toEqual(bruteClosed(c));
-    }), { numRuns: 300 });
+    fc.assert(
+      fc.property(chainArb, ({ size, rows }) => {
+        const c = build(size, rows);
+        expect(closedClasses(c)).toEqual(bruteClosed(c));
+      }),
+      { numRuns: 300 },
+    );
   });
 
   it('the modular solver agrees with dense rational elimination, or both see several closed classes', () => {
-    fc.assert(fc.property(chainArb, fc.boolean(), ({ size, rows }, lump) => {
-      const c = build(size, rows);
-      if (bruteClosed(c).length === 1) {
-        expect(stationaryMeasure(c, { lump })).toEqual(stationaryDense(c));
-      } else {
-        expect(() => stationaryMeasure(c, { lump })).toThrow(/closed classes/);
-      }
-    }), { numRuns: 300 });
+    fc.assert(
+      fc.property(chainArb, fc.boolean(), ({ size, rows }, lump) => {
+        const c = build(size, rows);
+        if (bruteClosed(c).length === 1) {
+          expect(stationaryMeasure(c, { lump })).toEqual(stationaryDense(c));
+        } else {
+          expect(() => stationaryMeasure(c, { lump })).toThrow(/closed classes/);
+        }
+      }),
+      { numRuns: 300 },
+    );
   });
 
   it('chains with a cyclic symmetry: lumping reduces the system, and the answer agrees with dense elimination', () => {
     // States (a, j), a < k, j < m; the weight from (a, j) to (b, j + r mod m) depends on (a, b, r) only.
-    const symArb = fc.record({ k: fc.integer({ min: 1, max: 3 }), m: fc.integer({ min: 2, max: 4 }) }).chain(({ k, m }) =>
-      fc
-        .array(fc.tuple(fc.nat(k - 1), fc.nat(k - 1), fc.nat(m - 1), weightArb), { minLength: 1, maxLength: 8 })
-        .map((moves) => ({ k, m, moves })),
+    const symArb = fc
+      .record({ k: fc.integer({ min: 1, max: 3 }), m: fc.integer({ min: 2, max: 4 }) })
+      .chain(({ k, m }) =>
+        fc
+          .array(fc.tuple(fc.nat(k - 1), fc.nat(k - 1), fc.nat(m - 1), weightArb), { minLength: 1, maxLength: 8 })
+          .map((moves) => ({ k, m, moves })),
+      );
+    fc.assert(
+      fc.property(symArb, ({ k, m, moves }) => {
+        const size = k * m;
+        const c = buildChain(size, (s) => {
+          const a = Math.floor(s / m),
+            j = s % m;
+          const out: [number, Scalar][] = [[s, 1]];
+          for (const [from, b, r, w] of moves) if (from === a) out.push([b * m + ((j + r) % m), w]);
+          return out;
+        });
+        if (closedClasses(c).length !== 1) return;
+        expect(stationaryMeasure(c)).toEqual(stationaryDense(c));
+        expect(stationaryMeasure(c, { lump: false })).toEqual(stationaryDense(c));
+      }),
+      { numRuns: 200 },
     );
-    fc.assert(fc.property(symArb, ({ k, m, moves }) => {
-      const size = k * m;
-      const c = buildChain(size, (s) => {
-        const a = Math.floor(s / m), j = s % m;
-        const out: [number, Scalar][] = [[s, 1]];
-        for (const [from, b, r, w] of moves) if (from === a) out.push([b * m + ((j + r) % m), w]);
-        return out;
-      });
-      if (closedClasses(c).length !== 1) return;
-      expect(stationaryMeasure(c)).toEqual(stationaryDense(c));
-      expect(stationaryMeasure(c, { lump: false })).toEqual(stationaryDense(c));
-    }), { numRuns: 200 });
   });
 });
 
 describe('larger sparse chains (the sparse elimination phase runs for the states past the last 48)', () => {
   it('agree with dense rational elimination', () => {
     const arb = fc.integer({ min: 64, max: 72 }).chain((size) =>
-      fc.array(fc.array(fc.tuple(fc.nat(size - 1), fc.integer({ min: 1, max: 4 })), { maxLength: 2 }), { minLength: size, maxLength: size })
+      fc
+        .array(fc.array(fc.tuple(fc.nat(size - 1), fc.integer({ min: 1, max: 4 })), { maxLength: 2 }), {
+          minLength: size,
+          maxLength: size,
+        })
         .map((extra) => ({ size, extra })),
     );
-    fc.assert(fc.property(arb, ({ size, extra }) => {
-      // A directed cycle keeps the chain irreducible; the extra moves make it irregular.
-      const c = buildChain(size, (s) => [[(s + 1) % size, 1], ...extra[s]] as [number, number][]);
-      expect(stationaryMeasure(c, { lump: false })).toEqual(stationaryDense(c));
-    }), { numRuns: 5 });
+    fc.assert(
+      fc.property(arb, ({ size, extra }) => {
+        // A directed cycle keeps the chain irreducible; the extra moves make it irregular.
+        const c = buildChain(size, (s) => [[(s + 1) % size, 1], ...extra[s]] as [number, number][]);
+        expect(stationaryMeasure(c, { lump: false })).toEqual(stationaryDense(c));
+      }),
+      { numRuns: 5 },
+    );
   }, 30_000);
 });
 
 describe('errors name the states', () => {
   it('several closed classes: the message names the classes by their states', () => {
-    const c = buildChain(5, (s) => (s < 2 ? [[1 - s, 1]] : s < 4 ? [[5 - s, 1]] : [[0, 1], [2, 1]]), (s) => `s${s}`);
+    const c = buildChain(
+      5,
+      (s) =>
+        s < 2
+          ? [[1 - s, 1]]
+          : s < 4
+            ? [[5 - s, 1]]
+            : [
+                [0, 1],
+                [2, 1],
+              ],
+      (s) => `s${s}`,
+    );
     try {
       stationaryMeasure(c, { describe: (s) => `s${s}` });
       expect.unreachable();

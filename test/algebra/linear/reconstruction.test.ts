@@ -11,27 +11,32 @@ import { bigGcd } from '../../../src/numbers/integer.js';
 const modOf = (n: bigint, d: bigint, p: number): number => {
   const P = BigInt(p);
   // n * d^-1 mod p via Fermat's little theorem, in BigInt.
-  let inv = 1n, b = ((d % P) + P) % P, e = P - 2n;
+  let inv = 1n,
+    b = ((d % P) + P) % P,
+    e = P - 2n;
   while (e > 0n) {
     if (e & 1n) inv = (inv * b) % P;
     b = (b * b) % P;
     e >>= 1n;
   }
-  return Number((((n % P) + P) % P) * inv % P);
+  return Number(((((n % P) + P) % P) * inv) % P);
 };
 
 describe('rational reconstruction', () => {
   it('isqrt is the integer square root', () => {
-    fc.assert(fc.property(fc.bigInt({ min: 0n, max: 10n ** 40n }), (n) => {
-      const r = isqrt(n);
-      expect(r * r <= n && (r + 1n) * (r + 1n) > n).toBe(true);
-    }));
+    fc.assert(
+      fc.property(fc.bigInt({ min: 0n, max: 10n ** 40n }), (n) => {
+        const r = isqrt(n);
+        expect(r * r <= n && (r + 1n) * (r + 1n) > n).toBe(true);
+      }),
+    );
   });
   it('recovers n/d from n d^-1 mod M whenever |n|, d <= sqrt(M/2)', () => {
     fc.assert(
       fc.property(fc.bigInt({ min: -(10n ** 12n), max: 10n ** 12n }), fc.bigInt({ min: 1n, max: 10n ** 12n }), (n0, d0) => {
         const g = bigGcd(n0, d0) || 1n;
-        const n = n0 / g, d = d0 / g;
+        const n = n0 / g,
+          d = d0 / g;
         const crt = new CrtVector(1);
         for (let k = 0; k < 4; k++) crt.add([modOf(n, d, modPrime(k))], modPrime(k)); // M ~ 2^92
         const bound = isqrt(crt.modulus / 2n);
@@ -44,19 +49,22 @@ describe('rational reconstruction', () => {
   // numerator past the bound, and reconstructVector rightly answers null: more primes needed.)
   it('reconstructs vectors with a common denominator once enough primes agree', () => {
     fc.assert(
-      fc.property(fc.array(fc.tuple(fc.integer({ min: -1000, max: 1000 }), fc.integer({ min: 1, max: 50 })), { minLength: 1, maxLength: 8 }), (fr) => {
-        const crt = new CrtVector(fr.length);
-        const residues = (k: number) => fr.map(([n, d]) => modOf(BigInt(n), BigInt(d), modPrime(k)));
-        let v: ReturnType<typeof reconstructVector> = null;
-        for (let k = 0; k < 8; k++) {
-          crt.add(residues(k), modPrime(k));
-          v = reconstructVector(crt);
-          if (v && agreesModP(v, residues(k + 1), modPrime(k + 1))) break;
-          v = null;
-        }
-        expect(v).not.toBeNull();
-        fr.forEach(([n, d], i) => expect(v!.nums[i] * BigInt(d)).toBe(BigInt(n) * v!.den));
-      }),
+      fc.property(
+        fc.array(fc.tuple(fc.integer({ min: -1000, max: 1000 }), fc.integer({ min: 1, max: 50 })), { minLength: 1, maxLength: 8 }),
+        (fr) => {
+          const crt = new CrtVector(fr.length);
+          const residues = (k: number) => fr.map(([n, d]) => modOf(BigInt(n), BigInt(d), modPrime(k)));
+          let v: ReturnType<typeof reconstructVector> = null;
+          for (let k = 0; k < 8; k++) {
+            crt.add(residues(k), modPrime(k));
+            v = reconstructVector(crt);
+            if (v && agreesModP(v, residues(k + 1), modPrime(k + 1))) break;
+            v = null;
+          }
+          expect(v).not.toBeNull();
+          fr.forEach(([n, d], i) => expect(v!.nums[i] * BigInt(d)).toBe(BigInt(n) * v!.den));
+        },
+      ),
     );
   });
   it('fails rather than guesses when the modulus is too small', () => {

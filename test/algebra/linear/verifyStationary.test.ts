@@ -30,23 +30,31 @@ describe('exact verification', () => {
   for (const [name, weight] of Object.entries(weights)) {
     it(`${name}: accepts the true measure (at any scale), rejects perturbations`, () => {
       const arb = fc.integer({ min: 1, max: 6 }).chain((size) =>
-        fc.tuple(
-          fc.array(fc.array(fc.tuple(fc.nat(size - 1), weight as fc.Arbitrary<Scalar>), { maxLength: 3 }), { minLength: size, maxLength: size }),
-          fc.nat(size - 1),
-          fc.bigInt({ min: 1n, max: 2n ** 70n }),
-        ).map(([extra, at, scale]) => ({ size, extra, at, scale })),
+        fc
+          .tuple(
+            fc.array(fc.array(fc.tuple(fc.nat(size - 1), weight as fc.Arbitrary<Scalar>), { maxLength: 3 }), {
+              minLength: size,
+              maxLength: size,
+            }),
+            fc.nat(size - 1),
+            fc.bigInt({ min: 1n, max: 2n ** 70n }),
+          )
+          .map(([extra, at, scale]) => ({ size, extra, at, scale })),
       );
-      fc.assert(fc.property(arb, ({ size, extra, at, scale }) => {
-        const c = buildChain(size, (s) => [[(s + 1) % size, 1] as [number, Scalar], ...extra[s]]);
-        if (closedClasses(c).length !== 1) return;
-        const f = commonFraction(stationaryDense(c), scale);
-        expect(isStationary(c, f)).toBe(true);
-        const nums = f.nums.slice();
-        nums[at] += 1n;
-        // Still summing to den, but no longer balanced (unless the chain has one state).
-        expect(isStationary(c, { nums, den: f.den + 1n })).toBe(size === 1);
-        expect(isStationary(c, { nums, den: f.den })).toBe(false);
-      }), { numRuns: 150 });
+      fc.assert(
+        fc.property(arb, ({ size, extra, at, scale }) => {
+          const c = buildChain(size, (s) => [[(s + 1) % size, 1] as [number, Scalar], ...extra[s]]);
+          if (closedClasses(c).length !== 1) return;
+          const f = commonFraction(stationaryDense(c), scale);
+          expect(isStationary(c, f)).toBe(true);
+          const nums = f.nums.slice();
+          nums[at] += 1n;
+          // Still summing to den, but no longer balanced (unless the chain has one state).
+          expect(isStationary(c, { nums, den: f.den + 1n })).toBe(size === 1);
+          expect(isStationary(c, { nums, den: f.den })).toBe(false);
+        }),
+        { numRuns: 150 },
+      );
     });
   }
 });

@@ -13,7 +13,11 @@ import { varId } from '../../../src/algebra/variables.js';
 import type { Int } from '../../../src/numbers/integer.js';
 
 const ring = (n: number) => Int32Array.from({ length: n }, (_, i) => varId(`v[${i + 1}]`));
-const ideal = (n: number, gens: number[][]) => MonomialIdeal.of(ring(n), gens.map((g) => Int32Array.from(g)));
+const ideal = (n: number, gens: number[][]) =>
+  MonomialIdeal.of(
+    ring(n),
+    gens.map((g) => Int32Array.from(g)),
+  );
 
 /** The number of monomials of degree d in n variables outside M, by listing them. */
 function naiveHF(M: MonomialIdeal, d: number): number {
@@ -59,7 +63,10 @@ describe('pivot Hilbert series', () => {
     fc.assert(
       fc.property(idealArb, ({ n, gens }) => {
         const M = ideal(n, gens);
-        const fine = kPolynomialTerms(M, Array.from({ length: n }, (_, v) => Int32Array.from({ length: n }, (_, c) => (c === v ? 1 : 0))));
+        const fine = kPolynomialTerms(
+          M,
+          Array.from({ length: n }, (_, v) => Int32Array.from({ length: n }, (_, c) => (c === v ? 1 : 0))),
+        );
         const coarse: Int[] = [];
         for (const [d, c] of fine.values()) {
           const s = d.reduce((a, b) => a + b, 0);
@@ -75,10 +82,31 @@ describe('pivot Hilbert series', () => {
 
   it('textbook values', () => {
     // k[x,y]/(x^2, xy): numerator 1 - 2t^2 + t^3, dim 1, degree 1 (the line y-axis with an embedded point).
-    expect(hilbertNumeratorCoefficients(ideal(2, [[2, 0], [1, 1]]))).toEqual([1, 0, -2, 1]);
-    expect(monomialDimensionData(ideal(2, [[2, 0], [1, 1]]))).toMatchObject({ dim: 1, codim: 1, degree: 1 });
+    expect(
+      hilbertNumeratorCoefficients(
+        ideal(2, [
+          [2, 0],
+          [1, 1],
+        ]),
+      ),
+    ).toEqual([1, 0, -2, 1]);
+    expect(
+      monomialDimensionData(
+        ideal(2, [
+          [2, 0],
+          [1, 1],
+        ]),
+      ),
+    ).toMatchObject({ dim: 1, codim: 1, degree: 1 });
     // A complete intersection of degrees 2, 3 in 4 variables: degree 6, dim 2.
-    expect(monomialDimensionData(ideal(4, [[2, 0, 0, 0], [0, 3, 0, 0]]))).toMatchObject({ dim: 2, degree: 6 });
+    expect(
+      monomialDimensionData(
+        ideal(4, [
+          [2, 0, 0, 0],
+          [0, 3, 0, 0],
+        ]),
+      ),
+    ).toMatchObject({ dim: 2, degree: 6 });
     // The zero ideal: the whole space, degree 1; the unit ideal: empty.
     expect(monomialDimensionData(ideal(3, []))).toMatchObject({ dim: 3, codim: 0, degree: 1 });
     expect(monomialDimensionData(ideal(3, [[0, 0, 0]]))).toMatchObject({ dim: -1, degree: 0 });
@@ -86,7 +114,13 @@ describe('pivot Hilbert series', () => {
   });
 
   it('is bounded', () => {
-    const M = ideal(4, [[1, 1, 0, 0], [0, 1, 1, 0], [0, 0, 1, 1], [1, 0, 0, 1], [1, 0, 1, 0]]);
+    const M = ideal(4, [
+      [1, 1, 0, 0],
+      [0, 1, 1, 0],
+      [0, 0, 1, 1],
+      [1, 0, 0, 1],
+      [1, 0, 1, 0],
+    ]);
     expect(() => hilbertNumeratorCoefficients(M, { maxSteps: 2 })).toThrow(/bound of 2 steps/);
     expect(() => kPolynomialTerms(M, [], { shouldStop: () => true })).toThrow(/stopped/);
   });
@@ -94,7 +128,9 @@ describe('pivot Hilbert series', () => {
 
 describe('minimal generators and the Stanley–Reisner complex', () => {
   it('minimal generators drop multiples and repeats', () => {
-    expect(minimalMonomials([Int32Array.of(1, 1), Int32Array.of(1, 0), Int32Array.of(1, 0), Int32Array.of(0, 2)]).map((g) => Array.from(g))).toEqual([
+    expect(
+      minimalMonomials([Int32Array.of(1, 1), Int32Array.of(1, 0), Int32Array.of(1, 0), Int32Array.of(0, 2)]).map((g) => Array.from(g)),
+    ).toEqual([
       [0, 2],
       [1, 0],
     ]);
@@ -104,7 +140,10 @@ describe('minimal generators and the Stanley–Reisner complex', () => {
     fc.assert(
       fc.property(
         fc.integer({ min: 1, max: 6 }).chain((n) =>
-          fc.record({ n: fc.constant(n), gens: fc.array(fc.array(fc.integer({ min: 0, max: 1 }), { minLength: n, maxLength: n }), { maxLength: 6 }) }),
+          fc.record({
+            n: fc.constant(n),
+            gens: fc.array(fc.array(fc.integer({ min: 0, max: 1 }), { minLength: n, maxLength: n }), { maxLength: 6 }),
+          }),
         ),
         ({ n, gens }) => {
           const M = ideal(n, gens);

@@ -31,22 +31,105 @@ describe('transition matrices: entries of the tables of Macdonald, ch. I appendi
   // Entries entered by hand from the tables (e, h, p in terms of m), recomputed by hand from
   // products of monomial symmetric functions.
   it('n = 3: e, h, p in the monomial basis', () => {
-    sameSym(e(2, 1), combo('monomial', [[[2, 1], 1], [[1, 1, 1], 3]]));
-    sameSym(e(1, 1, 1), combo('monomial', [[[3], 1], [[2, 1], 3], [[1, 1, 1], 6]]));
-    sameSym(h(2, 1), combo('monomial', [[[3], 1], [[2, 1], 2], [[1, 1, 1], 3]]));
-    sameSym(h(3), combo('monomial', [[[3], 1], [[2, 1], 1], [[1, 1, 1], 1]]));
-    sameSym(p(2, 1), combo('monomial', [[[3], 1], [[2, 1], 1]]));
-    sameSym(p(1, 1, 1), combo('monomial', [[[3], 1], [[2, 1], 3], [[1, 1, 1], 6]]));
+    sameSym(
+      e(2, 1),
+      combo('monomial', [
+        [[2, 1], 1],
+        [[1, 1, 1], 3],
+      ]),
+    );
+    sameSym(
+      e(1, 1, 1),
+      combo('monomial', [
+        [[3], 1],
+        [[2, 1], 3],
+        [[1, 1, 1], 6],
+      ]),
+    );
+    sameSym(
+      h(2, 1),
+      combo('monomial', [
+        [[3], 1],
+        [[2, 1], 2],
+        [[1, 1, 1], 3],
+      ]),
+    );
+    sameSym(
+      h(3),
+      combo('monomial', [
+        [[3], 1],
+        [[2, 1], 1],
+        [[1, 1, 1], 1],
+      ]),
+    );
+    sameSym(
+      p(2, 1),
+      combo('monomial', [
+        [[3], 1],
+        [[2, 1], 1],
+      ]),
+    );
+    sameSym(
+      p(1, 1, 1),
+      combo('monomial', [
+        [[3], 1],
+        [[2, 1], 3],
+        [[1, 1, 1], 6],
+      ]),
+    );
   });
   it('n = 4: selected entries', () => {
-    sameSym(p(1, 1, 1, 1), combo('monomial', [[[4], 1], [[3, 1], 4], [[2, 2], 6], [[2, 1, 1], 12], [[1, 1, 1, 1], 24]]));
-    sameSym(e(2, 2), combo('monomial', [[[2, 2], 1], [[2, 1, 1], 2], [[1, 1, 1, 1], 6]]));
-    sameSym(p(2, 2), combo('monomial', [[[4], 1], [[2, 2], 2]]));
-    sameSym(p(3, 1), combo('monomial', [[[4], 1], [[3, 1], 1]]));
+    sameSym(
+      p(1, 1, 1, 1),
+      combo('monomial', [
+        [[4], 1],
+        [[3, 1], 4],
+        [[2, 2], 6],
+        [[2, 1, 1], 12],
+        [[1, 1, 1, 1], 24],
+      ]),
+    );
+    sameSym(
+      e(2, 2),
+      combo('monomial', [
+        [[2, 2], 1],
+        [[2, 1, 1], 2],
+        [[1, 1, 1, 1], 6],
+      ]),
+    );
+    sameSym(
+      p(2, 2),
+      combo('monomial', [
+        [[4], 1],
+        [[2, 2], 2],
+      ]),
+    );
+    sameSym(
+      p(3, 1),
+      combo('monomial', [
+        [[4], 1],
+        [[3, 1], 1],
+      ]),
+    );
     // Kostka matrix row of s_{22}: K_{22,22} = 1, K_{22,211} = 1, K_{22,1111} = 2 (Macdonald I.6 table).
-    sameSym(s(2, 2), combo('monomial', [[[2, 2], 1], [[2, 1, 1], 1], [[1, 1, 1, 1], 2]]));
+    sameSym(
+      s(2, 2),
+      combo('monomial', [
+        [[2, 2], 1],
+        [[2, 1, 1], 1],
+        [[1, 1, 1, 1], 2],
+      ]),
+    );
     // Characters of S_4 (p in the Schur basis): p_4 = s_4 - s_31 + s_211 - s_1111.
-    sameSym(p(4), combo('schur', [[[4], 1], [[3, 1], -1], [[2, 1, 1], 1], [[1, 1, 1, 1], -1]]));
+    sameSym(
+      p(4),
+      combo('schur', [
+        [[4], 1],
+        [[3, 1], -1],
+        [[2, 1, 1], 1],
+        [[1, 1, 1, 1], -1],
+      ]),
+    );
   });
 });
 
@@ -76,13 +159,20 @@ describe('conversions in every direction are inverse to each other (n <= 6)', ()
           const f = basisElement(b, lam);
           const back = expandIn(f, b);
           expect(back.map((t) => [t.parts.join(','), t.coef])).toEqual([[lam.join(','), 1]]);
-          for (const c of BASIS_NAMES) sameSym(fromBasis(c, expandIn(f, c).map((t) => [t.parts, t.coef])), f);
+          for (const c of BASIS_NAMES)
+            sameSym(
+              fromBasis(
+                c,
+                expandIn(f, c).map((t) => [t.parts, t.coef]),
+              ),
+              f,
+            );
         }
   });
 });
 
 describe('omega and the Hall inner product (Macdonald I (2.7), (4.5)–(4.8))', () => {
-  it('omega(e_mu) = h_mu, omega(p_mu) = (-1)^(|mu| - l(mu)) p_mu, omega(s_lambda) = s_lambda\'', () => {
+  it("omega(e_mu) = h_mu, omega(p_mu) = (-1)^(|mu| - l(mu)) p_mu, omega(s_lambda) = s_lambda'", () => {
     for (let n = 1; n <= 6; n++)
       for (const mu of partitionsOf(n)) {
         sameSym(omegaOf(e(...mu)), h(...mu));
@@ -119,7 +209,7 @@ describe('fromPolynomial', () => {
   });
 });
 
-describe('Jacobi–Trudi: s_lambda = det(h_{lambda_i - i + j}) and det(e_{lambda\'_i - i + j}) (Macdonald I (3.4), (3.5))', () => {
+describe("Jacobi–Trudi: s_lambda = det(h_{lambda_i - i + j}) and det(e_{lambda'_i - i + j}) (Macdonald I (3.4), (3.5))", () => {
   /** The determinant by expansion over permutations, products taken in the ring. */
   function det(entry: (i: number, j: number) => SymLike, k: number): SymLike {
     let total: SymLike = 0;
@@ -145,9 +235,15 @@ describe('Jacobi–Trudi: s_lambda = det(h_{lambda_i - i + j}) and det(e_{lambda
   it('for every lambda of size <= 6', () => {
     for (let n = 1; n <= 6; n++)
       for (const lam of partitionsOf(n)) {
-        sameSym(det((i, j) => hk(lam[i] - i + j), lam.length), s(...lam));
+        sameSym(
+          det((i, j) => hk(lam[i] - i + j), lam.length),
+          s(...lam),
+        );
         const c = conjugate(lam);
-        sameSym(det((i, j) => ek(c[i] - i + j), c.length), s(...lam));
+        sameSym(
+          det((i, j) => ek(c[i] - i + j), c.length),
+          s(...lam),
+        );
       }
   });
 });

@@ -28,7 +28,8 @@ const trimZeros = (c: readonly unknown[]) => {
 };
 import { e, h, m, s } from './helpers.js';
 
-const t = variable('t'), q = variable('q');
+const t = variable('t'),
+  q = variable('q');
 const text = (f: SymLike | PolyLike) => valueToText(f);
 const sameSym = (a: SymLike, b: SymLike) => expect(text(a)).toBe(text(b));
 const P = (lam: number[], tv: PolyLike = t): SymLike => {
@@ -64,7 +65,7 @@ describe('Kostka–Foulkes polynomials (Macdonald III.6)', () => {
     expect(KF([2, 2], [1, 1, 1, 1])).toBe('t^4 + t^2');
     expect(KF([2, 1, 1], [1, 1, 1, 1])).toBe('t^3 + t^2 + t');
   });
-  it('K_{lambda,1^n}(t) = t^n(lambda\') prod (1 - t^i) / prod (1 - t^h) (III.6 Ex. 2), n <= 6', () => {
+  it("K_{lambda,1^n}(t) = t^n(lambda') prod (1 - t^i) / prod (1 - t^h) (III.6 Ex. 2), n <= 6", () => {
     for (let n = 1; n <= 6; n++)
       for (const lam of partitionsOf(n)) {
         let num: PolyLike = ppow(t, nOf(conjugate(lam)));
@@ -77,7 +78,8 @@ describe('Kostka–Foulkes polynomials (Macdonald III.6)', () => {
   it('agrees with the word-level implementation of the library (src/library/words/charge.ts), n <= 6', () => {
     for (let n = 1; n <= 6; n++)
       for (const lam of partitionsOf(n))
-        for (const mu of partitionsOf(n)) expect(trimZeros(kostkaFoulkes(lam, mu))).toEqual(trimZeros(kostkaFoulkesCoefficients(lam as number[], mu as number[])));
+        for (const mu of partitionsOf(n))
+          expect(trimZeros(kostkaFoulkes(lam, mu))).toEqual(trimZeros(kostkaFoulkesCoefficients(lam as number[], mu as number[])));
   });
   it('K_{lambda mu}(1) is the Kostka number and K_{lambda lambda}(t) = 1 (n <= 6)', () => {
     for (let n = 1; n <= 6; n++)
@@ -109,9 +111,17 @@ describe('Hall–Littlewood functions (Macdonald III)', () => {
   it('P_lambda(x1, x2, x3; t) by symmetrisation, III (2.2), for |lambda| <= 4', { timeout: 60_000 }, () => {
     const x = [1, 2, 3].map((i) => indexedVarId('x', i));
     const X = x.map((id) => variable(`x[${id === x[0] ? 1 : id === x[1] ? 2 : 3}]`));
-    const perms = [[0, 1, 2], [0, 2, 1], [1, 0, 2], [1, 2, 0], [2, 0, 1], [2, 1, 0]];
+    const perms = [
+      [0, 1, 2],
+      [0, 2, 1],
+      [1, 0, 2],
+      [1, 2, 0],
+      [2, 0, 1],
+      [2, 1, 0],
+    ];
     const sign = [1, -1, -1, 1, 1, -1];
-    let vandermonde: PolyLike = 1, kernel: PolyLike = 1;
+    let vandermonde: PolyLike = 1,
+      kernel: PolyLike = 1;
     for (let i = 0; i < 3; i++)
       for (let j = i + 1; j < 3; j++) {
         vandermonde = pmul(vandermonde, psub(X[i], X[j]));
@@ -166,7 +176,7 @@ describe('modified Macdonald polynomials by the formula of Haglund, Haiman and L
       expect(f).toBeTruthy();
     }
   });
-  it('H~_mu(x; 1, 1) = h_1^n, coefficient of s_(n) is 1 and of s_(1^n) is q^n(mu\') t^n(mu) (n <= 6)', { timeout: 60_000 }, () => {
+  it("H~_mu(x; 1, 1) = h_1^n, coefficient of s_(n) is 1 and of s_(1^n) is q^n(mu') t^n(mu) (n <= 6)", { timeout: 60_000 }, () => {
     for (let n = 1; n <= 6; n++) {
       const h1n = symMulPow(s(1), n);
       for (const mu of partitionsOf(n)) {
@@ -180,7 +190,7 @@ describe('modified Macdonald polynomials by the formula of Haglund, Haiman and L
       }
     }
   });
-  it('H~_mu(x; q, t) = H~_mu\'(x; t, q) (n <= 6)', { timeout: 60_000 }, () => {
+  it("H~_mu(x; q, t) = H~_mu'(x; t, q) (n <= 6)", { timeout: 60_000 }, () => {
     for (let n = 1; n <= 6; n++) for (const mu of partitionsOf(n)) sameSym(H(mu as number[]), H(conjugate(mu), t, q));
   });
   it('H~_mu(x; 0, t) = sum_lambda t^n(mu) K_{lambda mu}(1/t) s_lambda, dual to P_nu(x; t) (n <= 6)', { timeout: 60_000 }, () => {

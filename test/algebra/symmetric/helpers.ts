@@ -43,10 +43,20 @@ function* vectors(n: number, d: number): Generator<number[]> {
 /** m_lambda(x_1..x_n): the distinct rearrangements of x^lambda. */
 export function monomialDirect(lam: readonly number[], n: number): PolyLike {
   if (lam.length > n) return 0;
-  const target = lam.slice().sort((a, b) => b - a).join(',');
+  const target = lam
+    .slice()
+    .sort((a, b) => b - a)
+    .join(',');
   const d = lam.reduce((a, b) => a + b, 0);
   const terms: [number[], number][] = [];
-  for (const v of vectors(n, d)) if (v.filter((x) => x > 0).sort((a, b) => b - a).join(',') === target) terms.push([v, 1]);
+  for (const v of vectors(n, d))
+    if (
+      v
+        .filter((x) => x > 0)
+        .sort((a, b) => b - a)
+        .join(',') === target
+    )
+      terms.push([v, 1]);
   return fromTerms(ids(n), terms);
 }
 

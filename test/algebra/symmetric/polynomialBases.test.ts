@@ -72,7 +72,8 @@ describe('schubertExpand', () => {
   });
   it('coefficients in other indeterminates; the expansion sums back to P', () => {
     const q = variable('q');
-    const x1 = variable('x[1]'), x3 = variable('x[3]');
+    const x1 = variable('x[1]'),
+      x3 = variable('x[3]');
     const P = padd(pmul(q, pmul(x1, x3)), pmul(x3, x3));
     let back: PolyLike = 0;
     for (const [w, c] of schubertExpansion(P, 'x', 'test')) back = padd(back, pmul(c, schubertPolynomial(w, 'x')));
@@ -87,7 +88,15 @@ describe('key polynomials and atoms', () => {
       for (const lam of partitionsOf(d))
         for (let n = Math.max(1, lam.length); n <= 4; n++) {
           const alpha = padTo([], 0).concat(lam, new Array(n - lam.length).fill(0));
-          expect(pequals(keyFamily(alpha, 'x', false), fromTerms(alpha.map((_, i) => x(i + 1)), [[alpha, 1]]))).toBe(true);
+          expect(
+            pequals(
+              keyFamily(alpha, 'x', false),
+              fromTerms(
+                alpha.map((_, i) => x(i + 1)),
+                [[alpha, 1]],
+              ),
+            ),
+          ).toBe(true);
           expect(pequals(keyFamily(alpha.slice().reverse(), 'x', false), schurPolynomial(lam, 'x', n))).toBe(true);
         }
   });
@@ -145,7 +154,8 @@ describe('Stanley symmetric functions', () => {
         const l = lengthOf(w);
         if (l === 0) continue;
         const mono = new Map(expandIn(F, 'monomial').map((t) => [key(t.parts as number[]), t.coef]));
-        for (const lam of partitionsOf(l)) expect(mono.get(key(lam as number[])) ?? 0, `${w} ${lam}`).toBe(monomialCoefficientOfStanley(w, lam));
+        for (const lam of partitionsOf(l))
+          expect(mono.get(key(lam as number[])) ?? 0, `${w} ${lam}`).toBe(monomialCoefficientOfStanley(w, lam));
       }
   });
   it('F_w(x_1..x_3) = S_{1^3 × w}(x_1, x_2, x_3, 0, ...) (w in S_4)', { timeout: 60_000 }, () => {

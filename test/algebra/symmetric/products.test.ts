@@ -21,7 +21,8 @@ const sum = (...fs: SymLike[]) => fs.reduce((a, b) => symAdd(a, b), 0 as SymLike
 /** The product through the power-sum basis. */
 function productByPowerSums(f: SymLike, g: SymLike): SymLike {
   const out: [number[], ReturnType<typeof pmul>][] = [];
-  for (const a of expandIn(f, 'power')) for (const b of expandIn(g, 'power')) out.push([unionParts(a.parts, b.parts), pmul(a.coef, b.coef)]);
+  for (const a of expandIn(f, 'power'))
+    for (const b of expandIn(g, 'power')) out.push([unionParts(a.parts, b.parts), pmul(a.coef, b.coef)]);
   return fromBasis('power', out);
 }
 
@@ -34,7 +35,9 @@ describe('products', () => {
             const prod = symMul(s(...mu), s(...nu));
             sameSym(prod, productByPowerSums(s(...mu), s(...nu)));
             const n = a + b;
-            expect(pequals(toPolynomialIn(prod, 'x', n), pmul(toPolynomialIn(s(...mu), 'x', n), toPolynomialIn(s(...nu), 'x', n)))).toBe(true);
+            expect(pequals(toPolynomialIn(prod, 'x', n), pmul(toPolynomialIn(s(...mu), 'x', n), toPolynomialIn(s(...nu), 'x', n)))).toBe(
+              true,
+            );
           }
   });
   it('Littlewood–Richardson coefficients agree with the library count (n <= 7)', () => {
@@ -79,7 +82,8 @@ describe('plethysm (Macdonald I.8)', () => {
   it('h_2[h_2] = s_4 + s_22', () => sameSym(plethysmOf(h(2), h(2)), sum(s(4), s(2, 2))));
   it('h_2[h_n] = sum_k s_(2n-2k, 2k) and e_2[h_n] = sum_k s_(2n-2k-1, 2k+1) (I.8 Ex. 6)', () => {
     for (let n = 1; n <= 5; n++) {
-      const even: SymLike[] = [], odd: SymLike[] = [];
+      const even: SymLike[] = [],
+        odd: SymLike[] = [];
       for (let k = 0; 2 * k <= n; k++) even.push(s(...[2 * n - 2 * k, 2 * k].filter((x) => x > 0)));
       for (let k = 0; 2 * k + 1 <= n; k++) odd.push(s(2 * n - 2 * k - 1, 2 * k + 1));
       sameSym(plethysmOf(h(2), h(n)), sum(...even));

@@ -199,7 +199,9 @@ export const corpus: HostileCase[] = [
   // --- no raw control bytes reach the terminal or a written file ------------------------------
   {
     name: 'a statement with terminal escape sequences and a carriage return',
-    files: { 'a.yaml': FAILS.replace('expect: fails', 'statement: "clear \\e[2J\\rhidden \\e]0;title\\a and a\\nnew: line"\nexpect: fails') },
+    files: {
+      'a.yaml': FAILS.replace('expect: fails', 'statement: "clear \\e[2J\\rhidden \\e]0;title\\a and a\\nnew: line"\nexpect: fails'),
+    },
     args: ['check', 'a.yaml'],
     code: 0,
     clean: ['counterexamples/maj-bounded.yaml'],
@@ -436,7 +438,10 @@ export const corpus: HostileCase[] = [
     name: 'a ledger whose first line starts with a byte-order mark',
     files: {
       'a.yaml': HOLDS,
-      'hunch-ledger.jsonl': '\ufeff{"v":1,"id":"trivial","hash":"' + 'a'.repeat(64) + '","tool":"0.1.0","phase":"exhaustive","size":{"n":1},"cases":1,"failures":0,"skipped":0,"ms":0.1,"at":"2026-01-01T00:00:00.000Z","host":"h","run":"r","outcome":"holds"}\n',
+      'hunch-ledger.jsonl':
+        '\ufeff{"v":1,"id":"trivial","hash":"' +
+        'a'.repeat(64) +
+        '","tool":"0.1.0","phase":"exhaustive","size":{"n":1},"cases":1,"failures":0,"skipped":0,"ms":0.1,"at":"2026-01-01T00:00:00.000Z","host":"h","run":"r","outcome":"holds"}\n',
     },
     args: ['status', 'a.yaml'],
     code: 0,

@@ -10,7 +10,15 @@ import { exactDocument } from '../../../src/records/counterexample-file.js';
 
 export function forgedFile(conjecture: string, bindings: Record<string, unknown>, extra: Record<string, unknown> = {}): string {
   const spec = loadConjectureFile('c.yaml', conjecture).conjectures[0];
-  return stringify({ format: 1, conjecture: spec.id, hash: conjectureHash(spec), bindings, defines: [], document: exactDocument(spec), ...extra });
+  return stringify({
+    format: 1,
+    conjecture: spec.id,
+    hash: conjectureHash(spec),
+    bindings,
+    defines: [],
+    document: exactDocument(spec),
+    ...extra,
+  });
 }
 
 /** A true statement: inversions of a permutation of n never exceed n(n-1)/2 (the longest element has the most). */

@@ -41,9 +41,18 @@ describe('asms(n)', () => {
     for (let n = 1; n <= 4; n++) checkShrinks(asms, { n }, checkEnumeration(asms, { n }));
   });
   it('reads, prints and rejects', () => {
-    const a = Asm.from([[0, 1, 0], [1, -1, 1], [0, 1, 0]]);
+    const a = Asm.from([
+      [0, 1, 0],
+      [1, -1, 1],
+      [0, 1, 0],
+    ]);
     expect(a.toText()).toBe('asm([[0, 1, 0], [1, -1, 1], [0, 1, 0]])');
     expect(decodeValue(a.encode())).toEqual(a);
-    expect(() => Asm.from([[1, 1], [0, 0]])).toThrow(/alternat/);
+    expect(() =>
+      Asm.from([
+        [1, 1],
+        [0, 0],
+      ]),
+    ).toThrow(/alternat/);
   });
 });

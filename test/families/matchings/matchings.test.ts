@@ -8,21 +8,72 @@ import { checkEarlyStop, checkEnumeration, collect } from '../familyChecks.js';
 
 describe('the Matching class', () => {
   it('reads arcs, prints and encodes them sorted', () => {
-    const m = Matching.fromArcs([[2, 4], [3, 1]]);
+    const m = Matching.fromArcs([
+      [2, 4],
+      [3, 1],
+    ]);
     expect(m.p).toEqual([3, 4, 1, 2]);
     expect(m.n).toBe(2);
-    expect(m.arcs()).toEqual([[1, 3], [2, 4]]);
+    expect(m.arcs()).toEqual([
+      [1, 3],
+      [2, 4],
+    ]);
     expect(m.toText()).toBe('matching([[1, 3], [2, 4]])');
-    expect(m.encode()).toEqual({ matching: [[1, 3], [2, 4]] });
-    expect((decodeValue({ matching: [[1, 3], [2, 4]] }) as Matching).equals(m)).toBe(true);
-    expect(() => Matching.fromArcs([[1, 2], [2, 3]])).toThrow(/two arcs/);
-    expect(() => Matching.fromArcs([[1, 5], [2, 3]])).toThrow(/out of range/);
+    expect(m.encode()).toEqual({
+      matching: [
+        [1, 3],
+        [2, 4],
+      ],
+    });
+    expect(
+      (
+        decodeValue({
+          matching: [
+            [1, 3],
+            [2, 4],
+          ],
+        }) as Matching
+      ).equals(m),
+    ).toBe(true);
+    expect(() =>
+      Matching.fromArcs([
+        [1, 2],
+        [2, 3],
+      ]),
+    ).toThrow(/two arcs/);
+    expect(() =>
+      Matching.fromArcs([
+        [1, 5],
+        [2, 3],
+      ]),
+    ).toThrow(/out of range/);
     expect(() => Matching.fromArcs([[1, 1]])).toThrow(/itself/);
   });
   it('counts crossings and nestings by definition on small examples', () => {
-    expect(matchingCrossings(Matching.fromArcs([[1, 3], [2, 4]]).p)).toBe(1);
-    expect(matchingNestings(Matching.fromArcs([[1, 4], [2, 3]]).p)).toBe(1);
-    expect(matchingCrossings(Matching.fromArcs([[1, 2], [3, 4]]).p)).toBe(0);
+    expect(
+      matchingCrossings(
+        Matching.fromArcs([
+          [1, 3],
+          [2, 4],
+        ]).p,
+      ),
+    ).toBe(1);
+    expect(
+      matchingNestings(
+        Matching.fromArcs([
+          [1, 4],
+          [2, 3],
+        ]).p,
+      ),
+    ).toBe(1);
+    expect(
+      matchingCrossings(
+        Matching.fromArcs([
+          [1, 2],
+          [3, 4],
+        ]).p,
+      ),
+    ).toBe(0);
   });
 });
 
@@ -71,6 +122,14 @@ describe('noncrossingMatchings', () => {
     }
     checkEarlyStop(noncrossingMatchings, [4], 5);
     const p = noncrossingMatchings.prepare([2]);
-    expect(noncrossingMatchings.isMember(p, Matching.fromArcs([[1, 3], [2, 4]]))).toBe(false);
+    expect(
+      noncrossingMatchings.isMember(
+        p,
+        Matching.fromArcs([
+          [1, 3],
+          [2, 4],
+        ]),
+      ),
+    ).toBe(false);
   });
 });

@@ -36,7 +36,8 @@ describe('motzkinPaths(n)', () => {
   it('by number of up steps: C(n, 2k) C_k (Donaghey and Shapiro 1977), n = 9', () => {
     const by = [0, 0, 0, 0, 0];
     for (const p of checkEnumeration(motzkinPaths, { n: 9 })) by[p.steps.filter((s) => s > 0).length]++;
-    const C = [1, 1, 2, 5, 14], binom = [1, 36, 126, 84, 9]; // C(9, 2k)
+    const C = [1, 1, 2, 5, 14],
+      binom = [1, 36, 126, 84, 9]; // C(9, 2k)
     expect(by).toEqual(binom.map((b, k) => b * C[k]));
   });
 

@@ -19,7 +19,11 @@ function allSequences(n: number): number[][] {
 }
 
 /** The parking test by its definition: the increasing rearrangement b has b_i <= i. */
-const parks = (a: number[]) => a.slice().sort((x, y) => x - y).every((b, i) => b <= i + 1);
+const parks = (a: number[]) =>
+  a
+    .slice()
+    .sort((x, y) => x - y)
+    .every((b, i) => b <= i + 1);
 
 describe('parkingFunctions(n)', () => {
   it('counts (n+1)^(n-1) (OEIS A000272)', () => {
@@ -28,7 +32,9 @@ describe('parkingFunctions(n)', () => {
 
   it('enumerates exactly the sequences that park, in lexicographic order (n <= 6)', () => {
     for (let n = 0; n <= 6; n++) {
-      const want = allSequences(n).filter(parks).map((a) => a.join(','));
+      const want = allSequences(n)
+        .filter(parks)
+        .map((a) => a.join(','));
       expect(checkEnumeration(parkingFunctions, { n }).map((p) => p.key())).toEqual(want);
       for (const a of allSequences(Math.min(n, 5))) expect(isParkingFunction(a)).toBe(parks(a));
     }
@@ -53,7 +59,9 @@ describe('parkingFunctions(n)', () => {
   it('the weakly increasing ones are counted by the Catalan numbers (OEIS A000108)', () => {
     const C = [1, 1, 2, 5, 14, 42, 132];
     for (let n = 0; n <= 6; n++)
-      expect(checkEnumeration(parkingFunctions, { n }).filter((p) => p.values.every((x, i) => i === 0 || p.values[i - 1] <= x)).length).toBe(C[n]);
+      expect(
+        checkEnumeration(parkingFunctions, { n }).filter((p) => p.values.every((x, i) => i === 0 || p.values[i - 1] <= x)).length,
+      ).toBe(C[n]);
   });
 
   it('shrinks to strictly simpler members; text form and decoding round-trip', () => {

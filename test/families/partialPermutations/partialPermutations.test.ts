@@ -27,7 +27,10 @@ describe('partialPermutations(k, n)', () => {
     for (let k = 0; k <= 4; k++) for (let n = 0; n <= 4; n++) checkEnumeration(partialPermutations, { k, n });
   });
   it('samples uniformly (chi-square at 2 x 3: 13 matrices; 3 x 3: 34)', () => {
-    for (const [k, n] of [[2, 3], [3, 3]]) {
+    for (const [k, n] of [
+      [2, 3],
+      [3, 3],
+    ]) {
       const all = checkEnumeration(partialPermutations, { k, n });
       const { chi, threshold } = chiSquareUniform(partialPermutations.arbitrary!({ k, n }), all, 1000 * all.length);
       expect(chi).toBeLessThan(threshold);

@@ -15,7 +15,7 @@ function bruteCount(n: number, pats: number[][]): number {
     if (k > w.length) return false;
     for (;;) {
       let ok = true;
-      for (let s = 0; s < k && ok; s++) for (let t = s + 1; t < k && ok; t++) if ((w[idx[s]] < w[idx[t]]) !== (p[s] < p[t])) ok = false;
+      for (let s = 0; s < k && ok; s++) for (let t = s + 1; t < k && ok; t++) if (w[idx[s]] < w[idx[t]] !== p[s] < p[t]) ok = false;
       if (ok) return true;
       let i = k - 1;
       while (i >= 0 && idx[i] === w.length - k + i) i--;

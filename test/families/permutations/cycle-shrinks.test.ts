@@ -28,15 +28,23 @@ function cycleType(w: number[]): number[] {
 describe('cycle shrink steps of permutations', () => {
   test('each step is a permutation of a smaller size, and no step repeats', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 9 }).chain((n) => fc.shuffledSubarray([...Array(n).keys()].map((i) => i + 1), { minLength: n, maxLength: n })), (a) => {
-        const seen = new Set<string>();
-        const steps = [...cycleShrinks(a, seen)];
-        for (const b of steps) {
-          expect(b.length).toBeLessThan(a.length);
-          expect(isPermutation(b)).toBe(true);
-        }
-        expect(new Set(steps.map((b) => b.join(','))).size).toBe(steps.length);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 9 }).chain((n) =>
+          fc.shuffledSubarray(
+            [...Array(n).keys()].map((i) => i + 1),
+            { minLength: n, maxLength: n },
+          ),
+        ),
+        (a) => {
+          const seen = new Set<string>();
+          const steps = [...cycleShrinks(a, seen)];
+          for (const b of steps) {
+            expect(b.length).toBeLessThan(a.length);
+            expect(isPermutation(b)).toBe(true);
+          }
+          expect(new Set(steps.map((b) => b.join(','))).size).toBe(steps.length);
+        },
+      ),
       { seed: 11, numRuns: 200 },
     );
   });
@@ -53,7 +61,10 @@ describe('cycle shrink steps of permutations', () => {
   test('order(w) <= n^2 sampled with seed 0 shrinks to n = 19, cycle type (7, 5, 4, 3)', () => {
     const d = tempDir('hunch-order-');
     try {
-      writeFileSync(join(d, 'a.yaml'), 'conjecture: order-bound\nexpect: fails\nfor:\n  n: 1..8\n  w: permutations(n)\nclaim: order(w) <= n^2\nsample:\n  n: 9..30\n  count: 200\n');
+      writeFileSync(
+        join(d, 'a.yaml'),
+        'conjecture: order-bound\nexpect: fails\nfor:\n  n: 1..8\n  w: permutations(n)\nclaim: order(w) <= n^2\nsample:\n  n: 9..30\n  count: 200\n',
+      );
       const r = runCli(['check', 'a.yaml', '--no-ledger', '--seed', '0', '--no-exhaustive', '--json'], { cwd: d, timeout: 120_000 });
       expect(r.code, r.stderr).toBe(0);
       const cx = JSON.parse(r.stdout).results[0].counterexample;

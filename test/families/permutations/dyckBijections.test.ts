@@ -49,7 +49,12 @@ describe('Dyck path bijections onto the avoiders of one pattern of length 3', ()
 
   it('applies to exactly one pattern of length 3', () => {
     expect(dyckBijectionFor([[1, 3, 2]])).toBeDefined();
-    expect(dyckBijectionFor([[1, 3, 2], [3, 2, 1]])).toBeUndefined();
+    expect(
+      dyckBijectionFor([
+        [1, 3, 2],
+        [3, 2, 1],
+      ]),
+    ).toBeUndefined();
     expect(dyckBijectionFor([[1, 3, 4, 2]])).toBeUndefined();
   });
 

@@ -2,7 +2,12 @@ import * as fc from 'fast-check';
 import { xoroshiro128plus } from 'pure-rand/generator/xoroshiro128plus';
 import { describe, expect, it } from 'vitest';
 import { rskRows } from '../../../src/library/rsk.js';
-import { inverseRsk, increasingAvoiderCount, monotonePattern, partitionsWithPartsAtMost } from '../../../src/families/permutations/increasingAvoiders.js';
+import {
+  inverseRsk,
+  increasingAvoiderCount,
+  monotonePattern,
+  partitionsWithPartsAtMost,
+} from '../../../src/families/permutations/increasingAvoiders.js';
 import { avoiders } from '../../../src/families/permutations/avoiders.js';
 import { nextPermutation } from '../../../src/families/permutations/permutation.js';
 import { containsPattern } from '../../../src/families/permutations/patterns.js';
@@ -29,7 +34,18 @@ describe('avoiders of 12...k and k...21 through Robinson–Schensted', () => {
 
   it('counts: sum of (f^lambda)^2 over lambda_1 < k agrees with generation (and OEIS A005802 for 1234)', () => {
     // A005802 recalled from memory: 1, 1, 2, 6, 23, 103, 513, 2761, 15767, 94359
-    expect([...Array(10).keys()].map((n) => increasingAvoiderCount(n, 4))).toEqual([1n, 1n, 2n, 6n, 23n, 103n, 513n, 2761n, 15767n, 94359n]);
+    expect([...Array(10).keys()].map((n) => increasingAvoiderCount(n, 4))).toEqual([
+      1n,
+      1n,
+      2n,
+      6n,
+      23n,
+      103n,
+      513n,
+      2761n,
+      15767n,
+      94359n,
+    ]);
     for (const k of [2, 3, 4, 5, 6]) {
       for (let n = 0; n <= 8; n++) {
         const inc = Array.from({ length: k }, (_, i) => i + 1).join('');

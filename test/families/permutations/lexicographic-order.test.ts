@@ -16,7 +16,11 @@ describe('permutation families in lexicographic order', () => {
     ['derangements(n)', 'fixedPoints(w) == 0'],
   ])('%s is permutations(n) filtered, in the same order', (fam, cond) => {
     for (const n of [0, 1, 3, 5, 6]) {
-      expect(evaluate(`list(w for w in permutations(${n}) where ${cond.replace(/\bn\b/g, String(n))}) == list(w for w in ${fam.replace(/\bn\b/, String(n))})`)).toBe(true);
+      expect(
+        evaluate(
+          `list(w for w in permutations(${n}) where ${cond.replace(/\bn\b/g, String(n))}) == list(w for w in ${fam.replace(/\bn\b/, String(n))})`,
+        ),
+      ).toBe(true);
     }
   });
 });

@@ -9,7 +9,8 @@ import { checkEnumeration, checkShrinks, chiSquareUniform, listAll } from '../pa
 
 /** Second algorithm: every set of inv(w) staircase cells whose traced pipes read w with no double crossing. */
 function bruteForce(w: number[]): Set<string> {
-  const n = w.length, l = inversions(w);
+  const n = w.length,
+    l = inversions(w);
   const cells: [number, number][] = [];
   for (let i = 1; i < n; i++) for (let j = 1; i + j <= n; j++) cells.push([i, j]);
   const out = new Set<string>();
@@ -52,7 +53,10 @@ describe('pipeDreams(w)', () => {
     }
   });
   it('samples uniformly (chi-square on w = 1432 and w = 21543)', () => {
-    for (const w of [[1, 4, 3, 2], [2, 1, 5, 4, 3]]) {
+    for (const w of [
+      [1, 4, 3, 2],
+      [2, 1, 5, 4, 3],
+    ]) {
       const p = pipeDreams.prepare([new Permutation(w)]);
       const all = checkEnumeration(pipeDreams, p);
       const { chi, threshold } = chiSquareUniform(pipeDreams.arbitrary!(p), all, 2000 * all.length);
@@ -66,7 +70,10 @@ describe('pipeDreams(w)', () => {
     }
   });
   it('round-trips', () => {
-    const p = PipeDream.from([[1, 2], [1, 1]]);
+    const p = PipeDream.from([
+      [1, 2],
+      [1, 1],
+    ]);
     expect(p.toText()).toBe('pipeDream([[1, 1], [1, 2]])');
     expect(decodeValue(p.encode())).toEqual(p);
   });

@@ -16,7 +16,8 @@ const A005118 = [1, 1, 2, 16, 768, 292864, 1100742656];
 
 /** All words of length l over 1..n-1 that are reduced words of w: brute force from the definition. */
 function bruteForce(w: number[]): number {
-  const n = w.length, l = inversions(w);
+  const n = w.length,
+    l = inversions(w);
   let c = 0;
   const word = new Array<number>(l).fill(1);
   const go = (k: number) => {
@@ -89,7 +90,8 @@ describe('reducedWords(w)', () => {
     }
     // Stanley's formula (OEIS A005118): a(n) = binomial(n, 2)! / prod_{i=1}^{n-1} (2i-1)^(n-i).
     for (const n of [9, 12, 15]) {
-      let num = 1n, den = 1n;
+      let num = 1n,
+        den = 1n;
       for (let k = 2; k <= (n * (n - 1)) / 2; k++) num *= BigInt(k);
       for (let i = 1; i < n; i++) den *= BigInt(2 * i - 1) ** BigInt(n - i);
       expect(reducedWords.count(reducedWords.prepare([new Permutation(longest(n))]))).toBe(num / den);

@@ -2,7 +2,11 @@
 // agreement with the filtered set partitions, the Dyck path bijection both ways, the sampler.
 
 import { describe, expect, it } from 'vitest';
-import { noncrossingPartitions, partitionOfDyckSteps, dyckStepsOfPartition } from '../../../src/families/setPartitions/noncrossingPartitions.js';
+import {
+  noncrossingPartitions,
+  partitionOfDyckSteps,
+  dyckStepsOfPartition,
+} from '../../../src/families/setPartitions/noncrossingPartitions.js';
 import { setPartitions } from '../../../src/families/setPartitions/setPartitions.js';
 import { dyckPaths } from '../../../src/families/dyckPaths/dyckPaths.js';
 import { isNoncrossing, partitionCrossings, partitionNestings } from '../../../src/families/setPartitions/arcs.js';

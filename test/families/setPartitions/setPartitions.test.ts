@@ -28,7 +28,10 @@ describe('setPartitions(n)', () => {
     for (let n = 1; n <= 6; n++) checkShrinks(setPartitions, { n }, checkEnumeration(setPartitions, { n }));
   });
   it('prints blocks and round-trips', () => {
-    const s = SetPartition.fromBlocks([[2, 4], [1, 3]]);
+    const s = SetPartition.fromBlocks([
+      [2, 4],
+      [1, 3],
+    ]);
     expect(s.rgs).toEqual([1, 2, 1, 2]);
     expect(s.toText()).toBe('setPartition([[1, 3], [2, 4]])');
     expect(decodeValue(s.encode())).toEqual(s);

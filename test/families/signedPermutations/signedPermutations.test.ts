@@ -27,7 +27,9 @@ function productFormula(n: number): number[] {
   let c = [1];
   for (let i = 1; i <= n; i++) {
     const out = new Array(c.length + 2 * i - 1).fill(0);
-    c.forEach((x, d) => { for (let e = 0; e < 2 * i; e++) out[d + e] += x; });
+    c.forEach((x, d) => {
+      for (let e = 0; e < 2 * i; e++) out[d + e] += x;
+    });
     c = out;
   }
   return c;
@@ -49,10 +51,11 @@ describe('signedPermutations(n)', () => {
         for (const a of frontier) {
           const moves = [a.map((x, j) => (j === 0 ? -x : x))];
           for (let i = 0; i + 1 < n; i++) moves.push(a.map((x, j) => (j === i ? a[i + 1] : j === i + 1 ? a[i] : x)));
-          for (const b of moves) if (!dist.has(b.join())) {
-            dist.set(b.join(), dist.get(a.join())! + 1);
-            next.push(b);
-          }
+          for (const b of moves)
+            if (!dist.has(b.join())) {
+              dist.set(b.join(), dist.get(a.join())! + 1);
+              next.push(b);
+            }
         }
         frontier = next;
       }
@@ -77,7 +80,13 @@ describe('signedPermutations(n)', () => {
   });
 
   it('desB: the type B Eulerian numbers, OEIS A060187 rows 1..5', () => {
-    const rows = [[1, 1], [1, 6, 1], [1, 23, 23, 1], [1, 76, 230, 76, 1], [1, 237, 1682, 1682, 237, 1]];
+    const rows = [
+      [1, 1],
+      [1, 6, 1],
+      [1, 23, 23, 1],
+      [1, 76, 230, 76, 1],
+      [1, 237, 1682, 1682, 237, 1],
+    ];
     rows.forEach((row, i) => expect(distribution(all(i + 1), desB)).toEqual(row));
   });
 

@@ -27,7 +27,10 @@ describe('standardTableaux(lambda)', () => {
     expect(standardTableaux.count({ parts: [4, 3, 2, 1], n: 10 })).toBe(768n);
   });
   it('samples uniformly by the hook walk (chi-square on shape (3,2,1): 16 tableaux; (4,2): 9)', () => {
-    for (const parts of [[3, 2, 1], [4, 2]]) {
+    for (const parts of [
+      [3, 2, 1],
+      [4, 2],
+    ]) {
       const p = { parts, n: 6 };
       const all = checkEnumeration(standardTableaux, p);
       const { chi, threshold } = chiSquareUniform(standardTableaux.arbitrary!(p), all, 800 * all.length);
@@ -60,7 +63,11 @@ describe('semistandardTableaux(lambda, m)', () => {
     }
   });
   it('samples uniformly (chi-square on shape (2,1), m = 3: 8; (2,2), m = 3: 6; (3,1), m=3: 15)', () => {
-    for (const parts of [[2, 1], [2, 2], [3, 1]]) {
+    for (const parts of [
+      [2, 1],
+      [2, 2],
+      [3, 1],
+    ]) {
       const p = { parts, m: 3, n: parts[0] + parts[1] };
       const all = checkEnumeration(semistandardTableaux, p);
       const { chi, threshold } = chiSquareUniform(semistandardTableaux.arbitrary!(p), all, 1000 * all.length);

@@ -42,8 +42,11 @@ sample: { count: 50, n: 7..12 }
   });
 
   test('statement, references, expect, id and sample count do not enter it', () => {
-    const changed = BASE.replace('never exceeds', 'is at most').replace('[folklore]', '[A000001]').replace('expect: fails', 'expect: open')
-      .replace('maj-vs-inv', 'renamed').replace('count: 50', 'count: 5000');
+    const changed = BASE.replace('never exceeds', 'is at most')
+      .replace('[folklore]', '[A000001]')
+      .replace('expect: fails', 'expect: open')
+      .replace('maj-vs-inv', 'renamed')
+      .replace('count: 50', 'count: 5000');
     expect(hashOf(changed)).toBe(hashOf(BASE));
   });
 

@@ -28,7 +28,7 @@ describe('indeterminates', () => {
     expect(check(FILE).outcome).toBe('holds');
   });
 
-  test('a conjecture adds its own after the file\'s', () => {
+  test("a conjecture adds its own after the file's", () => {
     const [spec] = loadConjectureFile('f.yaml', FILE.replace('conjecture: e2', 'conjecture: e2\nindeterminates: [q, x]')).conjectures;
     expect(spec.indeterminates).toEqual(['x', 'q']);
   });

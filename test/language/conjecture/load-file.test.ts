@@ -72,7 +72,10 @@ describe('every key of FORMAT.md §1', () => {
     expect(c.defines.map((d) => [d.header, d.body.text])).toEqual([['twice(k)', '2 * k']]);
     expect(c.document.conjecture).toBe('maj-bounded-by-inv');
     const cc = compileConjecture(c);
-    expect(cc.bindings.map((b) => [b.name, b.source.kind])).toEqual([['n', 'range'], ['w', 'family']]);
+    expect(cc.bindings.map((b) => [b.name, b.source.kind])).toEqual([
+      ['n', 'range'],
+      ['w', 'family'],
+    ]);
     expect(cc.sizeIndex).toBe(0);
   });
 
@@ -106,7 +109,9 @@ describe('every key of FORMAT.md §1', () => {
   });
 
   it('sample: a range for a family binding is refused', () => {
-    expect(errorOf('conjecture: c\nfor:\n  n: 1..3\n  w: permutations(n)\nclaim: true\nsample:\n  n: 5..6\n  w: 1..2\n').message).toMatch(/only range bindings/);
+    expect(errorOf('conjecture: c\nfor:\n  n: 1..3\n  w: permutations(n)\nclaim: true\nsample:\n  n: 5..6\n  w: 1..2\n').message).toMatch(
+      /only range bindings/,
+    );
   });
 
   it('expect accepts holds, fails, open and suggests the nearest otherwise', () => {
@@ -162,8 +167,10 @@ define:
     }
   });
 
-  it('a conjecture\'s own define: is added to the file\'s, and does not leak to the others', () => {
-    const cs = load('conjecture: a\ndefine:\n  sq(k): k * k\nfor:\n  n: 1..3\nclaim: sq(n) >= n\n---\nconjecture: b\nfor:\n  n: 1..3\nclaim: sq(n) >= n\n');
+  it("a conjecture's own define: is added to the file's, and does not leak to the others", () => {
+    const cs = load(
+      'conjecture: a\ndefine:\n  sq(k): k * k\nfor:\n  n: 1..3\nclaim: sq(n) >= n\n---\nconjecture: b\nfor:\n  n: 1..3\nclaim: sq(n) >= n\n',
+    );
     expect(cs[0].defines.map((d) => d.header)).toEqual(['sq(k)']);
     expect(cs[1].defines).toEqual([]);
     expect(() => compileConjecture(cs[0])).not.toThrow();
@@ -197,7 +204,7 @@ define:
     expect(e.message).toMatch(/\bx\b/);
   });
 
-  it('a file may hold two conjectures with one id; uniqueness is the project loader\'s job', () => {
+  it("a file may hold two conjectures with one id; uniqueness is the project loader's job", () => {
     // loadConjectureFile itself keeps both; the project loader refuses the duplicate.
     expect(load('conjecture: c\nclaim: true\n---\nconjecture: c\nclaim: true\n')).toHaveLength(2);
   });
@@ -279,7 +286,9 @@ describe('unknown keys', () => {
   it('at the top level, with the nearest known key', () => {
     const e = errorOf('conjecture: c\nfor:\n  n: 1..3\nclaim: true\nsampel:\n  n: 4..5\n');
     expect(e.message).toMatch(/unknown key "sampel".*did you mean "sample"/);
-    expect(e.message).toMatch(/known keys: conjecture, statement, expect, indeterminates, for, where, let, claim, sample, references, define/);
+    expect(e.message).toMatch(
+      /known keys: conjecture, statement, expect, indeterminates, for, where, let, claim, sample, references, define/,
+    );
     expect(e.suggestion).toBe('sample');
     expect(where(e)).toBe('f.yaml:5:1');
   });
@@ -302,7 +311,9 @@ describe('unknown keys', () => {
 describe('big integers stay exact', () => {
   const big = '123456789012345678901234';
   it('in an unquoted YAML value (which YAML itself would read as a float) and inside expressions', () => {
-    const [c] = load(`conjecture: c\nfor:\n  n: 1..2\nlet:\n  a: ${big}\nclaim: a + n == ${big} + n and a - 1 == 123456789012345678901233\n`);
+    const [c] = load(
+      `conjecture: c\nfor:\n  n: 1..2\nlet:\n  a: ${big}\nclaim: a + n == ${big} + n and a - 1 == 123456789012345678901233\n`,
+    );
     expect(c.lets[0].expr.text).toBe(big);
     const r = checkConjecture(compileConjecture(c), {}, {});
     expect(r.outcome).toBe('holds');
@@ -340,7 +351,8 @@ describe('aliases', () => {
     expect(e.message).toMatch(/aliases \(\*F\) may only stand for single values/);
     expect(where(e)).toBe('f.yaml:4:6');
     expect(errorOf('conjecture: c\nindeterminates: &I [q]\nreferences: *I\nclaim: true\n').message).toMatch(/single values/);
-    const bomb = 'a: &a [x, x, x, x, x, x, x, x, x]\nb: &b [*a, *a, *a, *a, *a, *a, *a, *a, *a]\nc: &c [*b, *b, *b, *b, *b, *b, *b, *b, *b]\nconjecture: c\nclaim: true\n';
+    const bomb =
+      'a: &a [x, x, x, x, x, x, x, x, x]\nb: &b [*a, *a, *a, *a, *a, *a, *a, *a, *a]\nc: &c [*b, *b, *b, *b, *b, *b, *b, *b, *b]\nconjecture: c\nclaim: true\n';
     const t0 = performance.now();
     expect(() => load(bomb)).toThrow(InputError);
     expect(performance.now() - t0).toBeLessThan(500);

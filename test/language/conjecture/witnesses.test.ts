@@ -36,7 +36,10 @@ claim: all(max(coefficients(schubert(w, x))) <= 1 for w in permutations(n))
   });
 
   test('ranges and lists: the first failing element, by value or position', () => {
-    expect(witnesses('conjecture: r\nfor:\n  n: 5..5\nclaim: all(i * i < 10 for i in 1..n)\n')[0]).toMatchObject({ bindings: { i: 4 }, sides: [16, 10] });
+    expect(witnesses('conjecture: r\nfor:\n  n: 5..5\nclaim: all(i * i < 10 for i in 1..n)\n')[0]).toMatchObject({
+      bindings: { i: 4 },
+      sides: [16, 10],
+    });
     expect(witnesses('conjecture: l\nfor:\n  n: 1..1\nclaim: "all(c < 5 for c in [1, 9, 7])"\n')[0].bindings).toEqual({ c: 9 });
   });
 
@@ -52,7 +55,11 @@ claim: all(max(coefficients(schubert(w, x))) <= 1 for w in permutations(n))
 
   test('any is witnessed where it is true on the path: the left side of a false implies', () => {
     const ws = witnesses('conjecture: i\nfor:\n  n: 3..3\nclaim: any(des(w) == 2 for w in permutations(n)) implies n > 3\n');
-    expect(ws.find((w) => w.kind === 'element')).toMatchObject({ reducer: 'any', bindings: { w: { permutation: [3, 2, 1] } }, value: true });
+    expect(ws.find((w) => w.kind === 'element')).toMatchObject({
+      reducer: 'any',
+      bindings: { w: { permutation: [3, 2, 1] } },
+      value: true,
+    });
   });
 
   test('a false any has no single deciding element', () => {
@@ -61,7 +68,9 @@ claim: all(max(coefficients(schubert(w, x))) <= 1 for w in permutations(n))
 
   test('max in a comparison: the simplest element reaching it', () => {
     const ws = witnesses('conjecture: m\nfor:\n  n: 4..4\nclaim: max(des(w) for w in permutations(n)) <= 2\n');
-    expect(ws).toEqual([expect.objectContaining({ kind: 'element', reducer: 'max', value: 3, bindings: { w: { permutation: [4, 3, 2, 1] } } })]);
+    expect(ws).toEqual([
+      expect.objectContaining({ kind: 'element', reducer: 'max', value: 3, bindings: { w: { permutation: [4, 3, 2, 1] } } }),
+    ]);
     const mins = witnesses('conjecture: m\nfor:\n  n: 3..3\nclaim: min(inv(w) - des(w) for w in permutations(n) where des(w) == 1) >= 1\n');
     // des 1 in S_3: 132, 213 (inv 1), 231, 312 (inv 2); the minimum 0 is reached by 132 and 213, simplest 132
     expect(mins[0]).toMatchObject({ reducer: 'min', value: 0, bindings: { w: { permutation: [1, 3, 2] } } });
@@ -87,13 +96,14 @@ let:
 claim: ok iff n == 3
 `);
     expect(ws.map((w) => [w.kind, w.at, w.value])).toEqual([
-      ['value', 'ok', false], ['value', 'n == 3', true],
+      ['value', 'ok', false],
+      ['value', 'n == 3', true],
       ['element', 'all(des(w) <= 1 for w in permutations(n))', false],
     ]);
     expect(ws[2].bindings).toEqual({ w: { permutation: [3, 2, 1] } });
   });
 
-  test('a plain comparison claim has no extra witnesses (its sides are the counterexample\'s sides)', () => {
+  test("a plain comparison claim has no extra witnesses (its sides are the counterexample's sides)", () => {
     expect(witnesses('conjecture: c\nfor:\n  n: 3..3\n  w: permutations(n)\nclaim: maj(w) <= inv(w)\n')).toEqual([]);
   });
 });

@@ -23,7 +23,9 @@ describe('hazards', () => {
     expect(all[1].suggestion).toBe("put the expression in quotes: k: '[1, 2]'");
     expect(all[2].message).toMatch(/stops here: n >= 1 and$/);
     expect(all[3].message).toMatch(/backquote/);
-    expect(all[4].suggestion).toBe('write the comprehension body first, which needs no quotes: claim: all(inv(w) <= a for w in permutations(n))');
+    expect(all[4].suggestion).toBe(
+      'write the comprehension body first, which needs no quotes: claim: all(inv(w) <= a for w in permutations(n))',
+    );
     // every message is in the combined message, each after the first with its position
     expect(e.message.split('\n')).toHaveLength(5);
     expect(e.message).toContain('five.yaml:11:32: claim is an expression');
@@ -31,7 +33,9 @@ describe('hazards', () => {
 
   test('the body-first fix keeps the rest of the expression as written', () => {
     const [h] = yamlHazards('f.yaml', 'claim: sum(w in permutations(n) where des(w)==1: q^maj(w))   ==  1 # note\n');
-    expect(h.suggestion).toBe('write the comprehension body first, which needs no quotes: claim: sum(q^maj(w) for w in permutations(n) where des(w)==1)   ==  1');
+    expect(h.suggestion).toBe(
+      'write the comprehension body first, which needs no quotes: claim: sum(q^maj(w) for w in permutations(n) where des(w)==1)   ==  1',
+    );
   });
 
   test('a quoted fix doubles single quotes', () => {
@@ -64,7 +68,9 @@ describe('no hazard where YAML is used on purpose or the value is safe', () => {
   });
 
   test('the bundled notebook, the example conjecture files and every valid test file have none', () => {
-    const files = readdirSync(join(ROOT, 'conjectures')).filter((f) => f.endsWith('.yaml')).map((f) => join(ROOT, 'conjectures', f));
+    const files = readdirSync(join(ROOT, 'conjectures'))
+      .filter((f) => f.endsWith('.yaml'))
+      .map((f) => join(ROOT, 'conjectures', f));
     for (const f of files) expect(yamlHazards(f, readFileSync(f, 'utf8')), f).toEqual([]);
     const readme = readFileSync(join(ROOT, 'README.md'), 'utf8');
     for (const m of readme.matchAll(/```yaml\n([\s\S]*?)```/g)) expect(yamlHazards('README.md', m[1])).toEqual([]);

@@ -6,14 +6,44 @@ import { defineFunction, getFunction } from '../../../dist/library/registry.js';
 import '../../../dist/library/permutations.js';
 import { permutations } from '../../../dist/families/permutations/permutations.js';
 import { Permutation, inversions } from '../../../dist/families/permutations/permutation.js';
-function inverseArr(a) { const b = new Array(a.length); for (let i = 0; i < a.length; i++) b[a[i]-1] = i+1; return b; }
-if (!getFunction('inv')) defineFunction({ name: 'inv', topic: 'p', params: [{ name: 'w', type: 'permutation' }], returns: 'integer', description: '', example: '', exampleValue: '', source: '', impl: (w) => inversions(w.a) });
-if (!getFunction('inverse')) defineFunction({ name: 'inverse', topic: 'p', params: [{ name: 'w', type: 'permutation' }], returns: 'permutation', description: '', example: '', exampleValue: '', source: '', impl: (w) => new Permutation(inverseArr(w.a)) });
-const inv = getFunction('inv').impl, inverse = getFunction('inverse').impl;
+function inverseArr(a) {
+  const b = new Array(a.length);
+  for (let i = 0; i < a.length; i++) b[a[i] - 1] = i + 1;
+  return b;
+}
+if (!getFunction('inv'))
+  defineFunction({
+    name: 'inv',
+    topic: 'p',
+    params: [{ name: 'w', type: 'permutation' }],
+    returns: 'integer',
+    description: '',
+    example: '',
+    exampleValue: '',
+    source: '',
+    impl: (w) => inversions(w.a),
+  });
+if (!getFunction('inverse'))
+  defineFunction({
+    name: 'inverse',
+    topic: 'p',
+    params: [{ name: 'w', type: 'permutation' }],
+    returns: 'permutation',
+    description: '',
+    example: '',
+    exampleValue: '',
+    source: '',
+    impl: (w) => new Permutation(inverseArr(w.a)),
+  });
+const inv = getFunction('inv').impl,
+  inverse = getFunction('inverse').impl;
 const N = Number(process.argv[2] ?? 10);
 function loop() {
   let ok = 0;
-  for (let n = 1; n <= N; n++) permutations.enumerate({ n }, (w) => { if (inv(w) === inv(inverse(w))) ok++; });
+  for (let n = 1; n <= N; n++)
+    permutations.enumerate({ n }, (w) => {
+      if (inv(w) === inv(inverse(w))) ok++;
+    });
   return ok;
 }
 function hunch() {
@@ -23,11 +53,19 @@ function hunch() {
   const { fn } = c.compile(parseExpression(text, textOrigin('b', text)));
   const fr = new Array(c.frameSize());
   let ok = 0;
-  for (let n = 1; n <= N; n++) permutations.enumerate({ n }, (w) => { fr[wSlot] = w; if (fn(fr) === true) ok++; });
+  for (let n = 1; n <= N; n++)
+    permutations.enumerate({ n }, (w) => {
+      fr[wSlot] = w;
+      if (fn(fr) === true) ok++;
+    });
   return ok;
 }
 for (let r = 0; r < 3; r++) {
-  let t = performance.now(); const a = loop(); const tl = performance.now() - t;
-  t = performance.now(); const b = hunch(); const th = performance.now() - t;
-  console.log(`loop ${tl.toFixed(0)}ms hunch ${th.toFixed(0)}ms ratio ${(th/tl).toFixed(2)} (${a} ${b})`);
+  let t = performance.now();
+  const a = loop();
+  const tl = performance.now() - t;
+  t = performance.now();
+  const b = hunch();
+  const th = performance.now() - t;
+  console.log(`loop ${tl.toFixed(0)}ms hunch ${th.toFixed(0)}ms ratio ${(th / tl).toFixed(2)} (${a} ${b})`);
 }

@@ -1,7 +1,14 @@
 import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
 import { EvalError, InputError } from '../../../src/base/errors.js';
-import { Compiler, MAX_CALL_DEPTH, parseDefineHeader, parseExpression, textOrigin, type DefineDecl } from '../../../src/language/expr/index.js';
+import {
+  Compiler,
+  MAX_CALL_DEPTH,
+  parseDefineHeader,
+  parseExpression,
+  textOrigin,
+  type DefineDecl,
+} from '../../../src/language/expr/index.js';
 import { Distribution } from '../../../src/values/distribution.js';
 import { Lambda } from '../../../src/values/lambda.js';
 import { valueToText } from '../../../src/values/operations.js';
@@ -42,7 +49,10 @@ describe('exact arithmetic through the language', () => {
   test('laws hold on random integers (fast-check)', () => {
     fc.assert(
       fc.property(fc.bigInt({ min: -(10n ** 20n), max: 10n ** 20n }), fc.bigInt({ min: -(10n ** 20n), max: 10n ** 20n }), (a, b) => {
-        const lets: Array<[string, string]> = [['a', `${a}`.replace(/^-/, '0-')], ['b', `${b}`.replace(/^-/, '0-')]];
+        const lets: Array<[string, string]> = [
+          ['a', `${a}`.replace(/^-/, '0-')],
+          ['b', `${b}`.replace(/^-/, '0-')],
+        ];
         expect(ev('(a + b) * (a - b) == a^2 - b^2', lets)).toBe(true);
         expect(valueToText(ev('a * b', lets))).toBe(`${a * b}`);
         if (b !== 0n) expect(ev('(a / b) * b == a', lets)).toBe(true);
@@ -53,7 +63,10 @@ describe('exact arithmetic through the language', () => {
 });
 
 describe('permutations: * composes, ^ powers, ^-1 inverts', () => {
-  const lets: Array<[string, string]> = [['u', 't_perm([2, 3, 1, 4])'], ['v', 't_perm([1, 4, 2, 3])']];
+  const lets: Array<[string, string]> = [
+    ['u', 't_perm([2, 3, 1, 4])'],
+    ['v', 't_perm([1, 4, 2, 3])'],
+  ];
   test('(u*v)[i] == u[v[i]]', () => {
     expect(ev('all((u*v)[i] == u[v[i]] for i in 1..4)', lets)).toBe(true);
     expect(show('u*v', lets)).toBe('perm([2, 4, 3, 1])');
@@ -106,7 +119,11 @@ describe('comprehensions', () => {
   });
   test('equidistribution: inv on S_4 equals a Mahonian row', () => {
     // OEIS A008302 row n=4: 1, 3, 5, 6, 5, 3, 1.
-    expect(ev('distribution(t_inv(w) for w in permutations(4)) == distribution(concat([[0], [1,1,1], [2,2,2,2,2], [3,3,3,3,3,3], [4,4,4,4,4], [5,5,5], [6]]))')).toBe(true);
+    expect(
+      ev(
+        'distribution(t_inv(w) for w in permutations(4)) == distribution(concat([[0], [1,1,1], [2,2,2,2,2], [3,3,3,3,3,3], [4,4,4,4,4], [5,5,5], [6]]))',
+      ),
+    ).toBe(true);
     expect(ev('distribution([1, 2]) == distribution([2, 1])')).toBe(true);
     expect(ev('distribution([1, 2]) == distribution([2, 2])')).toBe(false);
   });
@@ -121,9 +138,10 @@ describe('comprehensions', () => {
     expect(show('list(permutations(2))')).toBe('[perm([1, 2]), perm([2, 1])]');
     expect(ev('sum(1..100)')).toBe(5050);
   });
-  test('kept objects are copies, not the enumerator\'s transient object', () => {
+  test("kept objects are copies, not the enumerator's transient object", () => {
     expect(show('list(w for w in permutations(3))')).toBe(
-      '[perm([1, 2, 3]), perm([1, 3, 2]), perm([2, 1, 3]), perm([2, 3, 1]), perm([3, 1, 2]), perm([3, 2, 1])]');
+      '[perm([1, 2, 3]), perm([1, 3, 2]), perm([2, 1, 3]), perm([2, 3, 1]), perm([3, 1, 2]), perm([3, 2, 1])]',
+    );
     expect(show('max([t_inv(w), w] for w in permutations(3))')).toBe('[3, perm([3, 2, 1])]');
     expect(show('set(w^2 for w in permutations(3))')).toBe('[perm([1, 2, 3]), perm([2, 3, 1]), perm([3, 1, 2])]');
   });
@@ -188,7 +206,9 @@ describe('names and load-time checks', () => {
     expect(errorOf(() => ev('w + w', lets)).message).toMatch(/\+ is not defined for a permutation and a permutation/);
     expect(errorOf(() => ev('[1] + [2]')).suggestion).toMatch(/concat/);
     expect(errorOf(() => ev('true[1]')).message).toMatch(/cannot be indexed/);
-    expect(errorOf(() => ev('count(w in permutations(3) where t_inv(w) == w)')).message).toMatch(/cannot compare an integer with a permutation/);
+    expect(errorOf(() => ev('count(w in permutations(3) where t_inv(w) == w)')).message).toMatch(
+      /cannot compare an integer with a permutation/,
+    );
     expect(show('permutations(3)[2]')).toBe('perm([1, 3, 2])'); // a family as a value is the list of its objects
   });
   test('types unknown until run time are guarded, with the position of the failing part', () => {
@@ -236,7 +256,7 @@ describe('define: functions', () => {
       'fact(n)': 'if n == 0 then 1 else n * fact(n - 1)',
       'twice(n)': 'fact(n) + fact(n)',
       'qint(n)': 'sum(q^i for i in 0..n-1)',
-      'c': '7',
+      c: '7',
     };
     expect(compileWith(defs, 'peaks([1, 3, 2, 5, 4])')).toBe(2);
     expect(compileWith(defs, 'fact(20)')).toBe(2432902008176640000n);

@@ -2,7 +2,15 @@ import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
 import { InputError } from '../../../src/base/errors.js';
 import {
-  type Expr, exprEquals, parseDefineHeader, parseExpression, printExpression, printHashForm, REDUCERS, stripPositions, textOrigin,
+  type Expr,
+  exprEquals,
+  parseDefineHeader,
+  parseExpression,
+  printExpression,
+  printHashForm,
+  REDUCERS,
+  stripPositions,
+  textOrigin,
 } from '../../../src/language/expr/index.js';
 import { errorOf } from './helpers.js';
 
@@ -68,7 +76,10 @@ describe('comprehensions: body first (canonical) and binder first mean the same'
     ['sum(sum(j for j in 1..i) for i in 1..n)', 'sum(i in 1..n: sum(j in 1..i: j))'],
     ['max(x for x in list(y^2 for y in 1..n) where x > 2)', 'max(x in list(y in 1..n: y^2) where x > 2: x)'],
     // a where whose condition is an if, then another generator
-    ['sum(1 for i in 1..n where if i > 2 then true else false, j in 1..i)', 'sum(i in 1..n where if i > 2 then true else false, j in 1..i: 1)'],
+    [
+      'sum(1 for i in 1..n where if i > 2 then true else false, j in 1..i)',
+      'sum(i in 1..n where if i > 2 then true else false, j in 1..i: 1)',
+    ],
   ];
   test.each(same)('%s == %s', (a, b) => {
     expect(stripPositions(parse(a))).toEqual(stripPositions(parse(b)));
@@ -197,21 +208,33 @@ const exprArb: fc.Arbitrary<Expr> = fc.letrec<{ e: Expr }>((tie) => ({
     ),
     fc.array(tie('e'), { maxLength: 3 }).map((items) => ({ type: 'list', items, ...P }) as Expr),
     fc.tuple(tie('e'), tie('e')).map(([lo, hi]) => ({ type: 'range', lo, hi, ...P }) as Expr),
-    fc.tuple(fc.constantFrom('+', '-', '*', '/', '^', '==', '!=', '<', '<=', '>', '>=', 'and', 'or', 'implies', 'iff'), tie('e'), tie('e'))
+    fc
+      .tuple(fc.constantFrom('+', '-', '*', '/', '^', '==', '!=', '<', '<=', '>', '>=', 'and', 'or', 'implies', 'iff'), tie('e'), tie('e'))
       .map(([op, left, right]) => ({ type: 'binary', op, left, right, ...P }) as Expr),
     fc.tuple(fc.constantFrom('-', 'not'), tie('e')).map(([op, operand]) => ({ type: 'unary', op, operand, ...P }) as Expr),
     fc.tuple(tie('e'), tie('e'), tie('e')).map(([cond, then, els]) => ({ type: 'if', cond, then, else: els, ...P }) as Expr),
     fc.tuple(fc.uniqueArray(ident, { maxLength: 3 }), tie('e')).map(([params, body]) => ({ type: 'lambda', params, body, ...P }) as Expr),
     fc.tuple(ident, fc.array(tie('e'), { maxLength: 3 })).map(([callee, args]) => ({ type: 'call', callee, args, ...P }) as Expr),
     fc.tuple(tie('e'), tie('e')).map(([target, index]) => ({ type: 'index', target, index, ...P }) as Expr),
-    fc.tuple(
-      fc.constantFrom(...REDUCERS),
-      fc.array(fc.record({ name: ident, source: tie('e'), where: fc.option(tie('e'), { nil: undefined }) }), { minLength: 1, maxLength: 2 }),
-      fc.option(tie('e'), { nil: undefined }),
-    ).map(([reducer, gens, body]) => ({
-      type: 'comprehension', reducer, body, ...P,
-      generators: gens.map((g) => ({ ...g, ...P })),
-    }) as Expr),
+    fc
+      .tuple(
+        fc.constantFrom(...REDUCERS),
+        fc.array(fc.record({ name: ident, source: tie('e'), where: fc.option(tie('e'), { nil: undefined }) }), {
+          minLength: 1,
+          maxLength: 2,
+        }),
+        fc.option(tie('e'), { nil: undefined }),
+      )
+      .map(
+        ([reducer, gens, body]) =>
+          ({
+            type: 'comprehension',
+            reducer,
+            body,
+            ...P,
+            generators: gens.map((g) => ({ ...g, ...P })),
+          }) as Expr,
+      ),
   ),
 })).e;
 

@@ -55,7 +55,8 @@ describe('cycles', () => {
   it('order: the least power that is the identity (brute force), n <= 7', () => {
     for (let n = 1; n <= 7; n++)
       for (const a of allPerms(n)) {
-        let k = 1, p = a;
+        let k = 1,
+          p = a;
         const id = a.map((_, i) => i + 1);
         while (p.join() !== id.join()) {
           p = compose(p, a);
@@ -65,7 +66,7 @@ describe('cycles', () => {
       }
   });
 
-  it('order <= 2 exactly on involutions (OEIS A000085); the largest order is Landau\'s g(n) (OEIS A000793)', () => {
+  it("order <= 2 exactly on involutions (OEIS A000085); the largest order is Landau's g(n) (OEIS A000793)", () => {
     const A000085 = [1, 1, 2, 4, 10, 26, 76, 232, 764];
     const A000793 = [1, 1, 2, 3, 4, 6, 6, 12, 15];
     for (let n = 0; n <= 8; n++) {
@@ -95,7 +96,7 @@ describe('symmetries and records', () => {
     for (let n = 0; n <= 6; n++)
       for (const a of allPerms(n)) {
         const c = (call('complement', P(a)) as Permutation).a;
-        expect(invOf(c)).toBe(((n * (n - 1)) / 2) - invOf(a) + 0);
+        expect(invOf(c)).toBe((n * (n - 1)) / 2 - invOf(a) + 0);
         const rc = (call('reverseComplement', P(a)) as Permutation).a;
         expect(rc).toEqual(c.slice().reverse());
         expect((call('reverseComplement', P(rc)) as Permutation).a).toEqual(a);
@@ -163,7 +164,8 @@ describe('inv, maj and des on words', () => {
   }
   /** q-multinomial [n; m1, m2, ...]_q as a product of Gaussian binomials (Andrews, The Theory of Partitions, (3.3.2)). */
   function qMultinomial(ms: number[]): number[] {
-    let c = [1], n = 0;
+    let c = [1],
+      n = 0;
     for (const m of ms) {
       n += m;
       const b = qbinomialCoefficients(n, m).map(Number);
@@ -174,7 +176,13 @@ describe('inv, maj and des on words', () => {
     return c;
   }
   it('inv and maj both have the q-multinomial distribution on the rearrangements of a word (MacMahon)', () => {
-    for (const ms of [[2, 2], [2, 1, 2], [3, 1, 2], [1, 1, 1, 1], [2, 2, 2]]) {
+    for (const ms of [
+      [2, 2],
+      [2, 1, 2],
+      [3, 1, 2],
+      [1, 1, 1, 1],
+      [2, 2, 2],
+    ]) {
       const letters = ms.flatMap((m, i) => new Array(m).fill(i + 1));
       const ws = rearrangements(letters);
       const want = qMultinomial(ms);

@@ -121,13 +121,17 @@ describe('reducedWord', () => {
 describe('permMatrix', () => {
   it('has a 1 at row i, column w[i]; its determinant is sign(w); permMatrix(u*v) = permMatrix(v)*permMatrix(u)', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 7 }).chain((n) => fc.tuple(permArb(n, n), permArb(n, n))), ([u, v]) => {
-        const M = (a: number[]) => call('permMatrix', perm(a)) as Matrix;
-        const m = M(u), n = u.length;
-        for (let i = 1; i <= n; i++) for (let j = 1; j <= n; j++) expect(m.at(i, j)).toBe(j === u[i - 1] ? 1 : 0);
-        expect(determinant(m)).toBe(call('sign', perm(u)));
-        expect(M(compose(u, v)).equals(matrixProduct(M(v), M(u)))).toBe(true);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 7 }).chain((n) => fc.tuple(permArb(n, n), permArb(n, n))),
+        ([u, v]) => {
+          const M = (a: number[]) => call('permMatrix', perm(a)) as Matrix;
+          const m = M(u),
+            n = u.length;
+          for (let i = 1; i <= n; i++) for (let j = 1; j <= n; j++) expect(m.at(i, j)).toBe(j === u[i - 1] ? 1 : 0);
+          expect(determinant(m)).toBe(call('sign', perm(u)));
+          expect(M(compose(u, v)).equals(matrixProduct(M(v), M(u)))).toBe(true);
+        },
+      ),
       { numRuns: 60 },
     );
   });

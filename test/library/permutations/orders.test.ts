@@ -14,7 +14,8 @@ const inv = (a: number[]) => {
 /** Tableau criterion (Björner–Brenti ch. 2): for every k, sorted u[1..k] <= sorted v[1..k] entrywise. */
 function bruhatTableau(u: number[], v: number[]): boolean {
   for (let k = 1; k <= u.length; k++) {
-    const a = u.slice(0, k).sort((x, y) => x - y), b = v.slice(0, k).sort((x, y) => x - y);
+    const a = u.slice(0, k).sort((x, y) => x - y),
+      b = v.slice(0, k).sort((x, y) => x - y);
     if (a.some((x, i) => x > b[i])) return false;
   }
   return true;
@@ -45,7 +46,8 @@ function bruhatBelowBySubwords(v: number[]): Set<string> {
   const word = call('reducedWord', perm(v)) as number[];
   const out = new Set<string>();
   for (let mask = 0; mask < 1 << word.length; mask++) {
-    let p = Array.from({ length: n }, (_, i) => i + 1), len = 0;
+    let p = Array.from({ length: n }, (_, i) => i + 1),
+      len = 0;
     word.forEach((i, k) => {
       if (mask & (1 << k)) {
         p = compose(p, (call('simple', i, n) as unknown as { a: number[] }).a);
@@ -82,7 +84,8 @@ describe('bruhatLeq', () => {
   });
   it('is graded by inv: covering pairs differ by one inversion; S_4 has 24 elements between e and w0', () => {
     const S = allPerms(4);
-    const w0 = perm([4, 3, 2, 1]), e = perm([1, 2, 3, 4]);
+    const w0 = perm([4, 3, 2, 1]),
+      e = perm([1, 2, 3, 4]);
     expect(S.filter((a) => call('bruhatLeq', e, perm(a)) && call('bruhatLeq', perm(a), w0)).length).toBe(24);
     for (const u of S) for (const v of S) if (call('bruhatLeq', perm(u), perm(v))) expect(inv(u) <= inv(v)).toBe(true);
   });

@@ -8,7 +8,9 @@ import { allPerms, call, perm, standardise } from './helpers.js';
 
 /** Occurrences by brute force: every set of positions, standardised (a second algorithm). */
 function countBrute(a: number[], p: number[]): number {
-  const n = a.length, k = p.length, target = p.join();
+  const n = a.length,
+    k = p.length,
+    target = p.join();
   let c = 0;
   const pick = (start: number, chosen: number[]) => {
     if (chosen.length === k) {
@@ -29,19 +31,26 @@ describe('contains, avoids, patternCount', () => {
       for (const a of allPerms(n))
         for (const p of patternsUpTo4) {
           const c = countBrute(a, p);
-          const w = perm(a), pat = perm(p);
+          const w = perm(a),
+            pat = perm(p);
           expect(call('patternCount', w, pat)).toBe(c);
           expect(call('contains', w, pat)).toBe(c > 0);
           expect(call('avoids', w, pat)).toBe(c === 0);
         }
   });
   it('patterns of length 5 on S_7 against brute force (a sample of patterns)', () => {
-    for (const p of [[1, 3, 5, 2, 4], [5, 4, 3, 2, 1], [2, 4, 1, 5, 3], [1, 2, 3, 4, 5]])
+    for (const p of [
+      [1, 3, 5, 2, 4],
+      [5, 4, 3, 2, 1],
+      [2, 4, 1, 5, 3],
+      [1, 2, 3, 4, 5],
+    ])
       for (const a of allPerms(7).filter((_, i) => i % 7 === 0)) expect(call('patternCount', perm(a), p)).toBe(countBrute(a, p));
   });
   it('every pattern of length 3 is avoided by Catalan many permutations (OEIS A000108), n = 1..8', () => {
     const a000108 = [1, 2, 5, 14, 42, 132, 429, 1430];
-    for (const p of allPerms(3)) for (let n = 1; n <= 8; n++) expect(allPerms(n).filter((a) => call('avoids', perm(a), perm(p))).length).toBe(a000108[n - 1]);
+    for (const p of allPerms(3))
+      for (let n = 1; n <= 8; n++) expect(allPerms(n).filter((a) => call('avoids', perm(a), perm(p))).length).toBe(a000108[n - 1]);
   });
   it('1342-avoiders number OEIS A022558, 1234-avoiders OEIS A005802 (n = 1..8)', () => {
     const a022558 = [1, 2, 6, 23, 103, 512, 2740, 15485];

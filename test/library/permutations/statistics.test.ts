@@ -52,21 +52,34 @@ describe('inv and maj', () => {
   });
   it('inv agrees with the definition, also on long permutations (Fenwick tree path)', () => {
     for (const a of allPerms(6)) expect(call('inv', perm(a))).toBe(invBrute(a));
-    fc.assert(fc.property(permArb(0, 400), (a) => invFast(a) === invBrute(a)), { numRuns: 200 });
+    fc.assert(
+      fc.property(permArb(0, 400), (a) => invFast(a) === invBrute(a)),
+      { numRuns: 200 },
+    );
   });
   it('maj is the sum of the descent positions', () => {
-    fc.assert(fc.property(permArb(0, 30), (a) => {
-      const d = call('descents', perm(a)) as number[];
-      expect(call('maj', perm(a))).toBe(d.reduce((s, x) => s + x, 0));
-      expect(call('des', perm(a))).toBe(d.length);
-      for (const i of d) expect(a[i - 1] > a[i]).toBe(true);
-    }));
+    fc.assert(
+      fc.property(permArb(0, 30), (a) => {
+        const d = call('descents', perm(a)) as number[];
+        expect(call('maj', perm(a))).toBe(d.reduce((s, x) => s + x, 0));
+        expect(call('des', perm(a))).toBe(d.length);
+        for (const i of d) expect(a[i - 1] > a[i]).toBe(true);
+      }),
+    );
   });
 });
 
 describe('des and exc', () => {
   // OEIS A008292, Eulerian numbers: row n gives the number of permutations with 0, 1, ..., n-1 descents.
-  const a008292 = [[1], [1, 1], [1, 4, 1], [1, 11, 11, 1], [1, 26, 66, 26, 1], [1, 57, 302, 302, 57, 1], [1, 120, 1191, 2416, 1191, 120, 1]];
+  const a008292 = [
+    [1],
+    [1, 1],
+    [1, 4, 1],
+    [1, 11, 11, 1],
+    [1, 26, 66, 26, 1],
+    [1, 57, 302, 302, 57, 1],
+    [1, 120, 1191, 2416, 1191, 120, 1],
+  ];
   it('des and exc are distributed by the Eulerian numbers (OEIS A008292) on S_1..S_7', () => {
     a008292.forEach((row, i) => {
       const S = allPerms(i + 1);
@@ -109,7 +122,16 @@ describe('fixed points, cycles, cycle type, sign', () => {
     });
   });
   it('cycles is distributed by the unsigned Stirling numbers of the first kind (OEIS A132393)', () => {
-    const a132393 = [[1], [0, 1], [0, 1, 1], [0, 2, 3, 1], [0, 6, 11, 6, 1], [0, 24, 50, 35, 10, 1], [0, 120, 274, 225, 85, 15, 1], [0, 720, 1764, 1624, 735, 175, 21, 1]];
+    const a132393 = [
+      [1],
+      [0, 1],
+      [0, 1, 1],
+      [0, 2, 3, 1],
+      [0, 6, 11, 6, 1],
+      [0, 24, 50, 35, 10, 1],
+      [0, 120, 274, 225, 85, 15, 1],
+      [0, 720, 1764, 1624, 735, 175, 21, 1],
+    ];
     a132393.forEach((row, n) => expect(distribution(allPerms(n), stat('cycles'))).toEqual(row));
   });
   it('cycle type lambda occurs n!/z_lambda times (Stanley, EC1, Prop. 1.3.2), on S_1..S_7', () => {
@@ -141,11 +163,14 @@ describe('fixed points, cycles, cycle type, sign', () => {
   });
   it('sign is a homomorphism to {1, -1} and equals (-1)^inv (fast-check)', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 0, max: 40 }).chain((n) => fc.tuple(permArb(n, n), permArb(n, n))), ([u, v]) => {
-        const s = (a: number[]) => call('sign', perm(a)) as number;
-        expect(s(compose(u, v))).toBe(s(u) * s(v));
-        expect(s(u)).toBe(invBrute(u) % 2 === 0 ? 1 : -1);
-      }),
+      fc.property(
+        fc.integer({ min: 0, max: 40 }).chain((n) => fc.tuple(permArb(n, n), permArb(n, n))),
+        ([u, v]) => {
+          const s = (a: number[]) => call('sign', perm(a)) as number;
+          expect(s(compose(u, v))).toBe(s(u) * s(v));
+          expect(s(u)).toBe(invBrute(u) % 2 === 0 ? 1 : -1);
+        },
+      ),
     );
   });
 });
@@ -183,7 +208,8 @@ describe('lis and lds', () => {
     for (let n = 1; n <= 7; n++)
       for (const a of allPerms(n)) {
         const shape = rsShape(a);
-        const l = call('lis', perm(a)), d = call('lds', perm(a));
+        const l = call('lis', perm(a)),
+          d = call('lds', perm(a));
         expect(l).toBe(lisQuadratic(a));
         expect(l).toBe(shape[0]);
         expect(d).toBe(shape.length);
@@ -192,7 +218,8 @@ describe('lis and lds', () => {
   it('agree with both on random long permutations, and satisfy lis*lds >= n (Erdős–Szekeres)', () => {
     fc.assert(
       fc.property(permArb(0, 300), (a) => {
-        const l = call('lis', perm(a)) as number, d = call('lds', perm(a)) as number;
+        const l = call('lis', perm(a)) as number,
+          d = call('lds', perm(a)) as number;
         const shape = rsShape(a);
         expect(l).toBe(lisQuadratic(a));
         expect(l).toBe(shape[0] ?? 0);

@@ -23,14 +23,26 @@ function file(over: Partial<CounterexampleFile> = {}): CounterexampleFile {
     hash: H1,
     statement: 'The major index never exceeds the number of inversions.',
     expect: 'fails',
-    found: { phase: 'exhaustive', size: { n: 3 }, seed: null, shrinkSteps: 0, shrunkFrom: null, failuresAtSize: 1, at: '2025-01-01T00:00:00Z' },
+    found: {
+      phase: 'exhaustive',
+      size: { n: 3 },
+      seed: null,
+      shrinkSteps: 0,
+      shrunkFrom: null,
+      failuresAtSize: 1,
+      at: '2025-01-01T00:00:00Z',
+    },
     bindings: { n: 3, w: { permutation: [1, 3, 2] }, r: { word: [1, 2, 1] } },
     values: { a: 2, b: 1, p: 'q^2 + 1/2*x[1]' },
     sides: [2, 1],
     plugins: [],
     replay: 'hunch replay counterexamples/maj-bounded-by-inv.yaml',
     defines: [],
-    document: { conjecture: 'maj-bounded-by-inv', for: { n: '1..4', w: 'permutations(n)', r: 'reducedWords(longest(3))' }, claim: 'maj(w) <= inv(w)' },
+    document: {
+      conjecture: 'maj-bounded-by-inv',
+      for: { n: '1..4', w: 'permutations(n)', r: 'reducedWords(longest(3))' },
+      claim: 'maj(w) <= inv(w)',
+    },
     ...over,
   };
 }
@@ -39,7 +51,11 @@ const refutes = { verdict: 'refutes', missingPlugins: [] } as unknown as ReplayR
 const holds = { verdict: 'holds', missingPlugins: [] } as unknown as ReplayResult;
 
 function notebook(): NotebookModel {
-  const records = [rec({ id: 'c1', size: { n: 1 } }), rec({ id: 'c1', size: { n: 2 } }), rec({ id: 'c1', phase: 'sample', size: { n: 9 }, cases: 100, seed: '7' })];
+  const records = [
+    rec({ id: 'c1', size: { n: 1 } }),
+    rec({ id: 'c1', size: { n: 2 } }),
+    rec({ id: 'c1', phase: 'sample', size: { n: 9 }, cases: 100, seed: '7' }),
+  ];
   const status = computeStatus([{ id: 'c1', file: 'conjectures/a.yaml', expect: 'holds', hash: H1 }], records);
   return {
     title: 'Notebook of the working group',

@@ -16,11 +16,18 @@ import { checkedNotebook, onPath, type CheckedNotebook } from '../checked-notebo
 import { exampleValue, KIND_EXAMPLES } from './kinds.js';
 
 const haveTex = onPath('pdflatex') && onPath('pdftoppm');
-if (!haveTex) console.log('SKIPPED: LaTeX compile tests: pdflatex or pdftoppm is not installed (Debian: texlive-latex-base texlive-pictures poppler-utils)');
+if (!haveTex)
+  console.log(
+    'SKIPPED: LaTeX compile tests: pdflatex or pdftoppm is not installed (Debian: texlive-latex-base texlive-pictures poppler-utils)',
+  );
 
 /** Compile a .tex file in its folder; returns the log's tail when it fails. */
 function pdflatex(dir: string, file: string): { ok: boolean; log: string } {
-  const r = spawnSync('pdflatex', ['-interaction=nonstopmode', '-halt-on-error', '-no-shell-escape', file], { cwd: dir, encoding: 'utf8', timeout: 120_000 });
+  const r = spawnSync('pdflatex', ['-interaction=nonstopmode', '-halt-on-error', '-no-shell-escape', file], {
+    cwd: dir,
+    encoding: 'utf8',
+    timeout: 120_000,
+  });
   return { ok: r.status === 0, log: (r.stdout ?? '').slice(-3000) };
 }
 
@@ -34,7 +41,10 @@ function darkestPerPage(dir: string, pdf: string): number[] {
     .map((f) => {
       const bytes = readFileSync(join(dir, f));
       // P5 <w> <h> <max>\n then one byte per pixel
-      const header = bytes.subarray(0, 64).toString('latin1').match(/^P5\s+(\d+)\s+(\d+)\s+(\d+)\s/);
+      const header = bytes
+        .subarray(0, 64)
+        .toString('latin1')
+        .match(/^P5\s+(\d+)\s+(\d+)\s+(\d+)\s/);
       if (!header) throw new Error(`${f} is not a binary PGM`);
       const pixels = bytes.subarray(header[0].length);
       let min = 255;

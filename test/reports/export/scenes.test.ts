@@ -26,7 +26,8 @@ describe('scenes of every object kind', () => {
 
     it(`${k.name}: every item lies inside the scene's box`, () => {
       const s = sceneOf(exampleValue(k.text), k.hint)!;
-      const inside = (x: number, y: number) => x >= s.x0 - 1e-9 && x <= s.x0 + s.width + 1e-9 && y >= s.y0 - 1e-9 && y <= s.y0 + s.height + 1e-9;
+      const inside = (x: number, y: number) =>
+        x >= s.x0 - 1e-9 && x <= s.x0 + s.width + 1e-9 && y >= s.y0 - 1e-9 && y <= s.y0 + s.height + 1e-9;
       for (const i of s.items) {
         if (i.t === 'line') expect(inside(i.x1, i.y1) && inside(i.x2, i.y2)).toBe(true);
         if (i.t === 'rect') expect(inside(i.x, i.y) && inside(i.x + i.w, i.y + i.h)).toBe(true);
@@ -58,6 +59,8 @@ describe('LaTeX text and mathematics', () => {
     expect(exprToLatex('q^-1 + 2*t')).toBe('q^{-1} + 2 t');
     expect(exprToLatex('1234567')).toBe('1\\,234\\,567');
     expect(exprToLatex('2*schurSym([2, 1]) + q*schurSym([3])')).toBe('2 s_{(2,1)} + q s_{(3)}');
-    expect(exprToLatex('ideal([x[1]^2 - x[2], x[1]*x[2]], 32003)')).toBe('\\left\\langle [x_{1}^{2} - x_{2}, x_{1} x_{2}] \\right\\rangle_{\\mathbb{F}_{32003}}'.replace('[', '').replace(']', ''));
+    expect(exprToLatex('ideal([x[1]^2 - x[2], x[1]*x[2]], 32003)')).toBe(
+      '\\left\\langle [x_{1}^{2} - x_{2}, x_{1} x_{2}] \\right\\rangle_{\\mathbb{F}_{32003}}'.replace('[', '').replace(']', ''),
+    );
   });
 });

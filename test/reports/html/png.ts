@@ -10,14 +10,22 @@ export interface Image {
 }
 
 function paeth(a: number, b: number, c: number): number {
-  const p = a + b - c, pa = Math.abs(p - a), pb = Math.abs(p - b), pc = Math.abs(p - c);
+  const p = a + b - c,
+    pa = Math.abs(p - a),
+    pb = Math.abs(p - b),
+    pc = Math.abs(p - c);
   return pa <= pb && pa <= pc ? a : pb <= pc ? b : c;
 }
 
 export function readPng(buf: Uint8Array): Image {
   const data = Buffer.from(buf);
   if (data.readUInt32BE(0) !== 0x89504e47) throw new Error('not a PNG');
-  let off = 8, width = 0, height = 0, depth = 0, type = 0, interlace = 0;
+  let off = 8,
+    width = 0,
+    height = 0,
+    depth = 0,
+    type = 0,
+    interlace = 0;
   const idat: Buffer[] = [];
   while (off < data.length) {
     const len = data.readUInt32BE(off);
@@ -34,7 +42,8 @@ export function readPng(buf: Uint8Array): Image {
     off += 12 + len;
   }
   const channels = type === 0 ? 1 : type === 2 ? 3 : type === 6 ? 4 : type === 4 ? 2 : 0;
-  if (depth !== 8 || channels === 0 || interlace !== 0) throw new Error(`unsupported PNG (depth ${depth}, colour type ${type}, interlace ${interlace})`);
+  if (depth !== 8 || channels === 0 || interlace !== 0)
+    throw new Error(`unsupported PNG (depth ${depth}, colour type ${type}, interlace ${interlace})`);
   const raw = inflateSync(Buffer.concat(idat));
   const stride = width * channels;
   const px = new Uint8Array(height * stride);
@@ -46,7 +55,8 @@ export function readPng(buf: Uint8Array): Image {
       const b = y > 0 ? px[(y - 1) * stride + x] : 0;
       const c = x >= channels && y > 0 ? px[(y - 1) * stride + x - channels] : 0;
       const v = line[x];
-      px[y * stride + x] = (filter === 0 ? v : filter === 1 ? v + a : filter === 2 ? v + b : filter === 3 ? v + ((a + b) >> 1) : v + paeth(a, b, c)) & 0xff;
+      px[y * stride + x] =
+        (filter === 0 ? v : filter === 1 ? v + a : filter === 2 ? v + b : filter === 3 ? v + ((a + b) >> 1) : v + paeth(a, b, c)) & 0xff;
     }
   }
   const rgba = new Uint8Array(width * height * 4);

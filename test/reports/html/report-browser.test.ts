@@ -18,7 +18,16 @@ const haveBrowser = existsSync(CHROMIUM);
 if (!haveBrowser) console.log(`SKIPPED: report page browser test: no Chromium at ${CHROMIUM} (Debian package: chromium)`);
 
 /** Flags for a headless browser on a machine without network: nothing in the background. */
-const BROWSER_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage'];
+const BROWSER_ARGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--disable-dev-shm-usage',
+];
 
 /** Whether a counterexample file's case holds an object with a picture (a one-key map). */
 function hasObjectBinding(file: string): boolean {

@@ -19,15 +19,48 @@ import { makeRat } from '../../../src/numbers/rational.js';
 import type { Value } from '../../../src/values/value.js';
 
 export const EXAMPLES: Record<string, readonly Value[]> = {
-  permutation: [Permutation.from([3, 1, 4, 2]), Permutation.from([1]), Permutation.from([]), Permutation.from([10, 1, 2, 3, 4, 5, 6, 7, 8, 9])],
+  permutation: [
+    Permutation.from([3, 1, 4, 2]),
+    Permutation.from([1]),
+    Permutation.from([]),
+    Permutation.from([10, 1, 2, 3, 4, 5, 6, 7, 8, 9]),
+  ],
   partition: [Partition.from([4, 2, 2, 1]), Partition.from([1]), Partition.from([]), Partition.from([18, 1])],
-  tableau: [Tableau.from([[1, 2, 5, 11], [3, 4], [6, 12]]), Tableau.from([[1, 1, 2], [2, 3]]), Tableau.from([])],
+  tableau: [
+    Tableau.from([
+      [1, 2, 5, 11],
+      [3, 4],
+      [6, 12],
+    ]),
+    Tableau.from([
+      [1, 1, 2],
+      [2, 3],
+    ]),
+    Tableau.from([]),
+  ],
   composition: [Composition.from([2, 3, 1]), Composition.from([1, 1]), Composition.from([])],
   matching: [
-    Matching.fromArcs([[1, 3], [2, 4]]),
-    Matching.fromArcs([[1, 2], [3, 4]]),
-    Matching.fromArcs([[1, 6], [2, 4], [3, 5]]),
-    Matching.fromArcs([[1, 4], [2, 8], [3, 5], [6, 10], [7, 9], [11, 12]]),
+    Matching.fromArcs([
+      [1, 3],
+      [2, 4],
+    ]),
+    Matching.fromArcs([
+      [1, 2],
+      [3, 4],
+    ]),
+    Matching.fromArcs([
+      [1, 6],
+      [2, 4],
+      [3, 5],
+    ]),
+    Matching.fromArcs([
+      [1, 4],
+      [2, 8],
+      [3, 5],
+      [6, 10],
+      [7, 9],
+      [11, 12],
+    ]),
     Matching.fromArcs([]),
   ],
   dyck: [DyckPath.from('UUDUDDUD'), DyckPath.from('UD'), DyckPath.from('')],
@@ -37,16 +70,45 @@ export const EXAMPLES: Record<string, readonly Value[]> = {
   setPartition: [SetPartition.fromBlocks([[1, 3], [2], [4, 5]]), SetPartition.fromBlocks([[1, 2, 3]]), SetPartition.fromBlocks([])],
   word: [Word.from([2, 1, 3, 1]), Word.from([10, 2]), Word.from([])],
   subset: [Subset.from([1, 3, 5]), Subset.from([2, 11]), Subset.from([])],
-  asm: [Asm.from([[0, 1, 0], [1, -1, 1], [0, 1, 0]]), Asm.from([[1]]), Asm.from([])],
-  pipeDream: [PipeDream.from([[1, 2]]), PipeDream.from([[2, 1]]), PipeDream.from([[1, 1], [2, 2], [1, 4]]), PipeDream.from([])],
+  asm: [
+    Asm.from([
+      [0, 1, 0],
+      [1, -1, 1],
+      [0, 1, 0],
+    ]),
+    Asm.from([[1]]),
+    Asm.from([]),
+  ],
+  pipeDream: [
+    PipeDream.from([[1, 2]]),
+    PipeDream.from([[2, 1]]),
+    PipeDream.from([
+      [1, 1],
+      [2, 2],
+      [1, 4],
+    ]),
+    PipeDream.from([]),
+  ],
   matrix: [
-    Matrix.from([[1, makeRat(1n, 2n)], [-3, 10]]),
-    Matrix.from([[0, 1, 0], [0, 0, 0]]), // a partial permutation
-    Matrix.from([[1, -1], [0, 1]]),
+    Matrix.from([
+      [1, makeRat(1n, 2n)],
+      [-3, 10],
+    ]),
+    Matrix.from([
+      [0, 1, 0],
+      [0, 0, 0],
+    ]), // a partial permutation
+    Matrix.from([
+      [1, -1],
+      [0, 1],
+    ]),
     Matrix.from([[7]]),
     Matrix.from([]),
   ],
-  list: [[Tableau.from([[1, 2], [3]]), Tableau.from([[1, 3], [2]])], [Permutation.from([2, 1]), Partition.from([2])]],
+  list: [
+    [Tableau.from([[1, 2], [3]]), Tableau.from([[1, 3], [2]])],
+    [Permutation.from([2, 1]), Partition.from([2])],
+  ],
 };
 
 export function range(k: number): number[] {

@@ -37,12 +37,15 @@ describe('every picture', () => {
     for (const v of allExamples) expect(drawValue(v, { unicode: false })).toMatch(/^[\x20-\x7e\n]*$/);
     // Random permutations and matchings too: every glyph of those pictures gets exercised.
     fc.assert(
-      fc.property(fc.integer({ min: 0, max: 14 }).chain((k) => fc.shuffledSubarray(range(k), { minLength: k, maxLength: k })), (order) => {
-        const w = Permutation.from(order);
-        expect(drawValue(w, { unicode: false })).toMatch(/^[\x20-\x7e\n]*$/);
-        const m = matchingFromOrder(order);
-        expect(drawValue(m, { unicode: false })).toMatch(/^[\x20-\x7e\n]*$/);
-      }),
+      fc.property(
+        fc.integer({ min: 0, max: 14 }).chain((k) => fc.shuffledSubarray(range(k), { minLength: k, maxLength: k })),
+        (order) => {
+          const w = Permutation.from(order);
+          expect(drawValue(w, { unicode: false })).toMatch(/^[\x20-\x7e\n]*$/);
+          const m = matchingFromOrder(order);
+          expect(drawValue(m, { unicode: false })).toMatch(/^[\x20-\x7e\n]*$/);
+        },
+      ),
     );
   });
 });

@@ -25,25 +25,37 @@ describe('arc diagrams of matchings', () => {
 
   it('draw every arc with its two corners above its own two points, joined to them by legs', () => {
     fc.assert(
-      fc.property(randomMatching.filter((m) => m.n > 0), (m) => {
-        const lines = drawMatching(m.p, UNICODE).split('\n');
-        expect(count(lines.join(''), '╭')).toBe(m.n);
-        expect(count(lines.join(''), '╮')).toBe(m.n);
-        // Going up from a point's label: its leg (crossing bars on the way), then its corner.
-        const d = String(2 * m.n).length;
-        for (let i = 1; i <= 2 * m.n; i++) {
-          const col = (i - 1) * (d + 1) + d - 1;
-          expect([...lines[lines.length - 1]].slice(col - d + 1, col + 1).join('').trim()).toBe(String(i));
-          let r = lines.length - 2;
-          while (r >= 0 && ['│', '┼'].includes([...lines[r]][col])) r--;
-          expect([...lines[r]][col]).toBe(i < m.partner(i) ? '╭' : '╮');
-        }
-      }),
+      fc.property(
+        randomMatching.filter((m) => m.n > 0),
+        (m) => {
+          const lines = drawMatching(m.p, UNICODE).split('\n');
+          expect(count(lines.join(''), '╭')).toBe(m.n);
+          expect(count(lines.join(''), '╮')).toBe(m.n);
+          // Going up from a point's label: its leg (crossing bars on the way), then its corner.
+          const d = String(2 * m.n).length;
+          for (let i = 1; i <= 2 * m.n; i++) {
+            const col = (i - 1) * (d + 1) + d - 1;
+            expect(
+              [...lines[lines.length - 1]]
+                .slice(col - d + 1, col + 1)
+                .join('')
+                .trim(),
+            ).toBe(String(i));
+            let r = lines.length - 2;
+            while (r >= 0 && ['│', '┼'].includes([...lines[r]][col])) r--;
+            expect([...lines[r]][col]).toBe(i < m.partner(i) ? '╭' : '╮');
+          }
+        },
+      ),
     );
   });
 
   it('puts an arc above every arc nested in it and crossing arcs at different heights', () => {
-    const arcs: [number, number][] = [[1, 6], [2, 4], [3, 5]];
+    const arcs: [number, number][] = [
+      [1, 6],
+      [2, 4],
+      [3, 5],
+    ];
     const h = arcHeights(arcs);
     expect(h[0]).toBeGreaterThan(Math.max(h[1], h[2]));
     expect(h[1]).not.toBe(h[2]);

@@ -67,12 +67,19 @@ describe('the worker pool', () => {
     writeFileSync(join(dir, 'fixtures.yaml'), FIXTURES);
     const whole = JSON.parse(runCli(['check', 'fixtures.yaml', '--no-ledger', '--json', '--workers', '2'], { cwd: dir }).stdout).results;
     const shards = [1, 2, 3, 4].map((i) => {
-      const r = runCli(['check', 'fixtures.yaml', '--shard', `${i}/4`, '--ledger', `shard-${i}.jsonl`, '--json', '--workers', '2'], { cwd: dir });
+      const r = runCli(['check', 'fixtures.yaml', '--shard', `${i}/4`, '--ledger', `shard-${i}.jsonl`, '--json', '--workers', '2'], {
+        cwd: dir,
+      });
       return JSON.parse(r.stdout).results;
     });
-    const maj = shards.map((s) => s[0].counterexample).filter(Boolean).map((c) => JSON.stringify(c.bindings));
+    const maj = shards
+      .map((s) => s[0].counterexample)
+      .filter(Boolean)
+      .map((c) => JSON.stringify(c.bindings));
     expect(maj).toContain(JSON.stringify(whole[0].counterexample.bindings));
-    const merged = runCli(['merge', 'shard-1.jsonl', 'shard-2.jsonl', 'shard-3.jsonl', 'shard-4.jsonl', '-o', 'hunch-ledger.jsonl'], { cwd: dir });
+    const merged = runCli(['merge', 'shard-1.jsonl', 'shard-2.jsonl', 'shard-3.jsonl', 'shard-4.jsonl', '-o', 'hunch-ledger.jsonl'], {
+      cwd: dir,
+    });
     expect(merged.code, merged.stderr).toBe(0);
     const status = JSON.parse(runCli(['status', 'fixtures.yaml', '--json'], { cwd: dir }).stdout);
     const holds = status.conjectures.find((c: { id: string }) => c.id === 'where-and-sample');
@@ -90,7 +97,10 @@ describe('the worker pool', () => {
     const first = runCli(['check', 'big.yaml', '--budget', '400ms', '--json', '--workers', '2'], { cwd: dir });
     const r1 = JSON.parse(first.stdout).results[0];
     expect(r1.outcome).toBe('incomplete');
-    const ledger = readFileSync(join(dir, 'hunch-ledger.jsonl'), 'utf8').trim().split('\n').map((l) => JSON.parse(l));
+    const ledger = readFileSync(join(dir, 'hunch-ledger.jsonl'), 'utf8')
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l));
     // Where the budget ends depends on the machine's speed and load: look at the size it stopped in.
     const stoppedIn = r1.checked.find((p: { partial?: boolean }) => p.partial).size.n;
     const slices = ledger.filter((x) => x.size.n === stoppedIn && x.shard);

@@ -3,7 +3,13 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
-  chunkCount, chunkQuota, chunksOfShard, parseShardOption, sliceBounds, sliceCount, slicesOfShard,
+  chunkCount,
+  chunkQuota,
+  chunksOfShard,
+  parseShardOption,
+  sliceBounds,
+  sliceCount,
+  slicesOfShard,
 } from '../../../src/runner/work/slicing.js';
 
 describe('slices and shards', () => {
@@ -27,7 +33,9 @@ describe('slices and shards', () => {
       fc.property(fc.bigInt({ min: 0n, max: 10n ** 9n }), fc.integer({ min: 1, max: 40 }), fc.boolean(), (n, k, cheap) => {
         const s = sliceCount(n, k, cheap);
         expect(s % k).toBe(0);
-        const owned = Array.from({ length: k }, (_, i) => slicesOfShard(s, { index: i + 1, of: k })).flat().sort((a, b) => a - b);
+        const owned = Array.from({ length: k }, (_, i) => slicesOfShard(s, { index: i + 1, of: k }))
+          .flat()
+          .sort((a, b) => a - b);
         expect(owned).toEqual(Array.from({ length: s }, (_, j) => j));
         // A record "a/b" means the same cases whether b counted shards or slices.
         expect(sliceCount(n, s, cheap)).toBe(s);
