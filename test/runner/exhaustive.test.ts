@@ -282,12 +282,14 @@ describe('options', () => {
     expect(r.outcome).toBe('holds');
   });
 
-  it('a regression case is tried first and reported as such', async () => {
+  it('a regression case is tried first, reported as such, and shrunk when a simpler case still fails', async () => {
     const { decodeValue } = await import('../../src/values/decode.js');
     const r = check(maj, { regression: [4, decodeValue({ permutation: [2, 1, 4, 3] })] });
     expect(r.outcome).toBe('fails');
     expect(r.counterexample!.phase).toBe('regression');
-    expect(r.counterexample!.bindings).toEqual({ n: 4, w: perm([2, 1, 4, 3]) });
+    // 2143 (maj 4 > inv 2) shrinks to 132, the smallest case with maj > inv.
+    expect(r.counterexample!.bindings).toEqual({ n: 3, w: perm([1, 3, 2]) });
+    expect(r.counterexample!.shrinkSteps).toBeGreaterThan(0);
     expect(r.checked).toEqual([]); // nothing else had to run
   });
 
