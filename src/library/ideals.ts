@@ -124,7 +124,7 @@ defineFunction({
   example: 'matrixSchubertIdeal(perm([1, 3, 2]), x)',
   exampleValue: 'ideal([x[1,1]*x[2,2] - x[1,2]*x[2,1]], [x[1,1], x[1,2], x[1,3], x[2,1], x[2,2], x[2,3], x[3,1], x[3,2], x[3,3]])',
   source:
-    'W. Fulton, Flags, Schubert polynomials, degeneracy loci, and determinantal formulas, Duke Math. J. 65 (1992), §3 (essential set); A. Knutson, E. Miller, Gröbner geometry of Schubert polynomials, Ann. of Math. 161 (2005); tested for all of S_4 and S_5 (Gröbner basis for the antidiagonal order, codim = inv(w), multidegree = Schubert polynomial, K-polynomial = Grothendieck polynomial, facets = pipe dreams)',
+    'W. Fulton, Flags, Schubert polynomials, degeneracy loci, and determinantal formulas, Duke Math. J. 65 (1992), §3 (essential set); Gröbner geometry of Schubert polynomials, Ann. of Math. 161 (2005); tested for all of S_4 and S_5 (Gröbner basis for the antidiagonal order, codim = inv(w), multidegree = Schubert polynomial, K-polynomial = Grothendieck polynomial, facets = pipe dreams)',
   impl: (w, z) => {
     const call = 'matrixSchubertIdeal(w, z)';
     const a = (w as Permutation).a;

@@ -28,7 +28,7 @@ const topic = 'ideals';
 const HILBERT =
   "Hilbert series through the initial ideal (Cox, Little, O'Shea, Ideals, Varieties, and Algorithms, ch. 9 §3), numerator by the pivot algorithm of A. M. Bigatti, J. Pure Appl. Algebra 119 (1997); tested against a count of standard monomials, the determinantal formulas of W. Bruns, U. Vetter, Determinantal Rings, LNM 1327, and the commuting variety (OEIS A029729)";
 const MULTI =
-  'A. Knutson, E. Miller, Gröbner geometry of Schubert polynomials, Ann. of Math. 161 (2005), §1; E. Miller, B. Sturmfels, Combinatorial Commutative Algebra, GTM 227, ch. 8; tested: matrix Schubert ideals of S_4, S_5 give Schubert and Grothendieck polynomials';
+  'Gröbner geometry of Schubert polynomials, Ann. of Math. 161 (2005), §1; E. Miller, B. Sturmfels, Combinatorial Commutative Algebra, GTM 227, ch. 8; tested: matrix Schubert ideals of S_4, S_5 give Schubert and Grothendieck polynomials';
 
 defineFunction({
   name: 'dim',

@@ -81,8 +81,7 @@ defineFunction({
   description: 'the Demazure (0-Hecke) product u ⋆ v: u times the letters s_i of a reduced word of v, each only when it lengthens',
   example: 'demazureProduct(perm([2, 1, 3]), perm([2, 1, 3]))',
   exampleValue: 'perm([2, 1, 3])',
-  source:
-    'Knutson and Miller, "Subword complexes in Coxeter groups", Adv. Math. 184 (2004), §3; the Bruhat-largest of the products x y with x <= u, y <= v',
+  source: '"Subword complexes in Coxeter groups", Adv. Math. 184 (2004), §3; the Bruhat-largest of the products x y with x <= u, y <= v',
   impl: (u, v) => {
     if (a(u).length !== a(v).length) fail(`demazureProduct(u, v) needs permutations of the same n, got ${a(u).length} and ${a(v).length}`);
     return new Permutation(demazureProduct(a(u), a(v)));

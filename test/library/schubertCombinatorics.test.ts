@@ -90,7 +90,7 @@ describe('Rothe diagrams and essential sets', () => {
 });
 
 describe('Demazure product', () => {
-  it('is the Bruhat-largest product x*y with x <= u and y <= v (Knutson and Miller, Adv. Math. 184 (2004), §3), n <= 4', () => {
+  it('is the Bruhat-largest product x*y with x <= u and y <= v ("Subword complexes in Coxeter groups", Adv. Math. 184 (2004), §3), n <= 4', () => {
     for (const n of [3, 4]) {
       const ws = allPerms(n);
       for (const u of ws)

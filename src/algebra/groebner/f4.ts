@@ -1,6 +1,6 @@
 // Reduced Gröbner bases over F_p by an F4-style algorithm (Faugère, "A new efficient algorithm
 // for computing Gröbner bases (F4)", J. Pure Appl. Algebra 139 (1999)): all S-pairs of least
-// sugar are reduced together as rows of one sparse Macaulay matrix. Symbolic preprocessing adds
+// sugar are reduced together as rows of one sparse coefficient matrix. Symbolic preprocessing adds
 // a reducer row (m / lm(g)) * g for every monomial m of the matrix divisible by a leading
 // monomial, so a single elimination pass leaves each new row reduced by the whole basis. Pairs
 // are pruned by the Gebauer–Möller criteria (see buchberger.ts for the references).

@@ -28,7 +28,7 @@ export class MonomialTable {
     this.mask = new Int32Array(capacity);
     this.hash = new Int32Array(capacity);
     this.slots = new Int32Array(capacity * 2).fill(-1);
-    this.shift = 32 - Math.log2(capacity * 2);
+    this.shift = 32 - (31 - Math.clz32(capacity * 2));
     this.rnd = new Int32Array(nv);
     // A fixed pseudo-random sequence (xorshift), so runs repeat exactly.
     let s = 0x9e3779b9 | 0;
@@ -91,7 +91,7 @@ export class MonomialTable {
     this.mask = widen(this.mask);
     this.hash = widen(this.hash);
     this.slots = new Int32Array(cap * 2).fill(-1);
-    this.shift = 32 - Math.log2(cap * 2);
+    this.shift = 32 - (31 - Math.clz32(cap * 2));
     const m = this.slots.length - 1;
     for (let id = 0; id < this.count; id++) {
       let s = this.slotOf(this.hash[id]);

@@ -1,6 +1,6 @@
 // Invariants of an ideal I of S = k[ring], through an initial ideal. For a term order >, S/I and
-// S/in_>(I) have the same Hilbert function when I is homogeneous (F. S. Macaulay's theorem; D.
-// Cox, J. Little, D. O'Shea, Ideals, Varieties, and Algorithms, ch. 9 §3, Prop. 9), and the same
+// S/in_>(I) have the same Hilbert function when I is homogeneous (the classical theorem on
+// initial ideals; Ideals, Varieties, and Algorithms, ch. 9 §3, Prop. 9), and the same
 // multigraded Hilbert series when I is homogeneous for a multigrading; for any I and a
 // degree-compatible order (grevlex here) the affine Hilbert functions agree (same chapter,
 // Prop. 4). So:

@@ -1,5 +1,5 @@
-// Matrix Schubert ideals against "Gröbner geometry of Schubert polynomials" (A. Knutson,
-// E. Miller, Ann. of Math. 161 (2005)): for every w in S_4 and S_5,
+// Matrix Schubert ideals against "Gröbner geometry of Schubert polynomials" (Ann. of Math. 161
+// (2005)): for every w in S_4 and S_5,
 //   Thm B: the essential minors are a Gröbner basis for an antidiagonal order, the initial ideal
 //          is squarefree and its minimal primes are (z[i,j] : (i,j) a cross of P) for the reduced
 //          pipe dreams P of w (so the facets of its complex are the complements of pipe dreams);
