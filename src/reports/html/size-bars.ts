@@ -24,7 +24,10 @@ const CELL = 7,
   GAP = 1,
   HEIGHT = 14;
 
-function cellRect(c: SizeCell, x: number): string {
+/** The widest a bar may be, in pixels: long runs of sizes get narrower cells. */
+const MAX_WIDTH = 240;
+
+function cellRect(c: SizeCell, x: number, CELL: number): string {
   const dashed = c.state === 'sampled' || c.state === 'sample-failed' ? ' stroke="#8a5a00" stroke-dasharray="2 2"' : '';
   const tip = `${c.label}: ${STATE_WORDS[c.state]}${c.cases ? `, ${formatCount(c.cases)} cases` : ''}`;
   return `<rect x="${x}" y="0" width="${CELL}" height="${HEIGHT}" fill="${STATE_COLOURS[c.state]}"${dashed}><title>${xmlEscape(tip)}</title></rect>`;
@@ -32,8 +35,9 @@ function cellRect(c: SizeCell, x: number): string {
 
 export function sizeBar(cells: readonly SizeCell[]): string {
   if (cells.length === 0) return '<span class="unknown">nothing recorded</span>';
-  const w = cells.length * (CELL + GAP);
-  const parts = cells.map((c, k) => cellRect(c, k * (CELL + GAP)));
+  const cell = Math.max(1, Math.min(7, Math.floor(MAX_WIDTH / cells.length) - GAP));
+  const w = cells.length * (cell + GAP);
+  const parts = cells.map((c, k) => cellRect(c, k * (cell + GAP), cell));
   const first = cells[0].label,
     last = cells[cells.length - 1].label;
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${HEIGHT}" viewBox="0 0 ${w} ${HEIGHT}" role="img" aria-label="${xmlEscape(`sizes ${first} to ${last}`)}">${parts.join('')}</svg>`;

@@ -20,6 +20,20 @@ export function permutationScene(a: readonly number[]): Scene {
   return b.build(`w = ${a.join(' ')}: a dot at (i, w(i)), i across, w(i) up`);
 }
 
+/** A signed permutation in its window w(1), ..., w(n): a dot at (i, |w(i)|), open where w(i) < 0. */
+export function signedPermutationScene(a: readonly number[]): Scene {
+  const n = a.length;
+  const b = new SceneBuilder();
+  gridLines(b, n, n);
+  for (let i = 1; i <= n; i++) {
+    const v = a[i - 1];
+    b.add({ t: 'dot', x: i - 0.5, y: n - Math.abs(v) + 0.5, r: 0.28, fill: v < 0 ? 'negative' : 'accent', open: v < 0 });
+    b.add({ t: 'text', x: i - 0.5, y: n + 0.55, s: String(i), small: true });
+    b.add({ t: 'text', x: -0.45, y: n - i + 0.5, s: String(i), small: true });
+  }
+  return b.build(`w = ${a.join(' ')}: a dot at (i, |w(i)|), open where w(i) is negative`);
+}
+
 /** Entries 1 as filled dots and -1 as open ones; rows top to bottom. */
 export function asmScene(rows: readonly (readonly number[])[]): Scene {
   const n = rows.length;

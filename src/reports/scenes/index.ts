@@ -9,10 +9,10 @@ import { pipeExits } from '../pictures/pipeDream.js';
 import { MAX_SIDE } from '../pictures/index.js';
 import { matchingScene, setPartitionScene } from './arcs.js';
 import { compositionScene, partitionScene, tableauScene } from './diagrams.js';
-import { asmScene, matrixScene, permutationScene, pipeDreamScene } from './grids.js';
-import { dyckPathScene } from './paths.js';
+import { asmScene, matrixScene, permutationScene, pipeDreamScene, signedPermutationScene } from './grids.js';
+import { dyckPathScene, motzkinPathScene } from './paths.js';
 import type { Scene } from './scene.js';
-import { subsetScene, wiringScene, wordScene } from './strips.js';
+import { parkingFunctionScene, subsetScene, wiringScene, wordScene } from './strips.js';
 
 export type { Scene, Item, Tone } from './scene.js';
 
@@ -39,6 +39,9 @@ export const SCENE_KINDS = [
   'asm',
   'pipeDream',
   'matrix',
+  'signedPermutation',
+  'motzkin',
+  'parkingFunction',
 ] as const;
 
 export function sceneOf(v: Value, hint: SceneHint = {}): Scene | null {
@@ -73,6 +76,12 @@ export function sceneOf(v: Value, hint: SceneHint = {}): Scene | null {
       const n = Math.max(1, typeof o.n === 'number' ? o.n : 0, ...o.crosses.map(([i, j]: [number, number]) => i + j));
       return pipeDreamScene(o.crosses, n, pipeExits(o.crosses, n));
     }
+    case 'signedPermutation':
+      return signedPermutationScene(o.a);
+    case 'motzkin':
+      return motzkinPathScene(o.steps);
+    case 'parkingFunction':
+      return parkingFunctionScene(o.values);
     case 'matrix':
       return matrixScene(
         o.rows,
@@ -109,6 +118,12 @@ function sideOf(kind: string, o: Fields): number | null {
       return Math.max(0, ...o.crosses.map(([i, j]: [number, number]) => i + j));
     case 'matrix':
       return Math.max(o.rows, o.cols);
+    case 'signedPermutation':
+      return o.a.length;
+    case 'motzkin':
+      return o.steps.length;
+    case 'parkingFunction':
+      return o.values.length;
     default:
       return null;
   }

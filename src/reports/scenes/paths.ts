@@ -18,3 +18,8 @@ export function dyckPathScene(steps: readonly number[]): Scene {
   const word = steps.map((s) => (s > 0 ? 'U' : 'D')).join('');
   return latticePathScene(steps, `Dyck path ${word}`);
 }
+
+export function motzkinPathScene(steps: readonly number[]): Scene {
+  const word = steps.map((s) => (s > 0 ? 'U' : s < 0 ? 'D' : 'F')).join('');
+  return latticePathScene(steps, `Motzkin path ${word}`);
+}

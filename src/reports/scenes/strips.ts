@@ -11,6 +11,17 @@ export function wordScene(letters: readonly number[]): Scene {
   return b.build(`word ${letters.join(' ')}`);
 }
 
+/** A parking function: car i prefers spot a_i; one box per car, its preferred spot inside. */
+export function parkingFunctionScene(values: readonly number[]): Scene {
+  const b = new SceneBuilder();
+  values.forEach((v, k) => {
+    b.add({ t: 'rect', x: k, y: 0, w: 1, h: 1, stroke: 'ink' });
+    b.add({ t: 'text', x: k + 0.5, y: 0.5, s: String(v) });
+    b.add({ t: 'text', x: k + 0.5, y: 1.5, s: String(k + 1), small: true, tone: 'muted' });
+  });
+  return b.build(`parking function (${values.join(', ')}): car i (below) prefers spot a_i (in its box)`);
+}
+
 /** The points 1..n, members filled. */
 export function subsetScene(elems: readonly number[], n: number): Scene {
   const b = new SceneBuilder();

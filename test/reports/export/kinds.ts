@@ -21,6 +21,9 @@ export const KIND_EXAMPLES: Array<{ name: string; text: string; hint?: SceneHint
   { name: 'asm', text: 'asm([[0, 1, 0], [1, -1, 1], [0, 1, 0]])' },
   { name: 'pipeDream', text: 'pipeDream([[1, 2], [2, 1]])' },
   { name: 'matrix', text: 'matrix([[1, -2], [3/4, 0]])' },
+  { name: 'signedPermutation', text: 'signedPermutation([2, -1, 3])' },
+  { name: 'motzkin', text: 'motzkinPath("UFDUD")' },
+  { name: 'parkingFunction', text: 'parkingFunction([1, 1, 3, 2])' },
 ];
 
 export function exampleValue(text: string): Value {

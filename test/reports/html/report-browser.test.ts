@@ -68,7 +68,7 @@ describe.skipIf(!haveBrowser)('the report page in a real browser', () => {
       expect(await tab.$$eval('tr.conjecture td.outcome.disagrees', (tds) => tds.length)).toBe(0);
 
       const sections: string[] = await tab.$$eval('section.counterexample', (ss) => ss.map((s) => s.getAttribute('data-id') ?? ''));
-      expect(sections.sort()).toEqual(nb.counterexamples.map((f) => f.replace(/\.yaml$/, '')));
+      expect(sections.sort()).toEqual(nb.counterexamples.map((f) => f.replace(/\.yaml$/, '')).sort());
       for (const id of sections) {
         const svgs = await tab.$$eval(`section.counterexample[data-id="${id}"] figure svg`, (s) => s.length);
         if (hasObjectBinding(join(nb.dir, 'counterexamples', `${id}.yaml`))) expect(svgs, id).toBeGreaterThan(0);
