@@ -101,7 +101,7 @@ describe('the command line on random files', () => {
         const dir = tempDir('hunch-fuzz-');
         const ledger = join(dir, 'hunch-ledger.jsonl');
         writeFileSync(join(dir, 'case.yaml'), text);
-        const r = runCli(['check', 'case.yaml', '--budget', '1s', '--workers', '1', '--count', '3'], { cwd: dir, timeout: 20_000 });
+        const r = runCli(['check', 'case.yaml', '--budget', '1s', '--workers', '1', '--count', '3'], { cwd: dir, timeout: 90_000 });
         const show = `\n--- file ---\n${text}\n--- stderr ---\n${r.stderr}\n--- stdout ---\n${r.stdout.slice(0, 2000)}`;
         expect([0, 1, 2], show).toContain(r.code);
         expect(r.stderr + r.stdout, show).not.toMatch(/internal error|\n\s+at .*:\d+:\d+\)?\n|Maximum call stack|\[object /);
@@ -115,5 +115,5 @@ describe('the command line on random files', () => {
       { seed: 99, numRuns: 30 },
     );
     expect(twos).toBeGreaterThan(5);
-  }, 120_000);
+  }, 900_000);
 });
