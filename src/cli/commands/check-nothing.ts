@@ -66,7 +66,14 @@ export function refuseNothingToCheck(compiled: CompiledConjecture[], req: RunReq
         b.name,
       );
     if (!req.exhaustive) continue;
-    const { count, ranges } = sampleSettingsOf(cc, { count: req.count ?? undefined, sampleRanges: overrides(req.sampleRanges) });
+    let sampling: ReturnType<typeof sampleSettingsOf>;
+    try {
+      sampling = sampleSettingsOf(cc, { count: req.count ?? undefined, sampleRanges: overrides(req.sampleRanges) });
+    } catch (e) {
+      if (e instanceof EvalError || e instanceof InputError) continue; // reported by the run with its position
+      throw e;
+    }
+    const { count, ranges } = sampling;
     if (count > 0 && ranges.size > 0) continue;
     const checked = o ? range(o[0], o[1]) : sizes;
     let anyCase = false;
