@@ -10,7 +10,7 @@ import { ROOT, runCli, tempDir } from './run-cli.js';
 test('schubert-zero-one-per-size: the witness of all(...) is 13254, drawn', () => {
   const dir = tempDir();
   copyFileSync(join(ROOT, 'conjectures', 'schubert-and-tableaux.yaml'), join(dir, 'c.yaml'));
-  const args = ['check', 'c.yaml', '--id', 'schubert-zero-one-per-size', '--no-ledger'];
+  const args = ['check', 'c.yaml', '--id', 'schubert-zero-one-per-size', '--no-ledger', '--counterexamples'];
   const human = runCli(args, { cwd: dir });
   expect(human.code, human.stderr).toBe(0);
   expect(human.stdout).toContain('witnesses (what decided the failure):');
