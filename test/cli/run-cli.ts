@@ -4,6 +4,7 @@ import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
+import { afterAll } from 'vitest';
 
 export const ROOT = resolve(__dirname, '../..');
 export const BIN = join(ROOT, 'bin', 'hunch');
@@ -18,7 +19,11 @@ export interface CliResult {
 // tests, never in the real home; it is removed when the test process exits.
 export const TEST_CONFIG_DIR = mkdtempSync(join(tmpdir(), 'hunch-config-'));
 process.env.HUNCH_CONFIG_DIR = TEST_CONFIG_DIR; // in-process code of the tests too
-process.on('exit', () => rmSync(TEST_CONFIG_DIR, { recursive: true, force: true }));
+const removeConfigDir = () => rmSync(TEST_CONFIG_DIR, { recursive: true, force: true });
+// Each test file evaluates this module anew; its folder goes when the file ends (worker threads
+// are not always given an exit event).
+afterAll(removeConfigDir);
+process.on('exit', removeConfigDir);
 
 export function runCli(args: string[], opts: { cwd?: string; env?: Record<string, string>; timeout?: number } = {}): CliResult {
   const r = spawnSync(process.execPath, [BIN, ...args], {
